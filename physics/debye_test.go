@@ -1,0 +1,113 @@
+package physics_test
+
+import (
+	"fmt"
+	"math"
+	"testing"
+
+	"colloidtriage/physics"
+)
+
+// debyeLengthOfSalt is the Debye length in nm of salt at mM (mol/m^3) in
+// water at celsius, through ParseSalt, IonicStrength and WaterPermittivity.
+func debyeLengthOfSalt(t *testing.T, formula string, mM, celsius float64) float64 {
+	t.Helper()
+	s, err := physics.ParseSalt(formula)
+	if err != nil {
+		t.Fatalf("ParseSalt(%q): %v", formula, err)
+	}
+	ions := s.Ions(mM)
+	tk := physics.Kelvin(celsius)
+	return physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk) * 1e9
+}
+
+func TestDebyeLengthSalts(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		formula         string
+		mM, wantNm, tol float64
+	}{
+		// REFERENCES.md, water at 25 °C [calc], three significant figures.
+		{"NaCl", 1, 9.61, 1e-3},
+		{"NaCl", 10, 3.04, 1e-3},
+		{"NaCl", 100, 0.961, 1e-3},
+		{"NaCl", 150, 0.785, 1e-3},
+		{"CaCl2", 1, 5.55, 1e-3},
+		{"CaCl2", 10, 1.755, 1e-3},
+		{"MgSO4", 1, 4.81, 2e-3},
+		{"MgSO4", 10, 1.52, 1e-3},
+		// testdata/reference/basics.py with scipy CODATA 2018 constants and
+		// the Malmberg-Maryott permittivity [calc].
+		{"NaCl", 1, 9.60777, 2e-6},
+		{"CaCl2", 1, 5.54705, 2e-6},
+		{"MgSO4", 1, 4.80389, 2e-6},
+		// Shaw, Introduction to Colloid and Surface Chemistry: kappa =
+		// 3.29e9 sqrt(c z^2) m^-1, c in mol/L, 25 °C [pub]: 1 mM 1:1 ->
+		// 1/kappa = 9.612 nm; 1 mM 2:2 -> 4.806 nm.
+		{"NaCl", 1, 1e9 / (3.29e9 * math.Sqrt(1e-3)), 3e-3},
+		{"MgSO4", 1, 1e9 / (3.29e9 * math.Sqrt(4e-3)), 3e-3},
+		// Israelachvili, Intermolecular and Surface Forces, 3rd ed., ch. 14:
+		// 1/kappa = 0.304/sqrt(I) nm for 1:1 at 25 °C [memory].
+		{"NaCl", 10, 0.304 / math.Sqrt(0.01), 2e-3},
+	}
+	for _, c := range cases {
+		got := debyeLengthOfSalt(t, c.formula, c.mM, 25)
+		if e := basicsRelErr(got, c.wantNm); e > c.tol {
+			t.Errorf("Debye length of %v mM %s = %.5f nm, want %.5g (rel err %.1e)", c.mM, c.formula, got, c.wantNm, e)
+		}
+	}
+}
+
+func TestDebyeLengthPureWater(t *testing.T) {
+	t.Parallel()
+	// REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc].
+	ions := physics.IonsFromPH(7)
+	tk := physics.Kelvin(25)
+	got := physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk) * 1e9
+	if e := basicsRelErr(got, 961); e > 1e-3 {
+		t.Errorf("Debye length of pure water = %.2f nm, want 961 (rel err %.1e)", got, e)
+	}
+	if got := physics.DebyeLength(0, 2, 298.15); !math.IsInf(got, 1) {
+		t.Errorf("DebyeLength without ions = %v, want +Inf", got)
+	}
+}
+
+func TestDebyePrefactorTemperature(t *testing.T) {
+	t.Parallel()
+	// 1:1 prefactor 1/kappa sqrt(I / (mol/L)), nm.
+	cases := []struct {
+		celsius, wantNm, tol float64
+	}{
+		// REFERENCES.md [calc]. Those three values come out 0.03-0.09 %
+		// above the Malmberg-Maryott permittivity used here, consistent
+		// with a slightly higher permittivity (IAPWS R8-97 gives about
+		// 87.9 at 0 °C against 87.74 [memory]), so the tolerance is 1e-3.
+		{0, 0.3081, 1e-3},
+		{20, 0.3049, 1e-3},
+		{37, 0.3016, 1e-3},
+		// testdata/reference/basics.py with Malmberg-Maryott [calc].
+		{0, 0.30783, 2e-5},
+		{20, 0.30471, 2e-5},
+		{25, 0.30382, 2e-5},
+		{37, 0.30155, 2e-5},
+	}
+	for _, c := range cases {
+		got := debyeLengthOfSalt(t, "NaCl", 1000, c.celsius)
+		if e := basicsRelErr(got, c.wantNm); e > c.tol {
+			t.Errorf("1:1 prefactor at %v °C = %.5f nm, want %.5g (rel err %.1e)", c.celsius, got, c.wantNm, e)
+		}
+	}
+}
+
+// The screening length of 10 mM NaCl in water at 25 °C.
+func ExampleDebyeLength() {
+	salt, err := physics.ParseSalt("NaCl")
+	if err != nil {
+		panic(err)
+	}
+	ions := salt.Ions(10) // 10 mM = 10 mol/m^3
+	tk := physics.Kelvin(25)
+	l := physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
+	fmt.Printf("%.3g nm\n", l*1e9)
+	// Output: 3.04 nm
+}
