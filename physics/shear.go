@@ -1,0 +1,48 @@
+package physics
+
+import "math"
+
+// HydrodynamicShearForceEnergy returns the work (J) a simple shear flow can
+// do on a pair of spheres of radius a (m) across the range of the energy
+// barrier, barrierWidth (m): F w with F = 6 pi eta a^2 G the order of the
+// hydrodynamic force pressing a doublet together in shear of rate G (1/s)
+// in a liquid of viscosity eta (Pa s). Compare it with the barrier height:
+// shear aggregation becomes likely as F w approaches the barrier. It is an
+// order-of-magnitude estimate (a numerical factor of order unity that
+// depends on the doublet's orientation is left out). It panics on negative,
+// infinite or NaN arguments.
+//
+// References: van de Ven & Mason, Colloid Polym. Sci. 255, 468 (1977)
+// (orthokinetic doublet formation of spheres); Russel, Saville &
+// Schowalter, Colloidal Dispersions (1989).
+func HydrodynamicShearForceEnergy(viscosity, shearRate, radius, barrierWidth float64) float64 {
+	checkShearArgs(viscosity, shearRate, radius)
+	if !(barrierWidth >= 0) || math.IsInf(barrierWidth, 1) {
+		panic("physics: HydrodynamicShearForceEnergy needs finite barrierWidth >= 0")
+	}
+	return 6 * math.Pi * viscosity * radius * radius * shearRate * barrierWidth
+}
+
+// ShearPeclet returns the shear Péclet number Pe = 6 pi eta a^3 G/(kB T),
+// the ratio of the shear rate G (1/s) to the rotary-diffusion rate of a
+// sphere of radius a (m) in a liquid of viscosity eta (Pa s) at tempK (K):
+// Pe >> 1 means shear, not Brownian motion, brings particles together
+// (orthokinetic aggregation). It panics on negative, infinite or NaN
+// arguments and non-positive tempK.
+//
+// Reference: Russel, Saville & Schowalter, Colloidal Dispersions (1989)
+// (Péclet number of sheared suspensions).
+func ShearPeclet(viscosity, shearRate, radius, tempK float64) float64 {
+	checkShearArgs(viscosity, shearRate, radius)
+	if !(tempK > 0) {
+		panic("physics: ShearPeclet needs tempK > 0")
+	}
+	return 6 * math.Pi * viscosity * radius * radius * radius * shearRate / (Boltzmann * tempK)
+}
+
+func checkShearArgs(viscosity, shearRate, radius float64) {
+	if !(viscosity >= 0) || !(shearRate >= 0) || !(radius >= 0) ||
+		math.IsInf(viscosity, 1) || math.IsInf(shearRate, 1) || math.IsInf(radius, 1) {
+		panic("physics: shear needs finite non-negative viscosity, shear rate and radius")
+	}
+}
