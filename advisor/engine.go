@@ -1,0 +1,167 @@
+package advisor
+
+import (
+	"math"
+	"sort"
+	"strings"
+)
+
+// EngineVersion identifies this build of the engine in every report.
+const EngineVersion = "0.1.0"
+
+// Engine triages samples with one compiled rule set and one library. It is
+// safe for concurrent use: a triage reads the engine and writes only its own
+// evaluation.
+type Engine struct {
+	rules *RuleSet
+	lib   *Library
+}
+
+// NewEngine builds an engine from a compiled rule set and a loaded library.
+func NewEngine(rules *RuleSet, lib *Library) *Engine {
+	return &Engine{rules: rules, lib: lib}
+}
+
+// RuleSet returns the engine's compiled rule set.
+func (e *Engine) RuleSet() *RuleSet { return e.rules }
+
+// Library returns the engine's materials and liquids library.
+func (e *Engine) Library() *Library { return e.lib }
+
+// Triage computes the scales of a validated sample, ranks the causes of its
+// symptom and solves the remedies' targets. It returns an *InputError when
+// the sample is physically inconsistent.
+func (e *Engine) Triage(s *Sample) (*Report, error) {
+	ev, err := e.evaluate(s)
+	if err != nil {
+		return nil, err
+	}
+	causes := e.rank(ev)
+	return &Report{
+		SampleID:    s.SampleID,
+		Symptom:     s.Symptom,
+		Versions:    Versions{Engine: EngineVersion, Rules: e.rules.Hash},
+		Scales:      ev.scales,
+		Causes:      causes,
+		Cautions:    cautions(ev),
+		Assumptions: ev.n.list,
+		Models:      ev.models,
+		Inputs:      *s,
+	}, nil
+}
+
+// Scales computes only the physics of a sample, without rules.
+func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]string, error) {
+	ev, err := e.evaluate(s)
+	if err != nil {
+		return nil, nil, nil, err
+	}
+	return ev.scales, ev.n.list, ev.models, nil
+}
+
+func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
+	ev := &evaluation{n: &notes{}, scales: map[string]Scale{}, models: map[string]string{}, f: factTemplate()}
+	c, err := e.resolve(s, ev.n)
+	if err != nil {
+		return nil, err
+	}
+	ev.c = c
+	ev.inputFacts()
+	ev.computeGravity()
+	ev.computeInteraction()
+	ev.computeBeyondDLVO()
+	return ev, nil
+}
+
+type firing struct {
+	rule rule
+	text string
+}
+
+type causeScore struct {
+	id    string
+	cf    float64
+	fired []firing
+	order int
+}
+
+// rank runs the rules of the sample's symptom, combines their certainty
+// factors per cause, runs the after_causes rules with the top score known,
+// and returns the causes with a positive score, best first.
+func (e *Engine) rank(ev *evaluation) []Cause {
+	scores := map[string]*causeScore{}
+	run := func(after bool) {
+		for _, r := range e.rules.rules {
+			if r.AfterCauses != after || !r.appliesTo(ev.c.symptom) {
+				continue
+			}
+			out, err := runRule(r, ev.f)
+			if err != nil || !out {
+				continue
+			}
+			cs := scores[r.Cause]
+			if cs == nil {
+				cs = &causeScore{id: r.Cause, order: len(scores)}
+				scores[r.Cause] = cs
+			}
+			cs.cf = combineCertainty(cs.cf, r.Certainty)
+			cs.fired = append(cs.fired, firing{rule: r, text: r.explain(ev.f)})
+		}
+	}
+	run(false)
+	top := 0.0
+	for _, cs := range scores {
+		top = math.Max(top, cs.cf)
+	}
+	ev.f[topCauseScore] = top
+	run(true)
+
+	list := make([]*causeScore, 0, len(scores))
+	for _, cs := range scores {
+		if cs.cf > 0 {
+			list = append(list, cs)
+		}
+	}
+	sort.Slice(list, func(i, j int) bool {
+		if list[i].cf != list[j].cf {
+			return list[i].cf > list[j].cf
+		}
+		return list[i].id < list[j].id
+	})
+	out := make([]Cause, len(list))
+	for i, cs := range list {
+		out[i] = e.cause(ev, cs, i+1)
+	}
+	return out
+}
+
+func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
+	entry, _ := find(e.rules.Catalog.Causes, cs.id)
+	c := Cause{ID: cs.id, Rank: rank, Score: math.Round(cs.cf*1000) / 1000, Title: entry.Title,
+		Evidence: []Evidence{}, Remedies: []Remedy{}}
+	var texts []string
+	seenEvidence, seenRemedy := map[string]bool{}, map[string]bool{}
+	for _, fr := range cs.fired {
+		texts = append(texts, fr.text)
+		for _, name := range fr.rule.Evidence {
+			v := ev.f.number(name)
+			if seenEvidence[name] || math.IsNaN(v) || math.IsInf(v, 0) {
+				continue
+			}
+			seenEvidence[name] = true
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: v, Unit: factIndex[name].Unit, Test: fr.rule.When})
+		}
+		if fr.rule.Certainty < 0 {
+			continue
+		}
+		for _, id := range fr.rule.Remedies {
+			if seenRemedy[id] {
+				continue
+			}
+			seenRemedy[id] = true
+			c.Remedies = append(c.Remedies, e.remedy(ev, id))
+		}
+	}
+	c.Explanation = strings.Join(texts, " ")
+	return c
+}

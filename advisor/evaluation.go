@@ -1,0 +1,108 @@
+package advisor
+
+import (
+	"math"
+
+	"colloidtriage/physics"
+)
+
+// evaluation is the working state of one triage: the resolved conditions,
+// the facts the rules see, the scales reported, and the notes made.
+type evaluation struct {
+	c      *conditions
+	f      facts
+	scales map[string]Scale
+	n      *notes
+	models map[string]string
+
+	pair    physics.Pair // the interaction of two median particles, when evaluable
+	hasPair bool
+	vdwOnly physics.Pair // the same pair without double layer, for steric checks
+}
+
+var scaleIndex = func() map[string]ScaleSpec {
+	m := map[string]ScaleSpec{}
+	for _, s := range scaleSpecs {
+		m[s.Name] = s
+	}
+	return m
+}()
+
+// set records a scale in its reporting unit. The fact always takes the value
+// (an unbounded value is +Inf for the rules); the report takes it only when
+// finite and says so otherwise.
+func (ev *evaluation) set(name string, v float64, basis string) {
+	spec, ok := scaleIndex[name]
+	if !ok {
+		panic("advisor: undeclared scale " + name)
+	}
+	ev.f[name] = v
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		if !math.IsNaN(v) {
+			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)
+		}
+		return
+	}
+	ev.scales[name] = Scale{Value: roundSignificant(v, 6), Unit: spec.Unit, Basis: basis}
+}
+
+// roundSignificant keeps n significant digits so that reports do not pretend
+// a precision the models do not have, and stay byte-identical across runs.
+func roundSignificant(v float64, n int) float64 {
+	if v == 0 {
+		return 0
+	}
+	p := math.Pow(10, float64(n)-math.Ceil(math.Log10(math.Abs(v))))
+	r := math.Round(v*p) / p
+	if math.IsInf(r, 0) || math.IsNaN(r) {
+		return v
+	}
+	return r
+}
+
+func (ev *evaluation) model(name, choice string) {
+	ev.models[name] = choice
+}
+
+func (ev *evaluation) inputFacts() {
+	c, f := ev.c, ev.f
+	f["symptom"] = c.symptom
+	f["phase"] = c.phase
+	f["volume_fraction"] = c.phi
+	f["shelf_life_days"] = c.shelfLife / day
+	f["container_height_mm"] = c.height * 1e3
+	f["max_clear_layer_mm"] = c.maxClear * 1e3
+	f["storage_temperature_c"] = c.storageTempK - physics.CelsiusZero
+	f["observed_clear_layer_mm"] = c.observed.clearLayer * 1e3
+	f["age_days"] = c.observed.age / day
+	f["sediment_redisperses"] = c.observed.redisperses
+	f["viscosity_change_percent"] = c.observed.viscosityChange
+	f["size_growth_percent"] = c.observed.sizeGrowth
+	f["zeta_measured"] = c.zetaSource == "measured" || c.zetaSource == "mobility"
+	f["has_electrolyte"] = c.ionicStrength > 0
+	f["ph"] = c.ph
+	f["isoelectric_ph"] = c.iep
+	f["has_steric_layer"] = c.steric.present
+	f["steric_thickness_nm"] = nanOr(c.steric.present, c.steric.thickness*1e9)
+	if c.steric.hasQuality {
+		f["solvent_quality"] = c.steric.quality.String()
+	}
+	f["cloud_point_c"] = c.steric.cloudK - physics.CelsiusZero
+	f["free_polymer_g_L"] = nanOr(c.freePolymer.present, c.freePolymer.concentration)
+	f["adsorbing_coverage"] = nanOr(c.adsorbing.present, c.adsorbing.coverage)
+	f["adsorbing_molar_mass_kg_mol"] = nanOr(c.adsorbing.present, c.adsorbing.molarMass)
+	f["shear_rate_per_s"] = c.shear
+	f["yield_stress_pa"] = c.yieldStress
+	f["min_barrier_kT"] = c.criteria.minBarrierKT
+	f["half_life_to_shelf_life"] = c.criteria.halfLifeRatio
+	f["has_size_distribution"] = c.classes != nil
+	f["max_relative_viscosity"] = c.criteria.maxRelViscosity
+	f["max_steric_contact_kT"] = c.criteria.maxStericKT
+}
+
+func nanOr(ok bool, v float64) float64 {
+	if !ok {
+		return math.NaN()
+	}
+	return v
+}

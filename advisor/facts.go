@@ -1,0 +1,123 @@
+package advisor
+
+import (
+	"maps"
+	"math"
+	"strconv"
+)
+
+type factKind int
+
+const (
+	numberFact factKind = iota
+	textFact
+	flagFact
+)
+
+// factSpec declares one name the rules may use. Every scale is a numeric fact
+// in its reporting unit; inputFacts add what the sample states directly.
+type factSpec struct {
+	Name    string
+	Kind    factKind
+	Unit    string
+	Meaning string
+}
+
+// topCauseScore is visible only to rules marked after_causes: the highest
+// score of any cause after all other rules ran.
+const topCauseScore = "top_cause_score"
+
+var inputFacts = []factSpec{
+	{"symptom", textFact, "", "the reported symptom"},
+	{"phase", textFact, "", "solid, liquid (droplets) or gas (bubbles)"},
+	{"volume_fraction", numberFact, "1", "volume fraction of the dispersed phase"},
+	{"shelf_life_days", numberFact, "d", "required shelf life"},
+	{"container_height_mm", numberFact, "mm", "fill height of the container"},
+	{"max_clear_layer_mm", numberFact, "mm", "acceptance criterion for the clear or cream layer"},
+	{"storage_temperature_c", numberFact, "degC", "temperature at which stability is judged"},
+	{"observed_clear_layer_mm", numberFact, "mm", "clear layer reported in the complaint"},
+	{"age_days", numberFact, "d", "age of the sample when observed"},
+	{"sediment_redisperses", textFact, "", `"yes", "no" or "" when not observed`},
+	{"viscosity_change_percent", numberFact, "%", "observed change of viscosity"},
+	{"size_growth_percent", numberFact, "%", "observed growth of the median size"},
+	{"zeta_measured", flagFact, "", "zeta potential or mobility was measured"},
+	{"has_electrolyte", flagFact, "", "the medium holds dissolved ions"},
+	{"ph", numberFact, "pH", "pH of the medium"},
+	{"isoelectric_ph", numberFact, "pH", "isoelectric point of the particles"},
+	{"has_steric_layer", flagFact, "", "an adsorbed steric layer is declared"},
+	{"steric_thickness_nm", numberFact, "nm", "declared steric layer thickness"},
+	{"solvent_quality", textFact, "", "good, theta, poor or \"\" when unknown"},
+	{"cloud_point_c", numberFact, "degC", "cloud point of the stabiliser"},
+	{"free_polymer_g_L", numberFact, "g/L", "free non-adsorbing polymer"},
+	{"adsorbing_coverage", numberFact, "1", "surface coverage of the adsorbing polymer"},
+	{"adsorbing_molar_mass_kg_mol", numberFact, "kg/mol", "molar mass of the adsorbing polymer"},
+	{"shear_rate_per_s", numberFact, "1/s", "shear rate in processing or transport"},
+	{"yield_stress_pa", numberFact, "Pa", "yield stress of the continuous phase"},
+	{"min_barrier_kT", numberFact, "kT", "acceptance criterion: smallest energy barrier"},
+	{"half_life_to_shelf_life", numberFact, "1", "acceptance criterion: aggregation half-life over shelf life"},
+	{"has_size_distribution", flagFact, "", "a size span or distribution was given"},
+	{"max_relative_viscosity", numberFact, "1", "acceptance criterion: largest relative viscosity"},
+	{"max_steric_contact_kT", numberFact, "kT", "acceptance criterion: deepest van der Waals energy at steric contact"},
+}
+
+var factIndex = func() map[string]factSpec {
+	m := map[string]factSpec{}
+	for _, f := range inputFacts {
+		m[f.Name] = f
+	}
+	for _, s := range scaleSpecs {
+		m[s.Name] = factSpec{s.Name, numberFact, s.Unit, s.Meaning}
+	}
+	return m
+}()
+
+var factDefaults = func() map[string]any {
+	m := make(map[string]any, len(factIndex))
+	for name, f := range factIndex {
+		switch f.Kind {
+		case numberFact:
+			m[name] = math.NaN()
+		case textFact:
+			m[name] = ""
+		case flagFact:
+			m[name] = false
+		}
+	}
+	return m
+}()
+
+// facts is the environment of the rules for one sample. Numbers not computed
+// for this sample are NaN, so every comparison with them is false.
+type facts map[string]any
+
+func factTemplate() facts { return maps.Clone(factDefaults) }
+
+func (f facts) number(name string) float64 { return f[name].(float64) }
+
+// format renders a fact for an explanation: three significant digits and its unit.
+func (f facts) format(name string) string {
+	spec := factIndex[name]
+	switch v := f[name].(type) {
+	case float64:
+		return formatQuantity(v, spec.Unit)
+	case bool:
+		return strconv.FormatBool(v)
+	case string:
+		return v
+	}
+	return ""
+}
+
+func formatQuantity(v float64, unit string) string {
+	switch {
+	case math.IsNaN(v):
+		return "unknown"
+	case math.IsInf(v, 0):
+		return "unbounded"
+	}
+	s := strconv.FormatFloat(v, 'g', 3, 64)
+	if unit == "" || unit == "1" {
+		return s
+	}
+	return s + " " + unit
+}

@@ -1,0 +1,129 @@
+package advisor
+
+import (
+	"math"
+
+	"colloidtriage/physics"
+)
+
+// computeInteraction reports screening, surface charge, the DLVO energy
+// curve's barrier and secondary minimum, and the aggregation kinetics of two
+// median particles, when a surface potential is known.
+func (ev *evaluation) computeInteraction() {
+	c := ev.c
+	T := c.storageTempK
+	kT := physics.Boltzmann * T
+	kappa := physics.DebyeKappa(c.ionicStrength, c.liquid.epsR, T)
+	ev.set("ionic_strength", c.ionicStrength, "1/2 sum c z^2 over the stated ions")
+	ev.set("debye_length", 1/kappa*1e9, "Debye-Hueckel: kappa^2 = 2 NA e^2 I/(eps0 epsr kT)")
+	if kappa > 0 {
+		ev.set("kappa_a", kappa*c.radius, "median radius over Debye length")
+	}
+	ev.set("counter_ion_valence", float64(c.counterValence), "largest valence of the ions opposite in sign to the surface")
+	ev.set("hamaker_constant", c.hamaker*1e21, "request, library or Tabor-Winterton estimate (see assumptions)")
+	if !math.IsNaN(c.iep) && !math.IsNaN(c.ph) {
+		ev.set("ph_distance_from_iep", math.Abs(c.ph-c.iep), "|pH - isoelectric pH|")
+	}
+	if !math.IsNaN(c.henry) {
+		ev.set("henry_function", c.henry, "Ohshima (1994) closed form of Henry's function")
+	}
+
+	ev.pair = physics.Pair{Radius: c.radius, Hamaker: c.hamaker, Kappa: kappa, EpsR: c.liquid.epsR, TempK: T,
+		Valence: max(c.counterValence, 1)}
+	ev.chooseModels()
+	ev.vdwOnly = ev.pair
+	ev.vdwOnly.Potential, ev.vdwOnly.Kappa = 0, 0
+	if math.IsNaN(c.zeta) {
+		return
+	}
+	ev.set("zeta_potential", c.zeta*1e3, "zeta potential ("+c.zetaSource+"), used as the diffuse-layer potential")
+	ev.pair.Potential = c.zeta
+	ev.addLayers()
+	ev.hasPair = true
+
+	b := ev.pair.Barrier()
+	if b.Found {
+		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (gonum search)")
+		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
+	} else {
+		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
+	}
+	if m := ev.pair.SecondaryMinimum(); m.Found {
+		ev.set("secondary_minimum", m.Energy/kT, "minimum of the total energy beyond the barrier")
+		ev.set("secondary_minimum_position", m.Separation*1e9, "separation at the secondary minimum")
+	} else {
+		ev.f["secondary_minimum"] = 0.0
+	}
+	ev.kinetics()
+	ev.criticalCoagulation()
+}
+
+func (ev *evaluation) chooseModels() {
+	m := Models{VanDerWaals: "hamaker_exact", DoubleLayer: "linear_superposition"}
+	if ev.c.models != nil {
+		if ev.c.models.VanDerWaals != "" {
+			m.VanDerWaals = ev.c.models.VanDerWaals
+		}
+		if ev.c.models.DoubleLayer != "" {
+			m.DoubleLayer = ev.c.models.DoubleLayer
+		}
+	}
+	ev.pair.Retarded = m.VanDerWaals == "retarded_gregory"
+	ev.pair.ConstantPotential = m.DoubleLayer == "constant_potential"
+	vdw := map[string]string{
+		"hamaker_exact":    "Hamaker (1937) exact sphere-sphere expression, non-retarded",
+		"retarded_gregory": "Gregory (1981) retarded sphere-sphere expression, lambda = 100 nm",
+	}[m.VanDerWaals]
+	edl := map[string]string{
+		"linear_superposition": "linear superposition, equal spheres, Derjaguin limit (Bell, Levine & McCartney 1970)",
+		"constant_potential":   "constant potential, Hogg, Healy & Fuerstenau (1966)",
+	}[m.DoubleLayer]
+	ev.model("van_der_waals", vdw)
+	ev.model("double_layer", edl)
+	ev.model("stability_ratio", "Fuchs (1934) integral with the Honig, Roebersen & Wiersema (1971) hydrodynamic factor")
+	ev.model("aggregation_half_life", "Smoluchowski (1917) t1/2 = 3 eta W/(4 kT N0)")
+	ev.model("viscosity", "Krieger-Dougherty (1959), [eta] = 2.5, on the effective volume fraction")
+	ev.model("scoring", "MYCIN certainty factors (Shortliffe & Buchanan 1975)")
+}
+
+// kinetics reports the Fuchs stability ratio and the Smoluchowski half-lives
+// as logarithms, so that very stable sols never overflow.
+func (ev *evaluation) kinetics() {
+	c := ev.c
+	log10W := physics.Log10StabilityRatio(ev.pair, true)
+	n0 := physics.NumberDensity(c.phi, c.radius)
+	rapid := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, 0)
+	slow := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, log10W)
+	ev.set("log10_stability_ratio", log10W, "Fuchs integral with Honig hydrodynamics over the total energy")
+	ev.set("rapid_aggregation_half_life", math.Pow(10, rapid), "Smoluchowski 3 eta/(4 kT N0), median particles")
+	ev.set("log10_aggregation_half_life_days", slow-math.Log10(day), "log10(W x rapid half-life / 1 d)")
+	ev.set("half_life_over_shelf_life", slow-math.Log10(c.shelfLife), "log10 of half-life over shelf life")
+	if c.shear > 0 {
+		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.shear, 2*c.radius, c.liquid.viscosity, c.storageTempK),
+			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
+	}
+}
+
+// criticalCoagulation solves for the ionic strength at which the barrier of
+// the chosen model vanishes and reports it as a concentration of the salt
+// type present (its ionic strength per mole).
+func (ev *evaluation) criticalCoagulation() {
+	c := ev.c
+	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0)
+	if !ok {
+		return
+	}
+	perMole := c.ionicStrengthPerMole()
+	ev.set("critical_coagulation_concentration", iCrit/perMole,
+		"ionic strength at which the barrier vanishes (numerical, chosen model), as concentration of the salt type present")
+	ev.set("ionic_strength_over_ccc", c.ionicStrength/iCrit, "ionic strength over its critical value")
+}
+
+// ionicStrengthPerMole is the ionic strength one mole of the dominant salt
+// adds: 1 for 1:1, 3 for 2:1 or 1:2, 4 for 2:2, 6 for 3:1.
+func (c *conditions) ionicStrengthPerMole() float64 {
+	if c.multivalentSalt == "" || c.multivalentConc == 0 {
+		return 1
+	}
+	return c.multivalentIonicShare
+}

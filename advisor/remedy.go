@@ -1,0 +1,58 @@
+package advisor
+
+import (
+	"math"
+	"strings"
+)
+
+// solver computes a remedy's target for one evaluated sample: the value a
+// quantity must reach for the acceptance criterion to hold, found by
+// inverting the same physics that diagnosed the cause. ok is false when no
+// value of the quantity meets the criterion (the text then says why).
+type solver func(ev *evaluation) (t Target, criterion string, ok bool)
+
+// remedy renders one catalogue remedy with its solved target.
+func (e *Engine) remedy(ev *evaluation, id string) Remedy {
+	entry, _ := find(e.rules.Catalog.Remedies, id)
+	r := Remedy{ID: id}
+	solve := remedySolvers[id]
+	if solve == nil {
+		r.Action = entry.Action
+		return r
+	}
+	t, criterion, ok := solve(ev)
+	r.Criterion = criterion
+	if !ok || math.IsNaN(t.Value) || math.IsInf(t.Value, 0) {
+		r.Action = strings.ReplaceAll(entry.Action, "{target}", "no target found within the physical range ("+criterion+")")
+		return r
+	}
+	t.Value = roundSignificant(t.Value, 3)
+	r.Target = &t
+	r.Action = strings.ReplaceAll(entry.Action, "{target}", t.Quantity+" "+t.Op+" "+formatQuantity(t.Value, t.Unit))
+	return r
+}
+
+// remedySolvers maps each remedy with a computable target to its solver;
+// investigate_non_colloidal has none. A test checks the catalogue against it.
+var remedySolvers = map[string]solver{
+	"reduce_particle_size":        solveParticleSize,
+	"match_density":               solveDensityMatch,
+	"raise_viscosity":             solveViscosity,
+	"add_yield_stress":            solveYieldStress,
+	"lower_ionic_strength":        solveIonicStrength,
+	"raise_surface_charge":        solveSurfaceCharge,
+	"move_ph_from_iep":            solvePH,
+	"remove_multivalent_ions":     solveMultivalent,
+	"add_steric_layer":            solveStericThickness,
+	"thicken_steric_layer":        solveStericThickness,
+	"improve_solvent_quality":     solveSolventQuality,
+	"reduce_free_polymer":         solveFreePolymer,
+	"adjust_polymer_dose":         solvePolymerDose,
+	"add_ripening_inhibitor":      solveRipeningInhibitor,
+	"increase_emulsifier":         solveEmulsifierLayer,
+	"lower_volume_fraction":       solveVolumeFraction,
+	"widen_size_distribution":     solveSizeSpan,
+	"controlled_flocculation":     solveControlledFlocculation,
+	"control_storage_temperature": solveStorageTemperature,
+	"reduce_process_shear":        solveProcessShear,
+}

@@ -1,0 +1,63 @@
+package advisor
+
+import (
+	"fmt"
+	"math"
+
+	"colloidtriage/physics"
+)
+
+// The settling remedies invert hindered Stokes settling in closed form: the
+// clear (or cream) layer at the end of the shelf life must not exceed the
+// acceptance criterion, so the hindered speed must stay below
+// maxClear/shelfLife.
+
+func clearLayerCriterion(ev *evaluation) string {
+	return fmt.Sprintf("clear layer at the end of a %g d shelf life <= %s (hindered Stokes settling)",
+		ev.c.shelfLife/day, formatQuantity(ev.c.maxClear*1e3, "mm"))
+}
+
+// allowedStokesSpeed is the largest isolated-particle Stokes speed, m/s,
+// that meets the clear-layer criterion at the sample's volume fraction.
+func allowedStokesSpeed(ev *evaluation) float64 {
+	c := ev.c
+	return c.maxClear / c.shelfLife / physics.RichardsonZakiFactor(c.phi, physics.RichardsonZakiExponentLowRe)
+}
+
+func solveParticleSize(ev *evaluation) (Target, string, bool) {
+	c := ev.c
+	drho := math.Abs(c.particleDensity - c.liquid.density)
+	if drho == 0 {
+		return Target{}, "density already matched", false
+	}
+	d := math.Sqrt(18 * c.liquid.viscosity * allowedStokesSpeed(ev) / (drho * physics.StandardGravity))
+	return Target{"particles.diameter_nm", "<=", d * 1e9, "nm"}, clearLayerCriterion(ev), true
+}
+
+func solveDensityMatch(ev *evaluation) (Target, string, bool) {
+	c := ev.c
+	maxDrho := 9 * c.liquid.viscosity * allowedStokesSpeed(ev) / (2 * c.radius * c.radius * physics.StandardGravity)
+	if c.particleDensity >= c.liquid.density {
+		return Target{"medium.density_kg_m3", ">=", c.particleDensity - maxDrho, "kg/m^3"}, clearLayerCriterion(ev), true
+	}
+	return Target{"medium.density_kg_m3", "<=", c.particleDensity + maxDrho, "kg/m^3"}, clearLayerCriterion(ev), true
+}
+
+func solveViscosity(ev *evaluation) (Target, string, bool) {
+	c := ev.c
+	drho := math.Abs(c.particleDensity - c.liquid.density)
+	eta := 2 * c.radius * c.radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(ev))
+	return Target{"medium.viscosity_mPa_s", ">=", eta * 1e3, "mPa s"},
+		clearLayerCriterion(ev) + "; the low-shear viscosity is what counts", true
+}
+
+func solveYieldStress(ev *evaluation) (Target, string, bool) {
+	c := ev.c
+	largest := c.radius
+	if c.classes != nil {
+		largest = c.classes[len(c.classes)-1].Diameter / 2
+	}
+	tau := physics.YieldStressToHoldSphere(largest, c.particleDensity-c.liquid.density)
+	return Target{"medium.yield_stress_Pa", ">=", tau, "Pa"},
+		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985)", true
+}

@@ -1,0 +1,211 @@
+package advisor
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"colloidtriage/physics"
+)
+
+// resolve turns a validated Sample into SI conditions, filling every gap from
+// the library or a documented default and recording each fill in n. It
+// returns an InputError for values that are well-formed but physically
+// impossible together (a temperature outside the liquid's range, a density
+// nobody gave, an unknown salt).
+func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
+	bad := &InputError{}
+	c := &conditions{symptom: s.Symptom, product: s.Product, ph: math.NaN(), iep: math.NaN(), zeta: math.NaN(),
+		henry: math.NaN()}
+	p, m := &s.Particles, &s.Medium
+
+	mat, hasMat := e.resolveMaterial(p, bad)
+	c.material, c.materialKind = p.Material, mat.kind
+	c.phase = p.Phase
+	if c.phase == "" {
+		c.phase = "solid"
+		if hasMat && mat.phase != "" {
+			c.phase = mat.phase
+			n.add("particles.phase = %s from the library entry %q", c.phase, p.Material)
+		} else {
+			n.add("particles.phase not given: solid assumed")
+		}
+	}
+
+	mediumT := valueOr(m.TemperatureC, defaultTemperatureC, n, "medium.temperature_c", "degC")
+	storageT := mediumT
+	tempField := "/medium/temperature_c"
+	if s.Storage.TemperatureC != nil {
+		storageT, tempField = *s.Storage.TemperatureC, "/storage/temperature_c"
+	} else {
+		n.add("storage.temperature_c not given: stability judged at the medium temperature, %g degC", mediumT)
+	}
+	c.storageTempK = physics.Kelvin(storageT)
+	c.liquid = e.resolveLiquid(m, mediumT, storageT, tempField, bad, n)
+
+	e.resolveSize(p, c, bad, n)
+	c.particleDensity = firstKnown(p.DensityKgM3, mat.density, "particles.density_kg_m3", "kg/m^3", p.Material, n)
+	if math.IsNaN(c.particleDensity) {
+		bad.add("/particles/density_kg_m3", "required unless particles.material names a library entry with a density",
+			"kg/m^3", "0 < value <= 25000")
+	}
+	c.phi = valueOr(p.VolumeFraction, defaultVolumeFraction, n, "particles.volume_fraction", "")
+
+	resolveElectrolyte(m, c, bad, n)
+	c.iep = firstKnown(p.IsoelectricPH, mat.iep, "particles.isoelectric_ph", "pH", p.Material, n)
+	if m.PH != nil {
+		c.ph = *m.PH
+	}
+	e.resolveHamaker(p, c, mat, n)
+	resolveStorage(s, c, n)
+	resolveStabilizer(s.Stabilizer, m.FreePolymer, c, n)
+	resolveDroplet(p, c, n)
+	resolveObservation(s.Observation, c)
+	resolveCriteria(s.Criteria, c, n)
+	c.models = s.Models
+	if err := bad.orNil(); err != nil {
+		return nil, err
+	}
+	resolveZeta(p, c, n)
+	return c, nil
+}
+
+func valueOr(v *float64, def float64, n *notes, field, unit string) float64 {
+	if v != nil {
+		return *v
+	}
+	n.add("%s not given: default %s", field, strings.TrimSpace(fmt.Sprintf("%g %s", def, unit)))
+	return def
+}
+
+// firstKnown takes the request's value, else the library's (noting the fill),
+// else NaN.
+func firstKnown(v *float64, lib float64, field, unit, key string, n *notes) float64 {
+	if v != nil {
+		return *v
+	}
+	if !math.IsNaN(lib) {
+		n.add("%s = %s from the library entry %q", field, formatQuantity(lib, unit), key)
+		return lib
+	}
+	return math.NaN()
+}
+
+func (e *Engine) resolveSize(p *Particles, c *conditions, bad *InputError, n *notes) {
+	switch {
+	case len(p.SizeDistribution) > 0:
+		classes := make([]physics.SizeClass, len(p.SizeDistribution))
+		for i, k := range p.SizeDistribution {
+			classes[i] = physics.SizeClass{Diameter: k.DiameterNm * 1e-9, VolumeFraction: k.VolumeFraction}
+		}
+		norm, err := physics.NormaliseClasses(classes)
+		if err != nil {
+			bad.add("/particles/size_distribution", err.Error(), "", "classes with volume fractions summing to a positive total")
+			return
+		}
+		c.classes = norm
+		c.radius = physics.D50(norm) / 2
+		n.add("median diameter %s taken from the size distribution (%d classes, normalised to a total of 1)",
+			formatQuantity(2*c.radius*1e9, "nm"), len(norm))
+		if p.DiameterNm != nil {
+			n.add("particles.diameter_nm is superseded by particles.size_distribution")
+		}
+	case p.SizeSpan != nil && *p.SizeSpan > 0:
+		c.radius = *p.DiameterNm * 0.5e-9
+		classes, err := physics.LogNormalFromSpan(2*c.radius, *p.SizeSpan, physics.DefaultLogNormalClasses)
+		if err != nil {
+			bad.add("/particles/size_span", err.Error(), "1", "0 <= value <= 5")
+			return
+		}
+		c.classes = classes
+		n.add("size distribution: volume-weighted log-normal with span %g, %d classes", *p.SizeSpan, physics.DefaultLogNormalClasses)
+	default:
+		c.radius = *p.DiameterNm * 0.5e-9
+		n.add("single particle size: no size_span or size_distribution given")
+	}
+}
+
+func (e *Engine) resolveHamaker(p *Particles, c *conditions, mat materialProps, n *notes) {
+	switch {
+	case p.HamakerZJ != nil:
+		c.hamaker = *p.HamakerZJ * 1e-21
+	case !math.IsNaN(mat.hamakerWater) && c.liquid.key == "water":
+		c.hamaker = mat.hamakerWater
+		n.add("hamaker_zJ = %s across water from the library entry %q", formatQuantity(c.hamaker*1e21, "zJ"), p.Material)
+	default:
+		epsP := pick(p.Permittivity, mat.epsR)
+		nP := pick(p.RefractiveIndex, mat.refrIndex)
+		if !math.IsNaN(epsP) && !math.IsNaN(nP) && !math.IsNaN(c.liquid.refrIndex) {
+			c.hamaker = physics.HamakerTaborWinterton(epsP, nP, c.liquid.epsR, c.liquid.refrIndex, c.storageTempK)
+			n.add("hamaker constant %s estimated by the Tabor-Winterton (Lifshitz) approximation from permittivities and refractive indices",
+				formatQuantity(c.hamaker*1e21, "zJ"))
+			return
+		}
+		c.hamaker = defaultHamakerJ
+		n.add("hamaker constant not given and not estimable: default %s (typical of oxides and polymers across water)",
+			formatQuantity(defaultHamakerJ*1e21, "zJ"))
+	}
+}
+
+func pick(v *float64, lib float64) float64 {
+	if v != nil {
+		return *v
+	}
+	return lib
+}
+
+func resolveStorage(s *Sample, c *conditions, n *notes) {
+	st := &s.Storage
+	h := valueOr(st.ContainerHeightMm, defaultContainerMm, n, "storage.container_height_mm", "mm")
+	c.height = h * 1e-3
+	c.shelfLife = valueOr(st.ShelfLifeDays, defaultShelfLifeDays, n, "storage.shelf_life_days", "d") * day
+	if st.MaxClearLayerMm != nil {
+		c.maxClear = *st.MaxClearLayerMm * 1e-3
+	} else {
+		c.maxClear = defaultClearLayerShare * c.height
+		n.add("storage.max_clear_layer_mm not given: acceptance criterion %g %% of the container height, %s",
+			defaultClearLayerShare*100, formatQuantity(c.maxClear*1e3, "mm"))
+	}
+	if st.ShearRatePerS != nil {
+		c.shear = *st.ShearRatePerS
+	}
+	c.yieldStress = 0
+	if s.Medium.YieldStressPa != nil {
+		c.yieldStress = *s.Medium.YieldStressPa
+	}
+}
+
+func resolveObservation(o *Observation, c *conditions) {
+	c.observed = observed{age: math.NaN(), clearLayer: math.NaN(), viscosityChange: math.NaN(), sizeGrowth: math.NaN()}
+	if o == nil {
+		return
+	}
+	if o.AgeDays != nil {
+		c.observed.age = *o.AgeDays * day
+	}
+	if o.ClearLayerMm != nil {
+		c.observed.clearLayer = *o.ClearLayerMm * 1e-3
+	}
+	if o.ViscosityChangePercent != nil {
+		c.observed.viscosityChange = *o.ViscosityChangePercent
+	}
+	if o.SizeGrowthPercent != nil {
+		c.observed.sizeGrowth = *o.SizeGrowthPercent
+	}
+	if o.SedimentRedisperses != nil {
+		c.observed.redisperses = map[bool]string{true: "yes", false: "no"}[*o.SedimentRedisperses]
+	}
+}
+
+func resolveCriteria(k *Criteria, c *conditions, n *notes) {
+	if k == nil {
+		k = &Criteria{}
+	}
+	c.criteria.minBarrierKT = valueOr(k.MinBarrierKT, defaultMinBarrierKT, n, "criteria.min_barrier_kT", "kT")
+	c.criteria.halfLifeRatio = valueOr(k.HalfLifeToShelfLife, defaultHalfLifeRatio, n, "criteria.half_life_to_shelf_life", "")
+	c.criteria.maxRelViscosity = valueOr(k.MaxRelativeViscosity, defaultMaxRelViscosity, n, "criteria.max_relative_viscosity", "")
+	c.criteria.maxStericKT = valueOr(k.MaxStericContactKT, defaultMaxStericKT, n, "criteria.max_steric_contact_kT", "kT")
+}
+
+// day is the length of a day in seconds.
+const day = 86400.0

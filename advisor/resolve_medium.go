@@ -1,0 +1,178 @@
+package advisor
+
+import (
+	"math"
+
+	"colloidtriage/physics"
+)
+
+// resolveLiquid finds the properties of the continuous phase at the storage
+// temperature. Overrides hold at the medium temperature; when storage is
+// elsewhere they are carried over by the library liquid's own temperature
+// dependence.
+func (e *Engine) resolveLiquid(m *Medium, mediumT, storageT float64, tempField string, bad *InputError, n *notes) liquidState {
+	key := m.Liquid
+	if key == "" {
+		key = defaultLiquid
+		n.add("medium.liquid not given: water assumed")
+	}
+	lib, ok := e.lib.Liquids[key]
+	if !ok {
+		bad.add("/medium/liquid", "unknown liquid", "", "one of: "+joinKeys(e.lib.LiquidKeys()))
+		return liquidState{key: key}
+	}
+	atStorage, err := e.liquidAt(lib, storageT, tempField, n)
+	if err != nil {
+		bad.Problems = append(bad.Problems, err.(*InputError).Problems...)
+		return liquidState{key: key}
+	}
+	atMedium := atStorage
+	if mediumT != storageT {
+		if atMedium, err = e.liquidAt(lib, mediumT, "/medium/temperature_c", n); err != nil {
+			bad.Problems = append(bad.Problems, err.(*InputError).Problems...)
+			return liquidState{key: key}
+		}
+	}
+	st := atStorage
+	carry := func(override *float64, scale, fromLib, atMed float64, name string) float64 {
+		if override == nil {
+			return fromLib
+		}
+		v := *override * scale
+		if mediumT == storageT {
+			return v
+		}
+		n.add("medium.%s given at %g degC, carried to the storage temperature %g degC with the temperature dependence of %s",
+			name, mediumT, storageT, key)
+		return v * fromLib / atMed
+	}
+	st.density = carry(m.DensityKgM3, 1, atStorage.density, atMedium.density, "density_kg_m3")
+	st.viscosity = carry(m.ViscosityMPaS, 1e-3, atStorage.viscosity, atMedium.viscosity, "viscosity_mPa_s")
+	st.epsR = carry(m.Permittivity, 1, atStorage.epsR, atMedium.epsR, "relative_permittivity")
+	if m.RefractiveIndex != nil {
+		st.refrIndex = *m.RefractiveIndex
+	}
+	return st
+}
+
+func joinKeys(keys []string) string {
+	out := ""
+	for i, k := range keys {
+		if i > 0 {
+			out += ", "
+		}
+		out += k
+	}
+	return out
+}
+
+// resolveElectrolyte sums the ions of the stated salts (or takes the stated
+// ionic strength or its estimate from conductivity), adds H+ or OH- outside
+// pH 4-10, and floors aqueous media at the autoionisation of water.
+func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
+	var ions []physics.Ion
+	for i, el := range m.Electrolytes {
+		conc := *el.ConcentrationMM // mM = mol/m^3
+		switch {
+		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
+			bad.add(pointerf("/medium/electrolytes/%d", i), "give either formula or cation_valence and anion_valence, not both", "", "")
+		case el.Formula != "":
+			salt, err := physics.ParseSalt(el.Formula)
+			if err != nil {
+				bad.add(pointerf("/medium/electrolytes/%d/formula", i), "unknown or unbalanced salt formula", "",
+					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2")
+				continue
+			}
+			pair := salt.Ions(conc)
+			ions = append(ions, pair[:]...)
+			noteMultivalent(c, el.Formula, pair, conc)
+		case el.CationValence != nil && el.AnionValence != nil:
+			pair, err := physics.SymmetricIons(*el.CationValence, *el.AnionValence, conc)
+			if err != nil {
+				bad.add(pointerf("/medium/electrolytes/%d", i), err.Error(), "", "valences 1 to 4")
+				continue
+			}
+			ions = append(ions, pair[:]...)
+			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc)
+		default:
+			bad.add(pointerf("/medium/electrolytes/%d", i), "each electrolyte needs a formula or both valences", "", "")
+		}
+	}
+	switch {
+	case len(m.Electrolytes) > 0:
+	case m.IonicStrengthMM != nil:
+		ions = append(ions, monovalent(*m.IonicStrengthMM)...)
+		n.add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
+	case m.ConductivityUSCm != nil:
+		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
+		ions = append(ions, monovalent(is)...)
+		n.add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
+			formatQuantity(is, "mM"))
+	}
+	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
+		pair := physics.IonsFromPH(*m.PH)
+		ions = append(ions, pair[:]...)
+		n.add("pH %g is outside 4-10: H+ and OH- added to the ionic strength", *m.PH)
+	}
+	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
+		n.add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
+	}
+	c.ions = ions
+	c.ionicStrength = physics.IonicStrength(ions)
+	if c.liquid.aqueous && c.ionicStrength < autoionisationMolM3 {
+		c.ionicStrength = autoionisationMolM3
+		n.add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", formatQuantity(autoionisationMolM3, "mM"))
+	}
+	if !c.liquid.aqueous && c.ionicStrength > 0 {
+		n.add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
+	}
+}
+
+func monovalent(conc float64) []physics.Ion {
+	return []physics.Ion{{Valence: 1, Concentration: conc}, {Valence: -1, Concentration: conc}}
+}
+
+// noteMultivalent remembers the most concentrated salt with an ion of
+// valence above 1, for the multivalent-ion cause and its remedy.
+func noteMultivalent(c *conditions, label string, pair [2]physics.Ion, conc float64) {
+	multi := pair[0].Valence > 1 || pair[1].Valence < -1
+	if multi && conc > 0 && conc >= c.multivalentConc {
+		c.multivalentSalt, c.multivalentConc = label, conc
+		c.multivalentIonicShare = physics.IonicStrength(pair[:]) / conc
+	}
+}
+
+// resolveZeta chooses the surface potential for the double layer: measured
+// zeta, zeta from mobility by Henry's equation, or an estimate from pH and
+// the isoelectric point, in that order.
+func resolveZeta(p *Particles, c *conditions, n *notes) {
+	kappa := physics.DebyeKappa(c.ionicStrength, c.liquid.epsR, c.storageTempK)
+	switch {
+	case p.ZetaMV != nil && p.Mobility != nil:
+		c.zeta, c.zetaSource = *p.ZetaMV*1e-3, "measured"
+		n.add("both zeta_mV and mobility given: the measured zeta_mV is used")
+	case p.ZetaMV != nil:
+		c.zeta, c.zetaSource = *p.ZetaMV*1e-3, "measured"
+	case p.Mobility != nil:
+		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
+		c.henry = physics.HenryOhshima(kappa * c.radius)
+		c.zeta = physics.ZetaHenry(mu, c.liquid.viscosity, c.liquid.epsR, c.henry)
+		c.zetaSource = "mobility"
+		n.add("zeta potential %s from mobility by Henry's equation with Ohshima's closed form f(kappa a) = %.4g",
+			formatQuantity(c.zeta*1e3, "mV"), c.henry)
+	case !math.IsNaN(c.iep) && !math.IsNaN(c.ph):
+		c.zeta = physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK)
+		c.zetaSource = "estimated"
+		n.add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
+			formatQuantity(c.zeta*1e3, "mV"), c.ph, c.iep)
+	default:
+		n.add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")
+	}
+	surfaceSign := 0
+	if c.zeta > 0 {
+		surfaceSign = 1
+	} else if c.zeta < 0 {
+		surfaceSign = -1
+	}
+	c.counterValence = physics.CounterIonValence(c.ions, surfaceSign)
+}

@@ -1,0 +1,218 @@
+package advisor
+
+import (
+	"crypto/sha256"
+	"encoding/hex"
+	"errors"
+	"fmt"
+	"io/fs"
+	"math"
+	"path"
+	"regexp"
+	"sort"
+	"strings"
+
+	"github.com/expr-lang/expr"
+	"github.com/expr-lang/expr/file"
+	"github.com/expr-lang/expr/vm"
+)
+
+// ruleFileSuffix marks rule files in the built-in set and in site packs.
+const ruleFileSuffix = ".rules.yaml"
+
+// RuleSet is the compiled knowledge base: every rule parsed, checked against
+// the catalogue and the declared facts, and compiled once.
+type RuleSet struct {
+	Catalog *Catalog
+	Hash    string
+	Files   []string
+	rules   []rule
+}
+
+type rule struct {
+	ruleSpec
+	program      *vm.Program
+	placeholders []string
+}
+
+var placeholder = regexp.MustCompile(`\{([a-z0-9_]+)\}`)
+
+// LoadRuleSet reads the catalogue (catalog.yaml) and every *.rules.yaml file
+// of builtin, then the rule files of each site pack, and compiles them. Any
+// error names the file, the rule id, the line and the column.
+func LoadRuleSet(builtin fs.FS, packs ...fs.FS) (*RuleSet, error) {
+	catalog, catalogData, err := loadCatalog(builtin, "catalog.yaml")
+	if err != nil {
+		return nil, err
+	}
+	h := sha256.New()
+	h.Write(catalogData)
+	rs := &RuleSet{Catalog: catalog}
+	seen := map[string]string{}
+	for i, fsys := range append([]fs.FS{builtin}, packs...) {
+		names, err := fs.Glob(fsys, "*"+ruleFileSuffix)
+		if err != nil {
+			return nil, err
+		}
+		sort.Strings(names)
+		for _, name := range names {
+			data, err := fs.ReadFile(fsys, name)
+			if err != nil {
+				return nil, err
+			}
+			label := name
+			if i > 0 {
+				label = path.Join(fmt.Sprintf("pack%d", i), name)
+			}
+			fmt.Fprintf(h, "\x00%s\x00", label)
+			h.Write(data)
+			specs, err := parseRuleFile(label, data)
+			if err != nil {
+				return nil, err
+			}
+			for _, s := range specs {
+				if prev, dup := seen[s.ID]; dup {
+					return nil, s.errorAt("id", fmt.Sprintf("duplicate rule id, first defined in %s", prev))
+				}
+				seen[s.ID] = s.file
+				r, err := compileRule(s, catalog)
+				if err != nil {
+					return nil, err
+				}
+				rs.rules = append(rs.rules, r)
+			}
+			rs.Files = append(rs.Files, label)
+		}
+	}
+	if len(rs.rules) == 0 {
+		return nil, errors.New("rule set is empty")
+	}
+	rs.Hash = "sha256:" + hex.EncodeToString(h.Sum(nil))[:16]
+	return rs, nil
+}
+
+func (s ruleSpec) errorAt(key, msg string) *RuleError {
+	line, col := s.line, s.column
+	if n, ok := s.at[key]; ok {
+		line, col = n.Line, n.Column
+	}
+	return &RuleError{File: s.file, RuleID: s.ID, Line: line, Column: col, Message: msg}
+}
+
+func compileRule(s ruleSpec, c *Catalog) (rule, error) {
+	if s.ID == "" {
+		return rule{}, s.errorAt("id", "empty rule id")
+	}
+	if _, ok := find(c.Causes, s.Cause); !ok {
+		return rule{}, s.errorAt("cause", fmt.Sprintf("unknown cause %q", s.Cause))
+	}
+	if len(s.Symptoms) == 0 {
+		return rule{}, s.errorAt("symptoms", "a rule names at least one symptom (or \"any\")")
+	}
+	for _, sym := range s.Symptoms {
+		if _, ok := find(c.Symptoms, sym); !ok && sym != "any" {
+			return rule{}, s.errorAt("symptoms", fmt.Sprintf("unknown symptom %q", sym))
+		}
+	}
+	if !(s.Certainty >= -1 && s.Certainty <= 1) || s.Certainty == 0 {
+		return rule{}, s.errorAt("certainty", "certainty must be in [-1, 1] and not 0")
+	}
+	for _, id := range s.Remedies {
+		if _, ok := find(c.Remedies, id); !ok {
+			return rule{}, s.errorAt("remedies", fmt.Sprintf("unknown remedy %q", id))
+		}
+	}
+	for _, name := range s.Evidence {
+		if f, ok := factIndex[name]; !ok || f.Kind != numberFact {
+			return rule{}, s.errorAt("evidence", fmt.Sprintf("evidence %q is not a numeric fact", name))
+		}
+	}
+	var holes []string
+	for _, m := range placeholder.FindAllStringSubmatch(s.Explain, -1) {
+		if _, ok := factIndex[m[1]]; !ok {
+			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", m[1]))
+		}
+		holes = append(holes, m[1])
+	}
+	program, err := expr.Compile(s.When, compileOptions(s.AfterCauses)...)
+	if err != nil {
+		re := s.errorAt("when", err.Error())
+		var fe *file.Error
+		if errors.As(err, &fe) {
+			p := s.whenPos.offset(fe.Line, fe.Column)
+			re.Line, re.Column, re.Message, re.Snippet = p.line, p.column, fe.Message, fe.Snippet
+		}
+		return rule{}, re
+	}
+	return rule{ruleSpec: s, program: program, placeholders: holes}, nil
+}
+
+// compileOptions declares the rule language: the facts with their types, a
+// boolean result, and known(x), which is false for a number the advisor
+// could not compute for this sample (such numbers make every comparison false).
+func compileOptions(afterCauses bool) []expr.Option {
+	env := factTemplate()
+	if afterCauses {
+		env[topCauseScore] = 0.0
+	}
+	return []expr.Option{
+		expr.Env(env),
+		expr.AsBool(),
+		expr.Function("known", func(params ...any) (any, error) {
+			x := params[0].(float64)
+			return !math.IsNaN(x), nil
+		}, new(func(float64) bool)),
+	}
+}
+
+// Rules lists the loaded rules for the catalogue endpoint.
+func (rs *RuleSet) Rules() []RuleInfo {
+	out := make([]RuleInfo, len(rs.rules))
+	for i, r := range rs.rules {
+		out[i] = RuleInfo{ID: r.ID, File: r.file, Line: r.line, Cause: r.Cause, Symptoms: r.Symptoms,
+			When: r.When, Certainty: r.Certainty, Remedies: r.Remedies, AfterCauses: r.AfterCauses}
+	}
+	return out
+}
+
+// RuleInfo describes one loaded rule.
+type RuleInfo struct {
+	ID          string   `json:"id"`
+	File        string   `json:"file"`
+	Line        int      `json:"line"`
+	Cause       string   `json:"cause"`
+	Symptoms    []string `json:"symptoms"`
+	When        string   `json:"when"`
+	Certainty   float64  `json:"certainty"`
+	Remedies    []string `json:"remedies"`
+	AfterCauses bool     `json:"after_causes"`
+}
+
+func sortedKeys(m map[string]bool) []string {
+	out := make([]string, 0, len(m))
+	for k := range m {
+		out = append(out, k)
+	}
+	sort.Strings(out)
+	return out
+}
+
+func (s ruleSpec) appliesTo(symptom string) bool {
+	for _, sym := range s.Symptoms {
+		if sym == symptom || sym == "any" {
+			return true
+		}
+	}
+	return false
+}
+
+// explain fills the placeholders of a rule's text with the facts' values.
+func (r rule) explain(f facts) string {
+	if len(r.placeholders) == 0 {
+		return r.Explain
+	}
+	return placeholder.ReplaceAllStringFunc(r.Explain, func(m string) string {
+		name := strings.Trim(m, "{}")
+		return f.format(name)
+	})
+}

@@ -1,0 +1,97 @@
+package api
+
+import (
+	"bytes"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"mime"
+	"net/http"
+	"strings"
+
+	"github.com/labstack/echo/v4"
+
+	"colloidtriage/advisor"
+)
+
+// decodeJSON reads one JSON value from the request body into v, strictly:
+// the content type must be JSON, unknown fields are rejected, and trailing
+// data is an error. Each failure is a 4xx problem naming what is wrong.
+func decodeJSON(c echo.Context, v any) error {
+	if err := requireContentType(c, echo.MIMEApplicationJSON); err != nil {
+		return err
+	}
+	body, err := io.ReadAll(c.Request().Body)
+	if err != nil {
+		var tooLarge *http.MaxBytesError
+		if errors.As(err, &tooLarge) {
+			return echo.NewHTTPError(http.StatusRequestEntityTooLarge)
+		}
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body could not be read", "")
+	}
+	return unmarshalStrict(body, v)
+}
+
+func unmarshalStrict(body []byte, v any) error {
+	dec := json.NewDecoder(bytes.NewReader(body))
+	dec.DisallowUnknownFields()
+	if err := dec.Decode(v); err != nil {
+		return jsonProblem(err, body)
+	}
+	if dec.More() {
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
+			"unexpected data after the JSON value")
+	}
+	return nil
+}
+
+// jsonProblem explains a decoding error with the field as a JSON pointer.
+func jsonProblem(err error, body []byte) error {
+	var syn *json.SyntaxError
+	var typ *json.UnmarshalTypeError
+	switch {
+	case errors.As(err, &syn):
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
+			fmt.Sprintf("syntax error at byte %d: %s", syn.Offset, syn.Error()))
+	case errors.As(err, &typ):
+		ptr := "/" + strings.ReplaceAll(typ.Field, ".", "/")
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A field has the wrong type",
+			fmt.Sprintf("expected %s, got JSON %s", typ.Type.String(), typ.Value),
+			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + jsonKind(typ.Type.String())})
+	case errors.Is(err, io.EOF) || len(bytes.TrimSpace(body)) == 0:
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is empty", "send a JSON object")
+	case errors.Is(err, io.ErrUnexpectedEOF):
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "the JSON value is truncated")
+	case strings.HasPrefix(err.Error(), "json: unknown field "):
+		name := strings.Trim(strings.TrimPrefix(err.Error(), "json: unknown field "), `"`)
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "Unknown field",
+			"the field "+name+" is not part of the contract (see /openapi.json); check its spelling and unit suffix",
+			advisor.FieldProblem{Pointer: name, Reason: "unknown field"})
+	}
+	return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "")
+}
+
+func jsonKind(goType string) string {
+	switch strings.TrimLeft(goType, "*[]") {
+	case "float64", "int":
+		return "number"
+	case "string":
+		return "string"
+	case "bool":
+		return "boolean"
+	}
+	if strings.HasPrefix(goType, "[]") {
+		return "array"
+	}
+	return "object"
+}
+
+func requireContentType(c echo.Context, want string) error {
+	mt, _, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
+	if err != nil || mt != want {
+		return newProblem(http.StatusUnsupportedMediaType, "about:blank", "Unsupported media type",
+			"send the body as "+want)
+	}
+	return nil
+}

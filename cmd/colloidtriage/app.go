@@ -1,0 +1,205 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"errors"
+	"flag"
+	"fmt"
+	"io"
+	"net"
+	"net/http"
+	"net/http/httptest"
+	"os"
+	"time"
+
+	"github.com/rs/zerolog"
+
+	"colloidtriage/advisor"
+	"colloidtriage/api"
+	"colloidtriage/openapi"
+	"colloidtriage/rules"
+)
+
+// Exit codes of Main.
+const (
+	exitOK       = 0
+	exitFailure  = 1
+	exitUsage    = 2
+	exitBadInput = 3
+)
+
+const usage = `usage:
+  colloidtriage serve [--addr HOST:PORT] [--rules DIR]   run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR)
+  colloidtriage triage FILE|-                            triage one sample (JSON file, or - for standard input)
+  colloidtriage rules check DIR                          compile a site rule pack with the built-in rules
+  colloidtriage version                                  print the engine version and rule-set hash
+`
+
+// Main runs one command and returns the process exit code. It is the whole
+// program but for the signal context and the process's streams.
+func Main(ctx context.Context, args []string, stdin io.Reader, stdout, stderr io.Writer, getenv func(string) string) int {
+	if len(args) == 0 {
+		fmt.Fprint(stderr, usage)
+		return exitUsage
+	}
+	switch args[0] {
+	case "serve":
+		return serve(ctx, args[1:], stdout, stderr, getenv)
+	case "triage":
+		return triage(args[1:], stdin, stdout, stderr)
+	case "rules":
+		return rulesCheck(args[1:], stdout, stderr)
+	case "version":
+		eng, err := newEngine()
+		if err != nil {
+			fmt.Fprintln(stderr, err)
+			return exitFailure
+		}
+		fmt.Fprintf(stdout, "colloidtriage engine %s, rules %s\n", advisor.EngineVersion, eng.RuleSet().Hash)
+		return exitOK
+	case "-h", "--help", "help":
+		fmt.Fprint(stdout, usage)
+		return exitOK
+	}
+	fmt.Fprintf(stderr, "unknown command %q\n%s", args[0], usage)
+	return exitUsage
+}
+
+// newEngine compiles the built-in rules plus any site packs and loads the library.
+func newEngine(packDirs ...string) (*advisor.Engine, error) {
+	packs := make([]fsDir, 0, len(packDirs))
+	for _, d := range packDirs {
+		if st, err := os.Stat(d); err != nil || !st.IsDir() {
+			return nil, fmt.Errorf("rule pack %s: not a directory", d)
+		}
+		packs = append(packs, fsDir(d))
+	}
+	rs, err := advisor.LoadRuleSet(rules.FS, toFS(packs)...)
+	if err != nil {
+		return nil, err
+	}
+	lib, err := advisor.LoadLibrary(rules.FS)
+	if err != nil {
+		return nil, err
+	}
+	return advisor.NewEngine(rs, lib), nil
+}
+
+func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv func(string) string) int {
+	fs := flag.NewFlagSet("serve", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	defAddr := "127.0.0.1:8080"
+	if a := getenv("COLLOIDTRIAGE_ADDR"); a != "" {
+		defAddr = a
+	}
+	addr := fs.String("addr", defAddr, "listen address (env COLLOIDTRIAGE_ADDR)")
+	rulesDir := fs.String("rules", "", "directory of site rule files (*.rules.yaml) added to the built-in set")
+	if err := fs.Parse(args); err != nil {
+		return exitUsage
+	}
+	log := zerolog.New(stdout).With().Timestamp().Logger()
+	start := time.Now()
+	var dirs []string
+	if *rulesDir != "" {
+		dirs = append(dirs, *rulesDir)
+	}
+	eng, err := newEngine(dirs...)
+	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	e := api.New(eng, api.Config{Logger: log, OpenAPI: openapi.JSON})
+	srv := &http.Server{
+		Handler:           e,
+		ReadHeaderTimeout: 5 * time.Second,
+		ReadTimeout:       30 * time.Second,
+		WriteTimeout:      120 * time.Second,
+		IdleTimeout:       120 * time.Second,
+		MaxHeaderBytes:    64 << 10,
+	}
+	ln, err := net.Listen("tcp", *addr)
+	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	log.Info().Str("addr", ln.Addr().String()).Str("rules", eng.RuleSet().Hash).
+		Dur("startup", time.Since(start)).Msg("listening")
+	done := make(chan error, 1)
+	go func() { done <- srv.Serve(ln) }()
+	select {
+	case err := <-done:
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	case <-ctx.Done():
+	}
+	log.Info().Msg("shutting down: finishing in-flight requests")
+	shutCtx, cancel := context.WithTimeout(context.Background(), 30*time.Second)
+	defer cancel()
+	if err := srv.Shutdown(shutCtx); err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	if err := <-done; err != nil && !errors.Is(err, http.ErrServerClosed) {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	return exitOK
+}
+
+// triage runs one sample through the same HTTP application in memory, so
+// that the CLI's reports and problem details are those of the service.
+func triage(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	if len(args) != 1 {
+		fmt.Fprint(stderr, usage)
+		return exitUsage
+	}
+	var body []byte
+	var err error
+	if args[0] == "-" {
+		body, err = io.ReadAll(stdin)
+	} else {
+		body, err = os.ReadFile(args[0])
+	}
+	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	eng, err := newEngine()
+	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	e := api.New(eng, api.Config{Logger: zerolog.Nop(), OpenAPI: openapi.JSON})
+	req := httptest.NewRequest(http.MethodPost, "/v1/triage", bytes.NewReader(body))
+	req.Header.Set("Content-Type", "application/json")
+	rec := httptest.NewRecorder()
+	e.ServeHTTP(rec, req)
+	if rec.Code != http.StatusOK {
+		stderr.Write(rec.Body.Bytes())
+		fmt.Fprintln(stderr)
+		return exitBadInput
+	}
+	var out bytes.Buffer
+	if err := indentJSON(&out, rec.Body.Bytes()); err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	stdout.Write(out.Bytes())
+	return exitOK
+}
+
+func rulesCheck(args []string, stdout, stderr io.Writer) int {
+	if len(args) != 2 || args[0] != "check" {
+		fmt.Fprint(stderr, usage)
+		return exitUsage
+	}
+	eng, err := newEngine(args[1])
+	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return exitFailure
+	}
+	rs := eng.RuleSet()
+	fmt.Fprintf(stdout, "ok: %d rules in %d files, rule set %s\n", len(rs.Rules()), len(rs.Files), rs.Hash)
+	return exitOK
+}

@@ -1,0 +1,13 @@
+// Package rules holds colloidtriage's knowledge base as data: the rule files
+// (*.rules.yaml), the catalogue of symptoms, causes, remedies and scales
+// (catalog.yaml), and the materials and liquids library (library/*.yaml).
+// Everything is embedded in the binary; package advisor parses, checks and
+// compiles it once at start-up.
+package rules
+
+import "embed"
+
+// FS holds the built-in rule set, catalogue and library.
+//
+//go:embed *.yaml library/*.yaml
+var FS embed.FS
