@@ -149,7 +149,7 @@ func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 				continue
 			}
 			seenEvidence[name] = true
-			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: v, Unit: factIndex[name].Unit, Test: fr.rule.When})
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: fr.rule.When})
 		}
 		if fr.rule.Certainty < 0 {
 			continue

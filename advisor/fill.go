@@ -39,7 +39,7 @@ func (e *Engine) liquidAt(l Liquid, tempC float64, field string, n *notes) (liqu
 // materialProps are the library's properties of a particle material, NaN
 // where the library has none.
 type materialProps struct {
-	kind, phase                                  string
+	kind, phase                                 string
 	density, refrIndex, epsR, iep, hamakerWater float64
 }
 

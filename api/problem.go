@@ -1,7 +1,6 @@
 package api
 
 import (
-	"encoding/json"
 	"errors"
 	"net/http"
 
@@ -76,7 +75,7 @@ func errorHandler(err error, c echo.Context) {
 	p := problemFor(err)
 	p.Instance = c.Request().URL.Path
 	p.RequestID = c.Response().Header().Get(echo.HeaderXRequestID)
-	body, mErr := json.Marshal(p)
+	body, mErr := marshalPlain(p)
 	if mErr != nil {
 		body = []byte(`{"type":"/problems/internal","title":"Internal error","status":500}`)
 	}

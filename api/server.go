@@ -13,9 +13,9 @@ import (
 // Config holds what the transport needs besides the engine.
 type Config struct {
 	Logger    zerolog.Logger
-	BodyLimit string // per-request body limit of the single-sample routes, e.g. "256K"
-	OpenAPI   []byte // the OpenAPI document served at /openapi.json
-	APIKeys   []string
+	BodyLimit string   // body limit of the single-sample routes, e.g. "256K"
+	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
+	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
 }
 
 // DefaultConfig is the configuration of a local, unauthenticated service.
@@ -28,20 +28,27 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	}
 	e := echo.New()
 	e.HideBanner, e.HidePort = true, true
+	e.JSONSerializer = plainJSON{}
 	e.HTTPErrorHandler = errorHandler
+	m := newMetrics()
 	e.Use(middleware.RequestIDWithConfig(middleware.RequestIDConfig{TargetHeader: echo.HeaderXRequestID}))
 	e.Use(accessLog(cfg.Logger))
+	e.Use(m.middleware)
 	e.Use(recoverPanic)
 
-	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI}
+	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
-	e.GET("/openapi.json", h.openAPI)
+	e.GET("/metrics", h.metricsText)
 
-	v1 := e.Group("/v1")
+	guarded := e.Group("", apiKeyAuth(cfg.APIKeys))
+	guarded.GET("/openapi.json", h.openAPI)
+	v1 := guarded.Group("/v1")
 	limit := middleware.BodyLimit(cfg.BodyLimit)
 	v1.POST("/triage", h.triage, limit)
+	v1.POST("/triage/batch", h.batch, middleware.BodyLimit(batchBodyLimit))
 	v1.POST("/scales", h.scales, limit)
+	v1.POST("/interaction-profile", h.interactionProfile, limit)
 	v1.GET("/catalog", h.catalog)
 	v1.GET("/rules", h.rules)
 	v1.GET("/materials", h.materials)
@@ -52,6 +59,7 @@ type handlers struct {
 	engine    *advisor.Engine
 	validator *sampleValidator
 	openapi   []byte
+	metrics   *metrics
 }
 
 func (h *handlers) health(c echo.Context) error {
