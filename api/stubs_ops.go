@@ -6,6 +6,9 @@ import (
 	"github.com/labstack/echo/v4"
 )
 
+// triageCausesKey holds the top cause ids of a triage for the metrics.
+const triageCausesKey = "triage_causes"
+
 type metrics struct{}
 
 func newMetrics() *metrics { return &metrics{} }

@@ -38,6 +38,7 @@ func (h *handlers) triage(c echo.Context) error {
 	if err != nil {
 		return err
 	}
+	c.Set(triageCausesKey, topCauses(rep))
 	return c.JSON(http.StatusOK, triageResponse{Report: rep,
 		RequestID:      c.Response().Header().Get(echo.HeaderXRequestID),
 		IdempotencyKey: c.Request().Header.Get(idempotencyKeyHeader)})
@@ -72,4 +73,12 @@ func (h *handlers) scales(c echo.Context) error {
 		Versions: advisor.Versions{Engine: advisor.EngineVersion, Rules: h.engine.RuleSet().Hash},
 		Scales:   sc, Assumptions: notes, Models: models,
 		RequestID: c.Response().Header().Get(echo.HeaderXRequestID)})
+}
+
+// topCauses lists the id of the first-ranked cause, for the outcome metrics.
+func topCauses(rep *advisor.Report) []string {
+	if len(rep.Causes) == 0 {
+		return nil
+	}
+	return []string{rep.Causes[0].ID}
 }
