@@ -1,0 +1,128 @@
+package physics
+
+import (
+	"math"
+	"testing"
+)
+
+func TestCCCHighPotential(t *testing.T) {
+	t.Parallel()
+	const tempK, epsR = 298.15, 78.5
+	// [calc] testdata/reference/interaction.py: prefactor 3.836857e-39
+	// mol/dm^3 J^2 from V = dV/dh = 0 (and scipy fsolve of the same two
+	// conditions: 383.6857, 5.995089, 0.5263178 mol/m^3); REFERENCES.md:
+	// 3.84e-39 gamma^4/(A^2 z^6) mol/dm^3, i.e. 0.384 M, 6.0 mM, 0.53 mM at
+	// A = 1e-19 J, gamma = 1.
+	tests := []struct {
+		z    int
+		want float64
+	}{
+		{1, 383.6857}, {2, 5.995089}, {3, 0.5263178},
+	}
+	for _, tt := range tests {
+		if got := CCCHighPotential(1e-19, 1, epsR, tempK, tt.z); interactionRelErr(got, tt.want) > 1e-6 {
+			t.Errorf("z = %d: got %.7g mol/m^3, want %.7g", tt.z, got, tt.want)
+		}
+	}
+	// Schulze–Hardy at high potential, 1 : 1/64 : 1/729 (Verwey & Overbeek 1948).
+	c1 := CCCHighPotential(1e-19, 1, epsR, tempK, 1)
+	for z, ratio := range map[int]float64{2: 1.0 / 64, 3: 1.0 / 729} {
+		if got := CCCHighPotential(1e-19, 1, epsR, tempK, z) / c1; interactionRelErr(got, ratio) > 1e-12 {
+			t.Errorf("z = %d: ratio %g, want %g", z, got, ratio)
+		}
+	}
+	// gamma^4 / A^2 scaling and the limits.
+	if got := CCCHighPotential(2e-19, 0.5, epsR, tempK, 1) / c1; interactionRelErr(got, 1.0/64) > 1e-12 {
+		t.Errorf("gamma^4/A^2 scaling: ratio %g, want 1/64", got)
+	}
+	if got := CCCHighPotential(0, 1, epsR, tempK, 1); !math.IsInf(got, 1) {
+		t.Errorf("A = 0: got %g, want +Inf", got)
+	}
+	if got := CCCHighPotential(1e-19, 0, epsR, tempK, 1); got != 0 {
+		t.Errorf("gamma = 0: got %g, want 0", got)
+	}
+}
+
+func TestCriticalIonicStrength(t *testing.T) {
+	t.Parallel()
+	kT := Boltzmann * interactionTempK
+	pair := func(a, hamaker, psi float64, z int) Pair {
+		return Pair{Radius: a, Hamaker: hamaker, Potential: psi, EpsR: 78.4, TempK: interactionTempK, Valence: z}
+	}
+	// [calc] testdata/reference/interaction.py: scipy brentq on log10 I of
+	// the barrier height (400-point scan + bounded Brent) of the exact
+	// Hamaker + LSA energy.
+	tests := []struct {
+		name      string
+		pair      Pair
+		criterion float64
+		want      float64
+	}{
+		{"100nm -25mV barrier 0", pair(100e-9, 1e-20, -0.025, 1), 0, 144.1455},
+		{"100nm -25mV barrier 15kT", pair(100e-9, 1e-20, -0.025, 1), 15 * kT, 38.24364},
+		{"1um -500mV z=1", pair(1e-6, 1e-19, -0.5, 1), 0, 387.5229},
+		{"1um -500mV z=2", pair(1e-6, 1e-19, -0.5, 2), 0, 25.01620},
+		{"1um -500mV z=3", pair(1e-6, 1e-19, -0.5, 3), 0, 5.160609},
+		{"1um -10mV z=1", pair(1e-6, 1e-20, -0.01, 1), 0, 3.747882},
+		{"1um -10mV z=2", pair(1e-6, 1e-20, -0.01, 2), 0, 3.615650},
+		{"1um -10mV z=3", pair(1e-6, 1e-20, -0.01, 3), 0, 3.409223},
+	}
+	got := map[string]float64{}
+	for _, tt := range tests {
+		i, ok := CriticalIonicStrength(tt.pair, tt.criterion)
+		got[tt.name] = i
+		// 1e-4 decades of bisection plus the two scans' resolution.
+		if !ok || interactionRelErr(i, tt.want) > 5e-4 {
+			t.Errorf("%s: got %.7g mol/m^3 (ok %v), want %.7g", tt.name, i, ok, tt.want)
+		}
+		if ok {
+			below := tt.pair.WithIonicStrength(i).Barrier()
+			if !below.Found || below.Energy < tt.criterion {
+				t.Errorf("%s: barrier %v at the returned I does not meet the criterion", tt.name, below)
+			}
+		}
+	}
+	// Schulze–Hardy with the numerical solve, in z:z salt concentration
+	// c = I/z^2: high potential 1 : 1/64 : 1/729, low potential 1 : 1/4 : 1/9
+	// (Verwey & Overbeek 1948), within 10 % (exact Hamaker, finite kappa a).
+	for _, sh := range []struct {
+		prefix string
+		ratios [2]float64
+	}{{"1um -500mV", [2]float64{1.0 / 64, 1.0 / 729}}, {"1um -10mV", [2]float64{1.0 / 4, 1.0 / 9}}} {
+		c1 := got[sh.prefix+" z=1"]
+		for k, z := range []int{2, 3} {
+			name := sh.prefix + " z=" + string(rune('0'+z))
+			ratio := got[name] / float64(z*z) / c1
+			if interactionRelErr(ratio, sh.ratios[k]) > 0.1 {
+				t.Errorf("%s: c ratio %.5f, Schulze–Hardy %.5f", name, ratio, sh.ratios[k])
+			}
+		}
+	}
+	// The numerical CCC of a large sphere at saturated potential approaches
+	// the closed form (3 % here: epsr 78.4 vs 78.5 and the exact Hamaker term).
+	if i := got["1um -500mV z=1"]; interactionRelErr(i, CCCHighPotential(1e-19, 1, 78.4, interactionTempK, 1)) > 0.03 {
+		t.Errorf("numerical %g vs closed form %g", i, CCCHighPotential(1e-19, 1, 78.4, interactionTempK, 1))
+	}
+}
+
+func TestCriticalIonicStrengthOutOfRange(t *testing.T) {
+	t.Parallel()
+	// Without attraction salt cannot remove the barrier: +Inf, not ok.
+	p := Pair{Radius: 100e-9, Potential: -0.03, EpsR: 78.4, TempK: interactionTempK}
+	if i, ok := CriticalIonicStrength(p, 0); ok || !math.IsInf(i, 1) {
+		t.Errorf("no attraction: got %g, %v, want +Inf, false", i, ok)
+	}
+	// Uncharged: no barrier at any salt, so 0, not ok.
+	p.Hamaker, p.Potential = 1e-20, 0
+	if i, ok := CriticalIonicStrength(p, 0); ok || i != 0 {
+		t.Errorf("uncharged: got %g, %v, want 0, false", i, ok)
+	}
+}
+
+func BenchmarkCriticalIonicStrength(b *testing.B) {
+	p := dlvoPair(-0.025, 1)
+	criterion := 15 * Boltzmann * interactionTempK
+	for b.Loop() {
+		CriticalIonicStrength(p, criterion)
+	}
+}

@@ -1,0 +1,305 @@
+package physics
+
+import "math"
+
+// MinimumSeparation is the closest approach of two surfaces, 0.2 nm, in m: a
+// Born-repulsion / hydration-layer cut-off (about one water molecule) below
+// which the continuum van der Waals and double-layer expressions lose
+// meaning. Extremum searches, the stability ratio and SeparationGrid start
+// there. Israelachvili (Intermolecular and Surface Forces, 3rd ed., 2011,
+// ch. 13) uses a cut-off of 0.165 nm for contact between dry solids; 0.2 nm
+// for hydrated surfaces is common practice.
+const MinimumSeparation = 0.2e-9
+
+// Pair describes two equal spheres in a liquid and selects the models of
+// their interaction energy, in SI units:
+//
+//   - Radius (m, > 0) of each sphere.
+//   - Hamaker (J): particle–medium–particle constant A131; 0 switches the van
+//     der Waals attraction off.
+//   - Potential (V): surface (Stern, zeta) potential of each sphere; 0 or
+//     Kappa = 0 switches the double layer off.
+//   - Kappa (1/m, >= 0): inverse Debye length, 0 without electrolyte.
+//   - EpsR (> 0) relative permittivity and TempK (K, > 0) temperature.
+//   - Valence: counter-ion valence for the linear superposition double layer;
+//     0 is read as 1.
+//   - Retarded: Gregory's retarded van der Waals (GregoryLambda) instead of
+//     Hamaker's exact non-retarded expression.
+//   - ConstantPotential: Hogg–Healy–Fuerstenau instead of linear
+//     superposition.
+//   - DepletionRange (m, >= 0) and DepletionDensity (1/m^3, >= 0): depletion
+//     layer thickness and number density of free polymer (Asakura–Oosawa);
+//     either 0 switches depletion off.
+//   - StericThickness (m, >= 0): an adsorbed layer that acts as a hard wall at
+//     h = 2 StericThickness. Separations below the wall are excluded rather
+//     than given an infinite energy: searches and the stability ratio start
+//     at max(MinimumSeparation, 2 StericThickness).
+//
+// Methods panic when a field is out of its domain (programmer misuse; the
+// advisor validates user input first).
+type Pair struct {
+	Radius, Hamaker, Potential, Kappa, EpsR, TempK float64
+	Valence                                        int
+	Retarded                                       bool
+	ConstantPotential                              bool
+	DepletionRange, DepletionDensity               float64
+	StericThickness                                float64
+}
+
+// Extremum is a stationary point of the interaction energy: Energy in J at
+// surface separation Separation in m. Found is false when there is none
+// (then Energy and Separation are 0).
+type Extremum struct {
+	Energy, Separation float64
+	Found              bool
+}
+
+// WithIonicStrength returns a copy of p whose Kappa is DebyeKappa of
+// ionicStrength (mol/m^3) at p.EpsR and p.TempK. It panics as DebyeKappa.
+func (p Pair) WithIonicStrength(ionicStrength float64) Pair {
+	p.Kappa = DebyeKappa(ionicStrength, p.EpsR, p.TempK)
+	return p
+}
+
+// Energy returns the total interaction energy in J at surface separation h
+// (m, >= 0): van der Waals (VdWHamaker, or VdWRetardedGregory when
+// p.Retarded) plus double layer (EDLLinearSuperposition, or
+// EDLHoggHealyFuerstenau when p.ConstantPotential) plus depletion
+// (AsakuraOosawa). At h = 0 it is -Inf when p.Hamaker > 0 and +Inf when
+// p.Hamaker < 0. It panics on a negative h or an invalid Pair.
+//
+// References: B. Derjaguin & L. Landau, Acta Physicochim. URSS 14 (1941) 633;
+// E. J. W. Verwey & J. Th. G. Overbeek, Theory of the Stability of Lyophobic
+// Colloids (1948); and the references of the three parts.
+func (p Pair) Energy(h float64) float64 {
+	c := p.curve()
+	return c.energy(checkSeparation(h))
+}
+
+// Parts returns the three contributions to Energy in J: van der Waals, double
+// layer and depletion, at surface separation h (m, >= 0).
+func (p Pair) Parts(h float64) (vdw, edl, depletion float64) {
+	c := p.curve()
+	return c.parts(checkSeparation(h))
+}
+
+// Barrier returns the primary maximum of the energy (the barrier to
+// aggregation in the primary minimum): the largest energy on
+// [max(MinimumSeparation, 2 StericThickness), h_max] (see SeparationGrid for
+// h_max). It counts only when it is above 0 J and lies inside the range; a
+// curve that is attractive everywhere, or rises to the far end, has none.
+// When the energy falls monotonically from the closest approach the barrier
+// is reported there (the energy at steric or Born contact).
+//
+// Method: a 40-point logarithmic scan brackets the maximum, golden-section
+// search in ln h refines it to a relative width of 1e-5 (J. Kiefer, Proc. Am.
+// Math. Soc. 4 (1953) 502).
+func (p Pair) Barrier() Extremum {
+	c := p.curve()
+	b, _ := c.extrema(false)
+	return b
+}
+
+// SecondaryMinimum returns the secondary minimum: the lowest energy beyond
+// the barrier, counted only when it is below 0 J, lies inside the search
+// range and a barrier exists. Method as Barrier.
+func (p Pair) SecondaryMinimum() Extremum {
+	_, m := p.Extrema()
+	return m
+}
+
+// Extrema returns Barrier and SecondaryMinimum from one scan.
+func (p Pair) Extrema() (barrier, secondaryMinimum Extremum) {
+	c := p.curve()
+	return c.extrema(true)
+}
+
+// SeparationGrid returns n >= 2 logarithmically spaced surface separations
+// (m) for plotting p's energy curve, from max(MinimumSeparation,
+// 2 StericThickness) to h_max = the largest of 50 nm, 30 Debye lengths
+// (capped at 10 radii, far beyond where the Derjaguin-limit double layer
+// means anything), 3 depletion ranges and 10 times the start. It panics if n < 2
+// or p is invalid.
+func SeparationGrid(p Pair, n int) []float64 {
+	if n < 2 {
+		panic("physics: SeparationGrid needs n >= 2")
+	}
+	c := p.curve()
+	lo, hi := c.searchRange()
+	grid := make([]float64, n)
+	ratio := math.Pow(hi/lo, 1/float64(n-1))
+	h := lo
+	for i := range grid {
+		grid[i] = h
+		h *= ratio
+	}
+	grid[n-1] = hi
+	return grid
+}
+
+// pairCurve is a Pair checked once, with its prefactors precomputed, so that
+// the searches and quadratures evaluate only exp, log and arithmetic.
+type pairCurve struct {
+	radius, hamaker    float64
+	retarded           bool
+	kappa              float64
+	edlContact         float64 // LSA: 32 pi eps a (kT/ze)^2 gamma^2; HHF: 2 pi eps a psi^2 (J)
+	constantPotential  bool
+	depletionRange     float64
+	depletionPrefactor float64 // n kT pi/12 (J/m^3)
+	stericWall, kT     float64
+}
+
+func (p Pair) curve() pairCurve {
+	const maxF = math.MaxFloat64
+	if !(p.Radius > 0 && p.Radius <= maxF) || !(p.TempK > 0 && p.TempK <= maxF) || !(p.EpsR > 0 && p.EpsR <= maxF) ||
+		!(p.Kappa >= 0 && p.Kappa <= maxF) || math.IsNaN(p.Hamaker) || math.IsInf(p.Hamaker, 0) ||
+		math.IsNaN(p.Potential) || math.IsInf(p.Potential, 0) || p.Valence < 0 ||
+		!(p.DepletionRange >= 0 && p.DepletionRange <= maxF) || !(p.DepletionDensity >= 0 && p.DepletionDensity <= maxF) ||
+		!(p.StericThickness >= 0 && p.StericThickness <= maxF) {
+		panic("physics: invalid Pair (need finite Radius, EpsR, TempK > 0; Kappa, depletion and steric fields >= 0; Valence >= 0)")
+	}
+	z := p.Valence
+	if z == 0 {
+		z = 1
+	}
+	c := pairCurve{
+		radius:            p.Radius,
+		hamaker:           p.Hamaker,
+		retarded:          p.Retarded,
+		kappa:             p.Kappa,
+		constantPotential: p.ConstantPotential,
+		depletionRange:    p.DepletionRange,
+		stericWall:        2 * p.StericThickness,
+		kT:                Boltzmann * p.TempK,
+	}
+	if p.ConstantPotential {
+		c.edlContact = hhfPrefactor(p.Radius, p.Potential, p.EpsR)
+	} else {
+		c.edlContact = lsaPrefactor(p.Radius, p.Potential, p.EpsR, p.TempK, z)
+	}
+	c.depletionPrefactor = p.DepletionDensity * c.kT * math.Pi / 12
+	return c
+}
+
+func checkSeparation(h float64) float64 {
+	if !(h >= 0 && h <= math.MaxFloat64) {
+		panic("physics: separation h must be finite and >= 0")
+	}
+	return h
+}
+
+func (c *pairCurve) energy(h float64) float64 {
+	vdw, edl, dep := c.parts(h)
+	return vdw + edl + dep
+}
+
+func (c *pairCurve) parts(h float64) (vdw, edl, depletion float64) {
+	switch {
+	case c.hamaker == 0:
+	case h == 0:
+		vdw = math.Inf(-int(math.Copysign(1, c.hamaker)))
+	case c.retarded:
+		vdw = -c.hamaker * c.radius / (12 * h) * gregoryRetardation(GregoryLambda/(gregoryB*h))
+	default:
+		vdw = -c.hamaker / 6 * hamakerSphereSum(c.radius, h)
+	}
+	if c.kappa > 0 && c.edlContact > 0 {
+		if c.constantPotential {
+			edl = c.edlContact * math.Log1p(math.Exp(-c.kappa*h))
+		} else {
+			edl = c.edlContact * math.Exp(-c.kappa*h)
+		}
+	}
+	if gap := 2*c.depletionRange - h; gap > 0 && c.depletionPrefactor > 0 {
+		depletion = -c.depletionPrefactor * (6*c.radius + 4*c.depletionRange + h) * gap * gap
+	}
+	return vdw, edl, depletion
+}
+
+// searchRange is the separation interval of the extremum searches; see
+// SeparationGrid.
+func (c *pairCurve) searchRange() (lo, hi float64) {
+	lo = math.Max(MinimumSeparation, c.stericWall)
+	hi = 50e-9
+	if c.kappa > 0 {
+		hi = math.Max(hi, math.Min(30/c.kappa, 10*c.radius))
+	}
+	if c.depletionPrefactor > 0 {
+		hi = math.Max(hi, 3*c.depletionRange)
+	}
+	return lo, math.Max(hi, 10*lo)
+}
+
+const scanPoints = 40
+
+// extrema scans the energy on a logarithmic grid and refines the barrier and,
+// when withMinimum, the secondary minimum.
+func (c *pairCurve) extrema(withMinimum bool) (barrier, minimum Extremum) {
+	lo, hi := c.searchRange()
+	var hs, vs [scanPoints]float64
+	ratio := math.Pow(hi/lo, 1.0/(scanPoints-1))
+	h := lo
+	top := 0
+	for i := range hs {
+		hs[i], vs[i] = h, c.energy(h)
+		if vs[i] > vs[top] {
+			top = i
+		}
+		h *= ratio
+	}
+	if top == scanPoints-1 {
+		return Extremum{}, Extremum{}
+	}
+	// Refine before judging the sign: a barrier about to vanish can be a
+	// bump narrower than the grid spacing.
+	barrier = c.refine(&hs, &vs, top, 1)
+	if !(barrier.Energy > 0) {
+		return Extremum{}, Extremum{}
+	}
+	if !withMinimum {
+		return barrier, Extremum{}
+	}
+	bottom := top + 1
+	for i := top + 1; i < scanPoints; i++ {
+		if vs[i] < vs[bottom] {
+			bottom = i
+		}
+	}
+	if !(vs[bottom] < 0) || bottom == scanPoints-1 {
+		return barrier, Extremum{}
+	}
+	return barrier, c.refine(&hs, &vs, bottom, -1)
+}
+
+// refine polishes grid point i of a maximum (sign = 1) or minimum (sign = -1)
+// by golden-section search in ln h over its two neighbouring intervals and
+// keeps the grid point if the search does no better.
+func (c *pairCurve) refine(hs, vs *[scanPoints]float64, i int, sign float64) Extremum {
+	a := math.Log(hs[max(i-1, 0)])
+	b := math.Log(hs[min(i+1, scanPoints-1)])
+	const invPhi = 0.61803398874989484820
+	x1 := b - invPhi*(b-a)
+	x2 := a + invPhi*(b-a)
+	f1 := sign * c.energy(math.Exp(x1))
+	f2 := sign * c.energy(math.Exp(x2))
+	for b-a > 1e-5 {
+		if f1 > f2 {
+			b, x2, f2 = x2, x1, f1
+			x1 = b - invPhi*(b-a)
+			f1 = sign * c.energy(math.Exp(x1))
+		} else {
+			a, x1, f1 = x1, x2, f2
+			x2 = a + invPhi*(b-a)
+			f2 = sign * c.energy(math.Exp(x2))
+		}
+	}
+	best := Extremum{Energy: vs[i], Separation: hs[i], Found: true}
+	if f1 > sign*best.Energy {
+		best.Energy, best.Separation = sign*f1, math.Exp(x1)
+	}
+	if f2 > sign*best.Energy {
+		best.Energy, best.Separation = sign*f2, math.Exp(x2)
+	}
+	return best
+}

@@ -1,0 +1,91 @@
+package physics
+
+import "math"
+
+// RapidCollisionKernel returns Smoluchowski's perikinetic collision kernel
+// in m^3/s for equal spheres in rapid (diffusion-limited) aggregation,
+//
+//	beta = 8 kT / (3 eta),
+//
+// in the convention where the collision rate per unit volume is
+// beta N^2 / 2 (J = 16 pi D a N^2 / 2 with D = kT/(6 pi eta a)); it does not
+// depend on size. viscosity in Pa s, tempK in K. It panics unless both are
+// finite and > 0.
+//
+// Reference: M. von Smoluchowski, "Versuch einer mathematischen Theorie der
+// Koagulationskinetik kolloider Lösungen", Z. Phys. Chem. 92 (1917) 129.
+func RapidCollisionKernel(viscosity, tempK float64) float64 {
+	checkKineticsArgs(viscosity, tempK)
+	return 8 * Boltzmann * tempK / (3 * viscosity)
+}
+
+// RapidAggregationRateConstant returns the number-loss rate constant k in
+// m^3/s of rapid perikinetic aggregation, dN/dt = -k N^2 with
+// k = 4 kT/(3 eta), half of RapidCollisionKernel because each collision
+// removes one particle of two. Slow aggregation divides it by the stability
+// ratio W. Arguments and panics as RapidCollisionKernel.
+//
+// Reference: Smoluchowski (1917); D. J. Shaw, Introduction to Colloid and
+// Surface Chemistry, 4th ed. (1992), ch. 8.
+func RapidAggregationRateConstant(viscosity, tempK float64) float64 {
+	return RapidCollisionKernel(viscosity, tempK) / 2
+}
+
+// Log10HalfLife returns log10 of the aggregation half-life in s, the time in
+// which the particle number falls to half its initial value N0
+// (numberDensity, 1/m^3) in Brownian aggregation slowed by the stability
+// ratio W (given as log10W):
+//
+//	t_1/2 = 3 eta W / (4 kT N0)
+//
+// It returns +Inf for N0 = 0 (nothing to aggregate). It panics unless
+// viscosity and tempK are finite and > 0, numberDensity is finite and >= 0
+// and log10W is not NaN.
+//
+// Reference: Smoluchowski (1917); the half-life of second-order kinetics
+// 1/(k N0) with k = RapidAggregationRateConstant/W.
+func Log10HalfLife(viscosity, tempK, numberDensity, log10W float64) float64 {
+	checkKineticsArgs(viscosity, tempK)
+	if !(numberDensity >= 0 && numberDensity <= math.MaxFloat64) || math.IsNaN(log10W) {
+		panic("physics: Log10HalfLife needs a finite numberDensity >= 0 and a log10W")
+	}
+	if numberDensity == 0 {
+		return math.Inf(1)
+	}
+	return math.Log10(3*viscosity/(4*Boltzmann*tempK)) - math.Log10(numberDensity) + log10W
+}
+
+// NumberDensity returns the number of spheres per m^3 at volume fraction phi
+// (0 <= phi <= 1) of spheres of radius radius (m, > 0): phi / ((4/3) pi a^3).
+// It panics outside that domain.
+func NumberDensity(phi, radius float64) float64 {
+	if !(phi >= 0 && phi <= 1) || !(radius > 0 && radius <= math.MaxFloat64) {
+		panic("physics: NumberDensity needs 0 <= phi <= 1 and a finite radius > 0")
+	}
+	return phi / (4.0 / 3 * math.Pi * radius * radius * radius)
+}
+
+// OrthoPerikineticRatio returns the ratio of the orthokinetic (shear-induced)
+// to the perikinetic (Brownian) collision kernel of equal spheres of diameter
+// diameter (m) in laminar shear of rate shearRate (1/s):
+//
+//	(4/3) G d^3 / (8 kT/(3 eta)) = G d^3 eta / (2 kT)
+//
+// Shear dominates Brownian aggregation above about 1. It panics unless
+// shearRate >= 0, diameter > 0, viscosity > 0 and tempK > 0, all finite.
+//
+// Reference: M. von Smoluchowski, Z. Phys. Chem. 92 (1917) 129; J. Gregory,
+// Particles in Water (2006), ch. 6.
+func OrthoPerikineticRatio(shearRate, diameter, viscosity, tempK float64) float64 {
+	checkKineticsArgs(viscosity, tempK)
+	if !(shearRate >= 0 && shearRate <= math.MaxFloat64) || !(diameter > 0 && diameter <= math.MaxFloat64) {
+		panic("physics: OrthoPerikineticRatio needs a finite shearRate >= 0 and diameter > 0")
+	}
+	return shearRate * diameter * diameter * diameter * viscosity / (2 * Boltzmann * tempK)
+}
+
+func checkKineticsArgs(viscosity, tempK float64) {
+	if !(viscosity > 0 && viscosity <= math.MaxFloat64) || !(tempK > 0 && tempK <= math.MaxFloat64) {
+		panic("physics: aggregation kinetics needs finite viscosity > 0 and tempK > 0")
+	}
+}

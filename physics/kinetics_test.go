@@ -1,0 +1,62 @@
+package physics
+
+import (
+	"math"
+	"testing"
+)
+
+func TestAggregationKinetics(t *testing.T) {
+	t.Parallel()
+	const eta, tempK = 0.89e-3, 298.15
+	n0 := NumberDensity(0.1, 0.5e-6)
+	// [calc] testdata/reference/interaction.py; REFERENCES.md: kernel
+	// 1.233e-17 m^3/s, number-loss constant 6.17e-18 m^3/s, half-life
+	// 1.62e17 W/N0 s, 0.85 s at a = 0.5 um and phi = 0.1, ortho/peri 10.8.
+	tests := []struct {
+		name      string
+		got, want float64
+		tol       float64
+	}{
+		{"collision kernel", RapidCollisionKernel(eta, tempK), 1.233380e-17, 1e-6},
+		{"number-loss constant", RapidAggregationRateConstant(eta, tempK), 6.166899e-18, 1e-6},
+		{"N0", n0, 1.909859e17, 1e-6},
+		{"half-life", math.Pow(10, Log10HalfLife(eta, tempK, n0, 0)), 0.849047, 1e-5},
+		{"half-life W = 1e6", math.Pow(10, Log10HalfLife(eta, tempK, n0, 6)-6), 0.849047, 1e-5},
+		{"half-life N0 = 1", math.Pow(10, Log10HalfLife(eta, tempK, 1, 0)), 1.621561e17, 1e-6},
+		{"ortho/peri d = 1 um G = 100/s", OrthoPerikineticRatio(100, 1e-6, eta, tempK), 10.810404, 1e-6},
+	}
+	for _, tt := range tests {
+		if e := interactionRelErr(tt.got, tt.want); e > tt.tol {
+			t.Errorf("%s: got %.7g, want %.7g (rel err %.2g)", tt.name, tt.got, tt.want, e)
+		}
+	}
+	// [pub] Shaw, Introduction to Colloid and Surface Chemistry: rapid
+	// half-life "of the order of 1e11/n0 s" with n0 in cm^-3.
+	// One particle per cm^3 is 1e6 per m^3.
+	if got := Log10HalfLife(eta, tempK, 1e6, 0); math.Abs(got-11) > 0.5 {
+		t.Errorf("Shaw's order of magnitude: log10(t n0[cm^-3]) = %.2f, want about 11", got)
+	}
+	if got := Log10HalfLife(eta, tempK, 0, 3); !math.IsInf(got, 1) {
+		t.Errorf("no particles: got %g, want +Inf", got)
+	}
+}
+
+func TestKineticsPanics(t *testing.T) {
+	t.Parallel()
+	for name, f := range map[string]func(){
+		"zero viscosity":   func() { RapidCollisionKernel(0, 298) },
+		"zero temperature": func() { RapidAggregationRateConstant(1e-3, 0) },
+		"NaN log10W":       func() { Log10HalfLife(1e-3, 298, 1e18, math.NaN()) },
+		"phi above 1":      func() { NumberDensity(1.5, 1e-6) },
+		"negative shear":   func() { OrthoPerikineticRatio(-1, 1e-6, 1e-3, 298) },
+	} {
+		func() {
+			defer func() {
+				if recover() == nil {
+					t.Errorf("%s: no panic", name)
+				}
+			}()
+			f()
+		}()
+	}
+}
