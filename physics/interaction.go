@@ -273,33 +273,48 @@ func (c *pairCurve) extrema(withMinimum bool) (barrier, minimum Extremum) {
 }
 
 // refine polishes grid point i of a maximum (sign = 1) or minimum (sign = -1)
-// by golden-section search in ln h over its two neighbouring intervals and
-// keeps the grid point if the search does no better.
+// within its two neighbouring intervals, by Newton's method on dV/d(ln h) = 0
+// with central differences (step 1e-4 in ln h), falling back to bisection of
+// the bracket whenever a step leaves it or the curvature has the wrong sign;
+// it keeps the grid point if the search does no better. A smooth extremum
+// takes three or four steps of three evaluations each, about half the
+// evaluations of a golden-section search to the same 1e-6 in ln h.
 func (c *pairCurve) refine(hs, vs *[scanPoints]float64, i int, sign float64) Extremum {
 	a := math.Log(hs[max(i-1, 0)])
 	b := math.Log(hs[min(i+1, scanPoints-1)])
-	const invPhi = 0.61803398874989484820
-	x1 := b - invPhi*(b-a)
-	x2 := a + invPhi*(b-a)
-	f1 := sign * c.energy(math.Exp(x1))
-	f2 := sign * c.energy(math.Exp(x2))
-	for b-a > 1e-5 {
-		if f1 > f2 {
-			b, x2, f2 = x2, x1, f1
-			x1 = b - invPhi*(b-a)
-			f1 = sign * c.energy(math.Exp(x1))
-		} else {
-			a, x1, f1 = x1, x2, f2
-			x2 = a + invPhi*(b-a)
-			f2 = sign * c.energy(math.Exp(x2))
-		}
-	}
 	best := Extremum{Energy: vs[i], Separation: hs[i], Found: true}
-	if f1 > sign*best.Energy {
-		best.Energy, best.Separation = sign*f1, math.Exp(x1)
+	if i == 0 || i == scanPoints-1 {
+		return best
 	}
-	if f2 > sign*best.Energy {
-		best.Energy, best.Separation = sign*f2, math.Exp(x2)
+	s, f := c.polish(a, b, math.Log(hs[i]), sign)
+	if sign*f > sign*best.Energy {
+		best.Energy, best.Separation = f, math.Exp(s)
 	}
 	return best
+}
+
+// polish finds the extremum of sign*V(exp(s)) in [a, b] starting from s.
+func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
+	const d = 1e-4
+	v := func(x float64) float64 { return sign * c.energy(math.Exp(x)) }
+	f := v(s)
+	for iter := 0; iter < 40; iter++ {
+		fm, fp := v(s-d), v(s+d)
+		slope := (fp - fm) / (2 * d)
+		curv := (fp - 2*f + fm) / (d * d)
+		if slope > 0 {
+			a = s
+		} else {
+			b = s
+		}
+		next := s - slope/curv
+		if !(curv < 0) || !(next > a && next < b) {
+			next = (a + b) / 2
+		}
+		if math.Abs(next-s) < 1e-6 || b-a < 1e-6 {
+			break
+		}
+		s, f = next, v(next)
+	}
+	return s, sign * f
 }
