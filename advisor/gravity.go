@@ -15,8 +15,8 @@ func (ev *evaluation) computeGravity() {
 	c := ev.c
 	eta, rhoL, T := c.liquid.viscosity, c.liquid.density, c.storageTempK
 	drho := c.particleDensity - rhoL
-	ev.set("liquid_viscosity", eta*1e3, "liquid library at the storage temperature (see assumptions)")
-	ev.set("liquid_density", rhoL, "liquid library at the storage temperature (see assumptions)")
+	ev.set("liquid_viscosity", eta*1e3, "request override or liquid library, at the storage temperature (see assumptions)")
+	ev.set("liquid_density", rhoL, "request override or liquid library, at the storage temperature (see assumptions)")
 	ev.set("particle_density", c.particleDensity, "request or material library")
 	ev.set("density_difference", drho, "particle minus liquid density")
 

@@ -41,6 +41,16 @@ func (ev *evaluation) computeInteraction() {
 	ev.addLayers()
 	ev.hasPair = true
 
+	if shielded(ev.pair) {
+		ev.n.add("the steric layers stop the pair where the total energy is still repulsive (%s at layer contact): there is no well to aggregate into, so the barrier, stability ratio and half-life are unbounded",
+			formatQuantity(ev.pair.Energy(2*ev.pair.StericThickness)/kT, "kT"))
+		ev.set("energy_barrier", math.Inf(1), "")
+		ev.set("log10_stability_ratio", math.Inf(1), "")
+		ev.set("log10_aggregation_half_life_days", math.Inf(1), "")
+		ev.set("log10_half_life_over_shelf_life", math.Inf(1), "")
+		ev.secondaryMinimum(kT)
+		return
+	}
 	b := ev.pair.Barrier()
 	if b.Found {
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (gonum search)")
@@ -48,14 +58,25 @@ func (ev *evaluation) computeInteraction() {
 	} else {
 		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
 	}
+	ev.secondaryMinimum(kT)
+	ev.kinetics()
+	ev.criticalCoagulation()
+}
+
+func (ev *evaluation) secondaryMinimum(kT float64) {
 	if m := ev.pair.SecondaryMinimum(); m.Found {
 		ev.set("secondary_minimum", m.Energy/kT, "minimum of the total energy beyond the barrier")
 		ev.set("secondary_minimum_position", m.Separation*1e9, "separation at the secondary minimum")
 	} else {
 		ev.f["secondary_minimum"] = 0.0
 	}
-	ev.kinetics()
-	ev.criticalCoagulation()
+}
+
+// shielded reports a pair whose steric layers meet where the total energy is
+// still repulsive: the hard steric wall then keeps it out of any well, and
+// Fuchs' capture at the wall does not apply (Napper 1983, ch. 2).
+func shielded(p physics.Pair) bool {
+	return p.StericThickness > 0 && p.Energy(2*p.StericThickness) >= 0
 }
 
 func (ev *evaluation) chooseModels() {
@@ -97,7 +118,7 @@ func (ev *evaluation) kinetics() {
 	ev.set("log10_stability_ratio", log10W, "Fuchs integral with Honig hydrodynamics over the total energy")
 	ev.set("rapid_aggregation_half_life", math.Pow(10, rapid), "Smoluchowski 3 eta/(4 kT N0), median particles")
 	ev.set("log10_aggregation_half_life_days", slow-math.Log10(day), "log10(W x rapid half-life / 1 d)")
-	ev.set("half_life_over_shelf_life", slow-math.Log10(c.shelfLife), "log10 of half-life over shelf life")
+	ev.set("log10_half_life_over_shelf_life", slow-math.Log10(c.shelfLife), "log10 of half-life over shelf life")
 	if c.shear > 0 {
 		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.shear, 2*c.radius, c.liquid.viscosity, c.storageTempK),
 			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")

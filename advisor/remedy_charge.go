@@ -19,10 +19,17 @@ func stabilityCriterion(ev *evaluation) string {
 		ev.c.criteria.minBarrierKT, ev.c.criteria.halfLifeRatio)
 }
 
+// shieldedMargin is the margin of a sterically shielded pair: finite, so that
+// root finding across the onset of shielding stays well defined.
+const shieldedMargin = 1000.0
+
 // stabilityMargin is the smaller of the barrier margin (kT) and the
 // half-life margin (decades) of a pair; >= 0 means acceptable.
 func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
 	c := ev.c
+	if shielded(p) {
+		return shieldedMargin
+	}
 	kT := physics.Boltzmann * c.storageTempK
 	barrier := 0.0
 	if b := p.Barrier(); b.Found {
@@ -87,6 +94,12 @@ func solveSurfaceCharge(ev *evaluation) (Target, string, bool) {
 // smallestAcceptablePotential solves stabilityMargin = 0 on |psi| between
 // the present potential and 200 mV, keeping the sign of the surface.
 func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
+	return potentialWhere(ev, func(p physics.Pair) float64 { return stabilityMargin(ev, p) })
+}
+
+// potentialWhere finds the smallest |psi| in [0, 200 mV] at which margin, a
+// function growing with |psi|, reaches zero; the surface keeps its sign.
+func potentialWhere(ev *evaluation, margin func(p physics.Pair) float64) (float64, bool) {
 	if !ev.hasPair {
 		return 0, false
 	}
@@ -94,21 +107,24 @@ func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
 	if ev.pair.Potential > 0 {
 		sign = 1
 	}
-	margin := func(psi float64) float64 {
+	at := func(psi float64) float64 {
 		p := ev.pair
 		p.Potential = sign * psi
-		return stabilityMargin(ev, p)
+		return margin(p)
 	}
-	lo, hi := math.Abs(ev.pair.Potential), 0.2
-	if margin(lo) >= 0 {
-		return lo, true
+	const hi = 0.2
+	if at(0) >= 0 {
+		return 0, true
 	}
-	if margin(hi) < 0 {
+	if at(hi) < 0 {
 		return 0, false
 	}
-	return physics.FindRoot(margin, lo, hi, 1e-5)
+	return physics.FindRoot(at, 0, hi, 1e-5)
 }
 
+// solvePH finds the pH at which the surface-potential estimate reaches the
+// needed potential, anchored to the measured zeta at the present pH when
+// there is one (the estimate's shape, the measurement's scale).
 func solvePH(ev *evaluation) (Target, string, bool) {
 	c := ev.c
 	if math.IsNaN(c.iep) {
@@ -118,19 +134,26 @@ func solvePH(ev *evaluation) (Target, string, bool) {
 	if !ok {
 		return Target{}, stabilityCriterion(ev) + ": not reachable by pH alone at this ionic strength", false
 	}
+	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
+	if c.zetaSource != "estimated" && !math.IsNaN(c.ph) {
+		if model := physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK); model*c.zeta > 0 {
+			scale = c.zeta / model
+			anchor = "; pH estimate model scaled to the measured zeta at the present pH"
+		}
+	}
 	above := math.IsNaN(c.ph) || c.ph >= c.iep
 	lo, hi, op := c.iep, 14.0, ">="
 	if !above {
 		lo, hi, op = 0, c.iep, "<="
 	}
 	f := func(ph float64) float64 {
-		return math.Abs(physics.SurfacePotentialFromPH(ph, c.iep, c.storageTempK)) - psi
+		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.iep, c.storageTempK)) - psi
 	}
 	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
 	if !ok {
-		return Target{}, "the surface-potential estimate never reaches the needed potential between pH 0 and 14", false
+		return Target{}, stabilityCriterion(ev) + ": the needed potential is not reached between pH 0 and 14" + anchor, false
 	}
-	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(ev) + "; potential from the pH estimate model (see assumptions)", true
+	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(ev) + anchor, true
 }
 
 func solveMultivalent(ev *evaluation) (Target, string, bool) {
@@ -156,14 +179,22 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 	return Target{c.multivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
 }
 
+// looseFlocBarrierKT is the barrier below which particles join loose flocs
+// within days rather than years: a few kT (common practice of controlled
+// flocculation, where zeta is brought near zero by flocculating ions).
+const looseFlocBarrierKT = 5.0
+
 func solveControlledFlocculation(ev *evaluation) (Target, string, bool) {
-	if !ev.hasPair {
-		return Target{}, "no surface potential known", false
-	}
-	I, ok := physics.CriticalIonicStrength(ev.pair, 0)
+	kT := physics.Boltzmann * ev.c.storageTempK
+	psi, ok := potentialWhere(ev, func(p physics.Pair) float64 {
+		if b := p.Barrier(); b.Found {
+			return b.Energy/kT - looseFlocBarrierKT
+		}
+		return -looseFlocBarrierKT
+	})
+	crit := fmt.Sprintf("energy barrier <= %g kT so that particles join loose flocs; bring zeta down with flocculating ions, then confirm by sedimentation volume and redispersion", looseFlocBarrierKT)
 	if !ok {
-		return Target{}, "no ionic strength removes the barrier", false
+		return Target{}, crit + ": no surface potential known or the barrier stays high", false
 	}
-	return Target{"medium.ionic_strength_mM", ">=", I, "mM"},
-		"barrier just vanishes, so that particles join loose flocs; confirm by sedimentation volume and redispersion", true
+	return Target{"|particles.zeta_mV|", "<=", psi * 1e3, "mV"}, crit, true
 }

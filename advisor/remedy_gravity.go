@@ -34,13 +34,36 @@ func solveParticleSize(ev *evaluation) (Target, string, bool) {
 	return Target{"particles.diameter_nm", "<=", d * 1e9, "nm"}, clearLayerCriterion(ev), true
 }
 
+// Liquids reach densities of about 600 to 2000 kg/m^3 (hydrocarbons to
+// concentrated salt or sugar solutions; common practice): a density match
+// outside that range is not offered as a target.
+const (
+	lightestLiquid = 600.0
+	densestLiquid  = 2000.0
+)
+
+// solveDensityMatch matches the liquid to solid particles, and the droplets
+// (by a weighting agent) to the liquid for emulsions and foams.
 func solveDensityMatch(ev *evaluation) (Target, string, bool) {
 	c := ev.c
 	maxDrho := 9 * c.liquid.viscosity * allowedStokesSpeed(ev) / (2 * c.radius * c.radius * physics.StandardGravity)
-	if c.particleDensity >= c.liquid.density {
-		return Target{"medium.density_kg_m3", ">=", c.particleDensity - maxDrho, "kg/m^3"}, clearLayerCriterion(ev), true
+	crit := clearLayerCriterion(ev)
+	if c.phase != "solid" {
+		if c.particleDensity < c.liquid.density {
+			return Target{"particles.density_kg_m3", ">=", c.liquid.density - maxDrho, "kg/m^3"},
+				crit + "; a weighting agent in the droplets", true
+		}
+		return Target{"particles.density_kg_m3", "<=", c.liquid.density + maxDrho, "kg/m^3"}, crit, true
 	}
-	return Target{"medium.density_kg_m3", "<=", c.particleDensity + maxDrho, "kg/m^3"}, clearLayerCriterion(ev), true
+	t := Target{"medium.density_kg_m3", ">=", c.particleDensity - maxDrho, "kg/m^3"}
+	if c.particleDensity < c.liquid.density {
+		t = Target{"medium.density_kg_m3", "<=", c.particleDensity + maxDrho, "kg/m^3"}
+	}
+	if t.Value > densestLiquid || t.Value < lightestLiquid {
+		return Target{}, fmt.Sprintf("%s: needs a liquid of %s, outside the %g-%g kg/m^3 that liquids reach",
+			crit, formatQuantity(t.Value, "kg/m^3"), lightestLiquid, densestLiquid), false
+	}
+	return t, crit, true
 }
 
 func solveViscosity(ev *evaluation) (Target, string, bool) {

@@ -15,10 +15,18 @@ func stericCriterion(ev *evaluation) string {
 	return fmt.Sprintf("|van der Waals energy| at layer contact (h = 2 thickness) <= %g kT", ev.c.criteria.maxStericKT)
 }
 
+// thickestAdsorbedLayer is about the largest thickness adsorbed polymer or
+// surfactant layers reach (2-20 nm typical, 50 nm for long block
+// copolymers; common practice, cf. Napper 1983).
+const thickestAdsorbedLayer = 50e-9
+
 func solveStericThickness(ev *evaluation) (Target, string, bool) {
 	d := physics.MinimumStericThickness(ev.vdwOnly.Energy, ev.c.storageTempK, ev.c.criteria.maxStericKT)
-	return Target{"stabilizer.layer_thickness_nm", ">=", d * 1e9, "nm"},
-		stericCriterion(ev) + "; the layer must stay in good solvent", true
+	crit := stericCriterion(ev) + "; the layer must stay in good solvent"
+	if d > thickestAdsorbedLayer {
+		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", thickestAdsorbedLayer*1e9)
+	}
+	return Target{"stabilizer.layer_thickness_nm", ">=", d * 1e9, "nm"}, crit, true
 }
 
 func solveEmulsifierLayer(ev *evaluation) (Target, string, bool) {

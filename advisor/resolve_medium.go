@@ -110,9 +110,14 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 			formatQuantity(is, "mM"))
 	}
 	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
+		// The acid or base that set the pH brings its own monovalent
+		// counter-ion, so the ionic strength is that of a 1:1 salt at the
+		// concentration of the excess H+ or OH-.
 		pair := physics.IonsFromPH(*m.PH)
-		ions = append(ions, pair[:]...)
-		n.add("pH %g is outside 4-10: H+ and OH- added to the ionic strength", *m.PH)
+		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
+		ions = append(ions, monovalent(excess)...)
+		n.add("pH %g is outside 4-10: %s of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength",
+			*m.PH, formatQuantity(excess, "mM"))
 	}
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")

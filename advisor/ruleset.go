@@ -35,7 +35,7 @@ type rule struct {
 	placeholders []string
 }
 
-var placeholder = regexp.MustCompile(`\{([a-z0-9_]+)\}`)
+var placeholder = regexp.MustCompile(`\{([A-Za-z0-9_]+)\}`)
 
 // LoadRuleSet reads the catalogue (catalog.yaml) and every *.rules.yaml file
 // of builtin, then the rule files of each site pack, and compiles them. Any

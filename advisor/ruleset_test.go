@@ -53,8 +53,8 @@ func TestRuleErrorsNamePlace(t *testing.T) {
 	head := "rules:\n  - id: site.broken\n    cause: gravity_settling\n    symptoms: [settling]\n    certainty: 0.5\n    explain: x\n"
 	cases := []struct {
 		name, when, extra string
-		line, column       int
-		msg                string
+		line, column      int
+		msg               string
 	}{
 		{"unknown fact", "stokes_speed > 1", "", 7, 11, "unknown name stokes_speed"},
 		{"bad syntax", "stokes_velocity >", "", 7, 27, "unexpected token"},

@@ -40,7 +40,7 @@ var scaleSpecs = []ScaleSpec{
 	{"log10_stability_ratio", "1", "base-10 logarithm of the Fuchs stability ratio W"},
 	{"rapid_aggregation_half_life", "s", "Smoluchowski half-life without any barrier (W = 1)"},
 	{"log10_aggregation_half_life_days", "1", "base-10 logarithm of the aggregation half-life in days (with W)"},
-	{"half_life_over_shelf_life", "1", "log10 of the aggregation half-life over the shelf life"},
+	{"log10_half_life_over_shelf_life", "1", "base-10 logarithm of the aggregation half-life over the shelf life"},
 	{"critical_coagulation_concentration", "mM", "salt concentration at which the barrier vanishes, for the counter-ion valence present"},
 	{"ionic_strength_over_ccc", "1", "ionic strength over the critical ionic strength at which the barrier vanishes"},
 	{"steric_contact_energy", "kT", "van der Waals energy when the steric layers touch (h = 2 thickness)"},
