@@ -1,0 +1,74 @@
+package advisor
+
+import (
+	"encoding/json"
+	"os"
+	"testing"
+
+	"colloidtriage/rules"
+)
+
+func benchEngine(b *testing.B) *Engine {
+	b.Helper()
+	rs, err := LoadRuleSet(rules.FS)
+	if err != nil {
+		b.Fatal(err)
+	}
+	lib, err := LoadLibrary(rules.FS)
+	if err != nil {
+		b.Fatal(err)
+	}
+	return NewEngine(rs, lib)
+}
+
+func benchSample(b *testing.B, name string) *Sample {
+	b.Helper()
+	data, err := os.ReadFile("../testdata/demo/" + name)
+	if err != nil {
+		b.Fatal(err)
+	}
+	var s Sample
+	if err := json.Unmarshal(data, &s); err != nil {
+		b.Fatal(err)
+	}
+	return &s
+}
+
+func benchTriage(b *testing.B, s *Sample) {
+	e := benchEngine(b)
+	b.ReportAllocs()
+	b.ResetTimer()
+	for b.Loop() {
+		if _, err := e.Triage(s); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkTriageSingleSize is a full triage of one single-size sample with
+// its remedy targets (issue target: at most 50 us median on one core).
+func BenchmarkTriageSingleSize(b *testing.B) {
+	benchTriage(b, benchSample(b, "electrostatic_screening.json"))
+}
+
+// BenchmarkTriageGravity is the walking-skeleton demo, a settling complaint.
+func BenchmarkTriageGravity(b *testing.B) {
+	benchTriage(b, benchSample(b, "gravity_settling.json"))
+}
+
+// BenchmarkTriageTwentyClasses is a triage of a 20-class size distribution
+// (issue target: at most 1 ms).
+func BenchmarkTriageTwentyClasses(b *testing.B) {
+	s := benchSample(b, "electrostatic_screening.json")
+	s.Particles.SizeDistribution = nil
+	d50 := 400.0
+	if s.Particles.DiameterNm != nil {
+		d50 = *s.Particles.DiameterNm
+	}
+	for i := 0; i < 20; i++ {
+		f := float64(i+1) / 20
+		s.Particles.SizeDistribution = append(s.Particles.SizeDistribution,
+			SizeClass{DiameterNm: d50 * (0.3 + 1.4*f), VolumeFraction: 0.05})
+	}
+	benchTriage(b, s)
+}
