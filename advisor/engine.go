@@ -2,6 +2,8 @@ package advisor
 
 import (
 	"math"
+
+	"github.com/expr-lang/expr/vm"
 	"sort"
 	"strings"
 )
@@ -60,7 +62,7 @@ func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]strin
 }
 
 func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{}, scales: map[string]Scale{}, models: map[string]string{}, f: factTemplate()}
+	ev := &evaluation{n: &notes{}, scales: make(map[string]Scale, len(scaleSpecs)), models: map[string]string{}, f: factTemplate()}
 	c, err := e.resolve(s, ev.n)
 	if err != nil {
 		return nil, err
@@ -90,12 +92,13 @@ type causeScore struct {
 // and returns the causes with a positive score, best first.
 func (e *Engine) rank(ev *evaluation) []Cause {
 	scores := map[string]*causeScore{}
+	var machine vm.VM
 	run := func(after bool) {
 		for _, r := range e.rules.rules {
 			if r.AfterCauses != after || !r.appliesTo(ev.c.symptom) {
 				continue
 			}
-			out, err := runRule(r, ev.f)
+			out, err := runRule(&machine, r, ev.f)
 			if err != nil || !out {
 				continue
 			}

@@ -48,23 +48,23 @@ func (ev *evaluation) computeInteraction() {
 		ev.set("log10_stability_ratio", math.Inf(1), "")
 		ev.set("log10_aggregation_half_life_days", math.Inf(1), "")
 		ev.set("log10_half_life_over_shelf_life", math.Inf(1), "")
-		ev.secondaryMinimum(kT)
+		ev.setSecondaryMinimum(ev.pair.SecondaryMinimum(), kT)
 		return
 	}
-	b := ev.pair.Barrier()
+	b, m := ev.pair.Extrema()
 	if b.Found {
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (gonum search)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
 	} else {
 		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
 	}
-	ev.secondaryMinimum(kT)
-	ev.kinetics()
+	ev.setSecondaryMinimum(m, kT)
+	ev.kinetics(b)
 	ev.criticalCoagulation()
 }
 
-func (ev *evaluation) secondaryMinimum(kT float64) {
-	if m := ev.pair.SecondaryMinimum(); m.Found {
+func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {
+	if m.Found {
 		ev.set("secondary_minimum", m.Energy/kT, "minimum of the total energy beyond the barrier")
 		ev.set("secondary_minimum_position", m.Separation*1e9, "separation at the secondary minimum")
 	} else {
@@ -109,9 +109,9 @@ func (ev *evaluation) chooseModels() {
 
 // kinetics reports the Fuchs stability ratio and the Smoluchowski half-lives
 // as logarithms, so that very stable sols never overflow.
-func (ev *evaluation) kinetics() {
+func (ev *evaluation) kinetics(barrier physics.Extremum) {
 	c := ev.c
-	log10W := physics.Log10StabilityRatio(ev.pair, true)
+	log10W := physics.Log10StabilityRatioWith(ev.pair, barrier, true)
 	n0 := physics.NumberDensity(c.phi, c.radius)
 	rapid := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, 0)
 	slow := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, log10W)

@@ -32,7 +32,8 @@ func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
 	}
 	kT := physics.Boltzmann * c.storageTempK
 	barrier := 0.0
-	if b := p.Barrier(); b.Found {
+	b := p.Barrier()
+	if b.Found {
 		barrier = b.Energy / kT
 	}
 	byBarrier := barrier - c.criteria.minBarrierKT
@@ -40,7 +41,7 @@ func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
 		return byBarrier
 	}
 	n0 := physics.NumberDensity(c.phi, c.radius)
-	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, physics.Log10StabilityRatio(p, true))
+	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, physics.Log10StabilityRatioWith(p, b, true))
 	return math.Min(byBarrier, log10T-math.Log10(c.criteria.halfLifeRatio*c.shelfLife))
 }
 
@@ -58,18 +59,43 @@ func ionicStrengthFloor(ev *evaluation) float64 {
 	return 1e-6
 }
 
-// largestAcceptableIonicStrength solves stabilityMargin = 0 on log10 I.
+// largestAcceptableIonicStrength finds the largest ionic strength that meets
+// both criteria: first the barrier criterion, solved directly by
+// physics.CriticalIonicStrength; then, only if the half-life still falls
+// short there, the half-life margin by root finding below it.
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
-	lo, hi := ionicStrengthFloor(ev), ev.c.ionicStrength
-	margin := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
-	if margin(math.Log10(lo)) < 0 {
+	c := ev.c
+	floor := ionicStrengthFloor(ev)
+	kT := physics.Boltzmann * c.storageTempK
+	top, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT)
+	switch {
+	case !ok && top == 0:
+		return 0, false
+	case !ok || top > c.ionicStrength:
+		top = c.ionicStrength
+	}
+	if top < floor {
 		return 0, false
 	}
-	if hi <= lo || margin(math.Log10(hi)) >= 0 {
-		return hi, true
+	margin := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
+	hi, lowest := math.Log10(top), math.Log10(floor)
+	if margin(hi) >= 0 {
+		return top, true
 	}
-	x, ok := physics.FindRoot(margin, math.Log10(lo), math.Log10(hi), 1e-3)
-	return math.Pow(10, x), ok
+	// Step down a decade at a time: the half-life grows steeply as salt
+	// falls, so the root is usually within the first decade.
+	lo := hi
+	for {
+		hi, lo = lo, math.Max(lo-1, lowest)
+		if margin(lo) >= 0 {
+			break
+		}
+		if lo == lowest {
+			return 0, false
+		}
+	}
+	a, _, ok := physics.FindRootBracket(margin, lo, hi, 1e-3)
+	return math.Pow(10, a), ok
 }
 
 func solveIonicStrength(ev *evaluation) (Target, string, bool) {

@@ -31,8 +31,13 @@ type RuleSet struct {
 
 type rule struct {
 	ruleSpec
-	program      *vm.Program
-	placeholders []string
+	program *vm.Program
+	text    []textPart // explain, split at its placeholders once at load
+}
+
+// textPart is literal text, or a fact whose value is formatted in its place.
+type textPart struct {
+	literal, fact string
 }
 
 var placeholder = regexp.MustCompile(`\{([A-Za-z0-9_]+)\}`)
@@ -127,13 +132,17 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 			return rule{}, s.errorAt("evidence", fmt.Sprintf("evidence %q is not a numeric fact", name))
 		}
 	}
-	var holes []string
-	for _, m := range placeholder.FindAllStringSubmatch(s.Explain, -1) {
-		if _, ok := factIndex[m[1]]; !ok {
-			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", m[1]))
+	var text []textPart
+	last := 0
+	for _, m := range placeholder.FindAllStringSubmatchIndex(s.Explain, -1) {
+		name := s.Explain[m[2]:m[3]]
+		if _, ok := factIndex[name]; !ok {
+			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", name))
 		}
-		holes = append(holes, m[1])
+		text = append(text, textPart{literal: s.Explain[last:m[0]]}, textPart{fact: name})
+		last = m[1]
 	}
+	text = append(text, textPart{literal: s.Explain[last:]})
 	program, err := expr.Compile(s.When, compileOptions(s.AfterCauses)...)
 	if err != nil {
 		re := s.errorAt("when", err.Error())
@@ -144,7 +153,7 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 		}
 		return rule{}, re
 	}
-	return rule{ruleSpec: s, program: program, placeholders: holes}, nil
+	return rule{ruleSpec: s, program: program, text: text}, nil
 }
 
 // compileOptions declares the rule language: the facts with their types, a
@@ -208,11 +217,16 @@ func (s ruleSpec) appliesTo(symptom string) bool {
 
 // explain fills the placeholders of a rule's text with the facts' values.
 func (r rule) explain(f facts) string {
-	if len(r.placeholders) == 0 {
-		return r.Explain
+	if len(r.text) == 1 {
+		return r.text[0].literal
 	}
-	return placeholder.ReplaceAllStringFunc(r.Explain, func(m string) string {
-		name := strings.Trim(m, "{}")
-		return f.format(name)
-	})
+	var b strings.Builder
+	for _, part := range r.text {
+		if part.fact != "" {
+			b.WriteString(f.format(part.fact))
+		} else {
+			b.WriteString(part.literal)
+		}
+	}
+	return b.String()
 }

@@ -13,36 +13,48 @@ import "math"
 // Reference: Dowell & Jarratt, "A modified regula falsi method for
 // computing the root of an equation", BIT 11:168-174 (1971).
 func FindRoot(f func(float64) float64, lo, hi, tol float64) (x float64, ok bool) {
+	a, b, ok := FindRootBracket(f, lo, hi, tol)
+	if !ok {
+		return 0, false
+	}
+	return (a + b) / 2, true
+}
+
+// FindRootBracket is FindRoot that returns the final bracket instead of one
+// point: f(a) has the sign of f(lo) and f(b) that of f(hi), |b - a| < tol
+// (or f vanishes at the point returned at both ends). Callers that need the
+// root on a given side of a criterion take that end.
+func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64, ok bool) {
 	flo, fhi := f(lo), f(hi)
 	if math.IsNaN(flo) || math.IsNaN(fhi) || math.IsInf(flo, 0) || math.IsInf(fhi, 0) {
-		return 0, false
+		return 0, 0, false
 	}
 	if flo == 0 {
-		return lo, true
+		return lo, lo, true
 	}
 	if fhi == 0 {
-		return hi, true
+		return hi, hi, true
 	}
 	if (flo > 0) == (fhi > 0) {
-		return 0, false
+		return 0, 0, false
 	}
 	side := 0
-	for i := 0; i < 100; i++ {
-		x = (lo*fhi - hi*flo) / (fhi - flo)
+	for i := 0; i < 100 && math.Abs(hi-lo) >= tol; i++ {
+		x := (lo*fhi - hi*flo) / (fhi - flo)
 		if !(x > math.Min(lo, hi) && x < math.Max(lo, hi)) {
 			x = 0.5 * (lo + hi)
 		}
 		fx := f(x)
-		if fx == 0 || math.Abs(hi-lo) < tol {
-			return x, true
-		}
-		if (fx > 0) == (fhi > 0) {
+		switch {
+		case fx == 0:
+			return x, x, true
+		case (fx > 0) == (fhi > 0):
 			hi, fhi = x, fx
 			if side == 1 {
 				flo /= 2
 			}
 			side = 1
-		} else {
+		default:
 			lo, flo = x, fx
 			if side == -1 {
 				fhi /= 2
@@ -50,5 +62,5 @@ func FindRoot(f func(float64) float64, lo, hi, tol float64) (x float64, ok bool)
 			side = -1
 		}
 	}
-	return x, true
+	return lo, hi, true
 }

@@ -35,8 +35,25 @@ import (
 // Saville & W. R. Schowalter, Colloidal Dispersions (1989), ch. 8.
 func Log10StabilityRatio(p Pair, honig bool) float64 {
 	c := p.curve()
-	lo, hi := c.searchRange()
 	barrier, _ := c.extrema(false)
+	return c.log10StabilityRatio(barrier, honig)
+}
+
+// Log10StabilityRatioWith is Log10StabilityRatio for a pair whose barrier
+// was already found by Barrier or Extrema, which saves its search.
+func Log10StabilityRatioWith(p Pair, barrier Extremum, honig bool) float64 {
+	c := p.curve()
+	return c.log10StabilityRatio(barrier, honig)
+}
+
+// negligibleExponent: a panel whose integrand is below exp(-40) of the
+// barrier's at both ends, and which does not hold the barrier, adds less
+// than 1e-17 of the integral and is skipped (the curve has no other maximum
+// inside one panel).
+const negligibleExponent = -40.0
+
+func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
+	lo, hi := c.searchRange()
 	ref := 0.0
 	if barrier.Found {
 		ref = barrier.Energy / c.kT
@@ -67,9 +84,18 @@ func Log10StabilityRatio(p Pair, honig bool) float64 {
 	sortSmall(breaks[:n])
 
 	near := 0.0
+	sBarrier := math.Inf(1)
+	if barrier.Found {
+		sBarrier = math.Log(barrier.Separation)
+	}
+	expLeft := c.energy(math.Exp(breaks[0]))/c.kT - ref
 	for i := 0; i+1 < n; i++ {
 		half := (breaks[i+1] - breaks[i]) / 2
-		if !(half > 1e-12) {
+		expRight := c.energy(math.Exp(breaks[i+1]))/c.kT - ref
+		skip := expLeft < negligibleExponent && expRight < negligibleExponent &&
+			!(sBarrier >= breaks[i] && sBarrier <= breaks[i+1])
+		expLeft = expRight
+		if !(half > 1e-12) || skip {
 			continue
 		}
 		mid := (breaks[i+1] + breaks[i]) / 2
