@@ -138,14 +138,27 @@ func potentialWhere(ev *evaluation, margin func(p physics.Pair) float64) (float6
 		p.Potential = sign * psi
 		return margin(p)
 	}
-	const hi = 0.2
-	if at(0) >= 0 {
-		return 0, true
+	// Bracket from the present potential by steps of 1.5 before iterating,
+	// so that few margins are evaluated far from the answer.
+	const top, bottom = 0.2, 0.002
+	start := math.Min(math.Max(math.Abs(ev.pair.Potential), 2*bottom), top)
+	lo, hi := start, start
+	if at(start) >= 0 {
+		for lo = start / 1.5; lo > bottom && at(lo) >= 0; lo /= 1.5 {
+			hi = lo
+		}
+		if lo <= bottom {
+			lo = 0
+		}
+	} else {
+		for hi = math.Min(lo*1.5, top); at(hi) < 0; hi = math.Min(lo*1.5, top) {
+			if hi == top {
+				return 0, false
+			}
+			lo = hi
+		}
 	}
-	if at(hi) < 0 {
-		return 0, false
-	}
-	return physics.FindRoot(at, 0, hi, 1e-5)
+	return physics.FindRoot(at, lo, hi, 1e-5)
 }
 
 // solvePH finds the pH at which the surface-potential estimate reaches the

@@ -11,6 +11,7 @@ import (
 	"net/http"
 	"net/http/httptest"
 	"os"
+	"strings"
 	"time"
 
 	"github.com/rs/zerolog"
@@ -30,7 +31,10 @@ const (
 )
 
 const usage = `usage:
-  colloidtriage serve [--addr HOST:PORT] [--rules DIR]   run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR)
+  colloidtriage serve [--addr HOST:PORT] [--rules DIR] [--api-keys-file FILE]
+                                                         run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR);
+                                                         API keys, one per line in FILE or comma-separated in
+                                                         $COLLOIDTRIAGE_API_KEYS, guard all but /healthz, /readyz, /metrics
   colloidtriage triage FILE|-                            triage one sample (JSON file, or - for standard input)
   colloidtriage rules check DIR                          compile a site rule pack with the built-in rules
   colloidtriage version                                  print the engine version and rule-set hash
@@ -95,7 +99,13 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 	}
 	addr := fs.String("addr", defAddr, "listen address (env COLLOIDTRIAGE_ADDR)")
 	rulesDir := fs.String("rules", "", "directory of site rule files (*.rules.yaml) added to the built-in set")
+	keysFile := fs.String("api-keys-file", "", "file of API keys, one per line (# comments); adds to env COLLOIDTRIAGE_API_KEYS (comma-separated)")
 	if err := fs.Parse(args); err != nil {
+		return exitUsage
+	}
+	keys, err := apiKeys(*keysFile, getenv("COLLOIDTRIAGE_API_KEYS"))
+	if err != nil {
+		fmt.Fprintln(stderr, err)
 		return exitUsage
 	}
 	log := zerolog.New(stdout).With().Timestamp().Logger()
@@ -109,7 +119,7 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		fmt.Fprintln(stderr, err)
 		return exitFailure
 	}
-	e := api.New(eng, api.Config{Logger: log, OpenAPI: openapi.JSON})
+	e := api.New(eng, api.Config{Logger: log, OpenAPI: openapi.JSON, APIKeys: keys})
 	srv := &http.Server{
 		Handler:           e,
 		ReadHeaderTimeout: 5 * time.Second,
@@ -145,6 +155,40 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		return exitFailure
 	}
 	return exitOK
+}
+
+// apiKeys gathers the service's API keys from a key file (one per line,
+// blank lines and # comments skipped) and a comma-separated list. A file or
+// list that is given but holds no key is an error: it would otherwise turn
+// authentication off without a word.
+func apiKeys(file, list string) ([]string, error) {
+	var keys []string
+	if file != "" {
+		data, err := os.ReadFile(file)
+		if err != nil {
+			return nil, fmt.Errorf("api keys: %w", err)
+		}
+		for _, line := range strings.Split(string(data), "\n") {
+			if k := strings.TrimSpace(line); k != "" && !strings.HasPrefix(k, "#") {
+				keys = append(keys, k)
+			}
+		}
+		if len(keys) == 0 {
+			return nil, fmt.Errorf("api keys: %s holds no key", file)
+		}
+	}
+	if list != "" {
+		n := len(keys)
+		for _, k := range strings.Split(list, ",") {
+			if k = strings.TrimSpace(k); k != "" {
+				keys = append(keys, k)
+			}
+		}
+		if len(keys) == n {
+			return nil, errors.New("api keys: COLLOIDTRIAGE_API_KEYS is set but holds no key")
+		}
+	}
+	return keys, nil
 }
 
 // triage runs one sample through the same HTTP application in memory, so

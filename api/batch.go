@@ -1,0 +1,406 @@
+package api
+
+import (
+	"bytes"
+	"context"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"mime"
+	"net/http"
+	"runtime"
+	"strconv"
+	"strings"
+	"sync"
+	"sync/atomic"
+
+	"github.com/labstack/echo/v4"
+
+	"colloidtriage/advisor"
+)
+
+// batchBodyLimit is the body limit of the batch route: maxBatchSamples
+// samples of a few kilobytes each, with room to spare.
+const batchBodyLimit = "64M"
+
+// maxBatchSamples is the most samples one batch may hold, in any of its
+// formats. A larger batch is refused whole with 413 before any sample is
+// triaged, so that a client never mistakes a partial answer for a full one.
+const maxBatchSamples = 5000
+
+// Media types of the batch route besides JSON.
+const (
+	mimeNDJSON = "application/x-ndjson"
+	mimeCSV    = "text/csv"
+)
+
+// Problem types of the batch route.
+const (
+	typeInvalidBatch  = "/problems/invalid-batch"
+	typeBatchTooLarge = "/problems/batch-too-large"
+)
+
+// statusClientClosedRequest records a batch abandoned because the client
+// went away (the status nginx logs for the same event); no client sees it.
+const statusClientClosedRequest = 499
+
+// batchEntry is one sample of a batch as sent: its JSON form, or the problem
+// that kept it from having one (a CSV cell that does not parse).
+type batchEntry struct {
+	raw      []byte
+	sampleID string
+	line     int
+	err      error
+}
+
+// pointerBase turns a JSON pointer inside sample index into a pointer into
+// the request body as the client sent it.
+type pointerBase func(index int, pointer string) string
+
+// batchItem is the result for one sample: a report or a problem, never both.
+// Index is the sample's 0-based position in the batch and Line, for NDJSON
+// and CSV, the line of the body where it starts.
+type batchItem struct {
+	Index    int             `json:"index"`
+	Line     int             `json:"line,omitempty"`
+	SampleID string          `json:"sample_id,omitempty"`
+	Status   int             `json:"status"`
+	Report   *advisor.Report `json:"report,omitempty"`
+	Problem  *Problem        `json:"problem,omitempty"`
+}
+
+type batchResponse struct {
+	Count          int         `json:"count"`
+	Failed         int         `json:"failed"`
+	Items          []batchItem `json:"items"`
+	RequestID      string      `json:"request_id"`
+	IdempotencyKey string      `json:"idempotency_key,omitempty"`
+}
+
+// batchRequest is the JSON form of a batch.
+type batchRequest struct {
+	Samples *[]json.RawMessage `json:"samples"`
+}
+
+// batch triages many samples in one request. The body is JSON
+// ({"samples": [...]}), NDJSON (one sample per line) or CSV (see csv.go);
+// the answer is JSON, NDJSON or CSV as the Accept header asks, by default
+// NDJSON for NDJSON and JSON otherwise. Items keep the input order and each
+// carries its own status: one bad sample never fails the others. Problems
+// that concern the body as a whole (not parseable, too many samples, a bad
+// CSV header) fail the request before any sample is triaged.
+func (h *handlers) batch(c echo.Context) error {
+	mt, params, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
+	if err != nil || (mt != echo.MIMEApplicationJSON && mt != mimeNDJSON && mt != mimeCSV) {
+		return newProblem(http.StatusUnsupportedMediaType, "about:blank", "Unsupported media type",
+			"send the batch as application/json, application/x-ndjson or text/csv")
+	}
+	var inDialect *csvDialect
+	if mt == mimeCSV {
+		d, err := csvDialectOf(params, nil)
+		if err != nil {
+			return err
+		}
+		inDialect = &d
+	}
+	out, err := negotiateBatch(c.Request().Header.Get(echo.HeaderAccept), mt, inDialect)
+	if err != nil {
+		return err
+	}
+	body, err := readBatchBody(c)
+	if err != nil {
+		return err
+	}
+	entries, base, err := splitBatch(mt, body, inDialect)
+	if err != nil {
+		return err
+	}
+	if len(entries) > maxBatchSamples {
+		return newProblem(http.StatusRequestEntityTooLarge, typeBatchTooLarge, "Too many samples in one batch",
+			fmt.Sprintf("the batch holds more than %d samples; split it into several requests", maxBatchSamples))
+	}
+	ctx := c.Request().Context()
+	switch out.mediaType {
+	case mimeNDJSON:
+		return h.streamNDJSON(c, entries, base)
+	case mimeCSV:
+		items, err := h.triageAll(ctx, entries, base, nil)
+		if err != nil {
+			return err
+		}
+		return writeCSVItems(c, items, out.dialect)
+	}
+	items, err := h.triageAll(ctx, entries, base, nil)
+	if err != nil {
+		return err
+	}
+	resp := batchResponse{Count: len(items), Items: items,
+		RequestID:      c.Response().Header().Get(echo.HeaderXRequestID),
+		IdempotencyKey: c.Request().Header.Get(idempotencyKeyHeader)}
+	for _, it := range items {
+		if it.Status != http.StatusOK {
+			resp.Failed++
+		}
+	}
+	return c.JSON(http.StatusOK, resp)
+}
+
+// splitBatch splits a body of media type mt into its samples, with the
+// base that makes their problems' pointers relative to the body.
+func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBase, error) {
+	switch mt {
+	case mimeNDJSON:
+		return ndjsonEntries(body), func(_ int, ptr string) string { return ptr }, nil
+	case mimeCSV:
+		entries, err := csvEntries(body, *d)
+		return entries, csvPointer, err
+	}
+	entries, err := jsonEntries(body)
+	return entries, func(i int, ptr string) string { return "/samples/" + strconv.Itoa(i) + ptr }, err
+}
+
+func readBatchBody(c echo.Context) ([]byte, error) {
+	body, err := io.ReadAll(c.Request().Body)
+	if err != nil {
+		var tooLarge *http.MaxBytesError
+		if errors.As(err, &tooLarge) {
+			return nil, echo.NewHTTPError(http.StatusRequestEntityTooLarge)
+		}
+		return nil, newProblem(http.StatusBadRequest, typeInvalidBatch, "The request body could not be read", "")
+	}
+	return bytes.TrimPrefix(body, utf8BOM), nil
+}
+
+// utf8BOM is dropped from the start of a body: spreadsheet programs write it.
+var utf8BOM = []byte("\xef\xbb\xbf")
+
+// jsonEntries splits {"samples": [...]} into its samples. The envelope is
+// decoded strictly; each sample stays raw and is decoded on its own later,
+// so that one of the wrong shape fails alone.
+func jsonEntries(body []byte) ([]batchEntry, error) {
+	var req batchRequest
+	if err := unmarshalStrict(body, &req); err != nil {
+		return nil, err
+	}
+	if req.Samples == nil {
+		return nil, newProblem(http.StatusBadRequest, typeInvalidBatch, "The batch has no samples field",
+			`send {"samples": [sample, ...]}`, advisor.FieldProblem{Pointer: "/samples", Reason: "required"})
+	}
+	entries := make([]batchEntry, len(*req.Samples))
+	for i, raw := range *req.Samples {
+		entries[i] = batchEntry{raw: raw}
+	}
+	return entries, nil
+}
+
+// triageAll triages every entry with a pool of GOMAXPROCS workers. Results
+// are written by index, so the output order is the input order whatever
+// the scheduling. When emit is not nil it receives each item in order as
+// soon as that item and all before it are done. triageAll stops early when
+// ctx ends or emit fails.
+func (h *handlers) triageAll(ctx context.Context, entries []batchEntry, base pointerBase, emit func(batchItem) error) ([]batchItem, error) {
+	n := len(entries)
+	items := make([]batchItem, n)
+	done := make([]chan struct{}, n)
+	for i := range done {
+		done[i] = make(chan struct{})
+	}
+	ctx, cancel := context.WithCancel(ctx)
+	var wg sync.WaitGroup
+	defer func() {
+		cancel()
+		wg.Wait()
+	}()
+	var next atomic.Int64
+	for range min(runtime.GOMAXPROCS(0), n) {
+		wg.Go(func() {
+			for ctx.Err() == nil {
+				i := int(next.Add(1) - 1)
+				if i >= n {
+					return
+				}
+				items[i] = h.triageEntry(i, entries[i], base)
+				close(done[i])
+			}
+		})
+	}
+	for i := range n {
+		select {
+		case <-done[i]:
+		case <-ctx.Done():
+			return nil, echo.NewHTTPError(statusClientClosedRequest).SetInternal(ctx.Err())
+		}
+		if emit != nil {
+			if err := emit(items[i]); err != nil {
+				return nil, err
+			}
+		}
+	}
+	return items, nil
+}
+
+// triageEntry decodes, validates and triages one sample by the same strict
+// path as POST /v1/triage, and counts the outcome. A panic becomes this
+// item's 500 and leaves the other items alone.
+func (h *handlers) triageEntry(i int, e batchEntry, base pointerBase) (item batchItem) {
+	item = batchItem{Index: i, Line: e.line, SampleID: e.sampleID}
+	defer func() {
+		if r := recover(); r != nil {
+			item = failedItem(item, fmt.Errorf("panic: %v", r), i, base)
+		}
+		h.metrics.countItem(item.Status)
+	}()
+	if e.err != nil {
+		return failedItem(item, e.err, i, base)
+	}
+	var s advisor.Sample
+	err := notAnObject(e.raw)
+	if err == nil {
+		err = unmarshalStrict(e.raw, &s)
+	}
+	if err != nil {
+		if item.SampleID == "" {
+			item.SampleID = lenientSampleID(e.raw)
+		}
+		return failedItem(item, err, i, base)
+	}
+	item.SampleID = s.SampleID
+	if err := h.validator.validate(&s); err != nil {
+		return failedItem(item, err, i, base)
+	}
+	rep, err := h.engine.Triage(&s)
+	if err != nil {
+		return failedItem(item, err, i, base)
+	}
+	h.metrics.countOutcome(topCauses(rep))
+	item.Status, item.Report = http.StatusOK, rep
+	return item
+}
+
+// notAnObject rejects an item that is valid JSON but not an object (null,
+// a number, an array), which would otherwise decode as an empty sample.
+func notAnObject(raw []byte) error {
+	if t := bytes.TrimSpace(raw); len(t) > 0 && t[0] == '{' {
+		return nil
+	}
+	return newProblem(http.StatusBadRequest, typeInvalidJSON, "A sample is not a JSON object",
+		"each sample must be a JSON object", advisor.FieldProblem{Pointer: "", Reason: "wrong type: expected object"})
+}
+
+// lenientSampleID reads sample_id from an item that failed strict decoding,
+// so that the client can still match the failure to its record.
+func lenientSampleID(raw []byte) string {
+	var probe struct {
+		SampleID string `json:"sample_id"`
+	}
+	if json.Unmarshal(raw, &probe) != nil || len(probe.SampleID) > 128 {
+		return ""
+	}
+	return probe.SampleID
+}
+
+// failedItem renders err as the item's problem, its pointers made relative
+// to the request body.
+func failedItem(item batchItem, err error, i int, base pointerBase) batchItem {
+	p := problemFor(err)
+	fields := make([]advisor.FieldProblem, len(p.Errors))
+	for j, f := range p.Errors {
+		if f.Pointer != "" && !strings.HasPrefix(f.Pointer, "/") {
+			// A bare member name (an unknown field): its place in the
+			// sample is not known, so point at the sample and name it.
+			f.Reason = fmt.Sprintf("%s %q", f.Reason, f.Pointer)
+			f.Pointer = ""
+		}
+		f.Pointer = base(i, f.Pointer)
+		fields[j] = f
+	}
+	p.Errors = fields
+	item.Status, item.Problem = p.Status, &p
+	return item
+}
+
+// batchOutput is the negotiated answer format.
+type batchOutput struct {
+	mediaType string
+	dialect   csvDialect
+}
+
+// negotiateBatch picks the answer's media type from Accept (RFC 9110 §12.5.1:
+// the highest q among the types offered; ties go to the earlier range). With
+// no Accept or only wildcards, NDJSON input gets NDJSON and other input JSON.
+// CSV answers use the dialect of the Accept range, else the request's, else
+// comma and point.
+func negotiateBatch(accept, inType string, inDialect *csvDialect) (batchOutput, error) {
+	def := echo.MIMEApplicationJSON
+	if inType == mimeNDJSON {
+		def = mimeNDJSON
+	}
+	dialect := csvDialect{delimiter: ',', decimal: '.'}
+	if inDialect != nil {
+		dialect = *inDialect
+	}
+	if strings.TrimSpace(accept) == "" {
+		return batchOutput{mediaType: def, dialect: dialect}, nil
+	}
+	best, bestQ := "", 0.0
+	var bestParams map[string]string
+	for _, rng := range splitList(accept) {
+		mt, params, err := mime.ParseMediaType(rng)
+		if err != nil {
+			continue
+		}
+		q := 1.0
+		if qs, ok := params["q"]; ok {
+			if q, err = strconv.ParseFloat(qs, 64); err != nil {
+				continue
+			}
+		}
+		switch mt {
+		case "*/*", "application/*":
+			mt = def
+		case echo.MIMEApplicationJSON, mimeNDJSON, mimeCSV:
+		case "text/*":
+			mt = mimeCSV
+		default:
+			continue
+		}
+		if q > bestQ {
+			best, bestQ, bestParams = mt, q, params
+		}
+	}
+	if best == "" {
+		return batchOutput{}, newProblem(http.StatusNotAcceptable, "about:blank", "Not acceptable",
+			"the batch answers as application/json, application/x-ndjson or text/csv")
+	}
+	if best == mimeCSV {
+		d, err := csvDialectOf(bestParams, &dialect)
+		if err != nil {
+			return batchOutput{}, newProblem(http.StatusNotAcceptable, typeInvalidCSV, "Not acceptable",
+				problemFor(err).Detail)
+		}
+		dialect = d
+	}
+	return batchOutput{mediaType: best, dialect: dialect}, nil
+}
+
+// splitList splits a header list at commas outside quoted strings, so that
+// a media-type parameter such as decimal="," stays whole.
+func splitList(s string) []string {
+	var parts []string
+	quoted, escaped, start := false, false, 0
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; {
+		case escaped:
+			escaped = false
+		case quoted && c == '\\':
+			escaped = true
+		case c == '"':
+			quoted = !quoted
+		case c == ',' && !quoted:
+			parts = append(parts, s[start:i])
+			start = i + 1
+		}
+	}
+	return append(parts, s[start:])
+}

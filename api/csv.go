@@ -1,0 +1,510 @@
+package api
+
+import (
+	"bytes"
+	"encoding/csv"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"mime"
+	"net/http"
+	"reflect"
+	"strconv"
+	"strings"
+	"sync"
+
+	"github.com/labstack/echo/v4"
+
+	"colloidtriage/advisor"
+)
+
+const typeInvalidCSV = "/problems/invalid-csv"
+
+// csvDialect is a CSV file's field delimiter and decimal separator.
+type csvDialect struct {
+	delimiter, decimal rune
+}
+
+// delimiterName spells the delimiter as a media-type parameter value.
+func (d csvDialect) delimiterName() string {
+	if d.delimiter == '\t' {
+		return "tab"
+	}
+	return string(d.delimiter)
+}
+
+// csvDialectOf reads the dialect from media-type parameters. With def nil
+// (a request body) delimiter and decimal are required; otherwise (an Accept
+// range) each missing one is taken from def.
+func csvDialectOf(params map[string]string, def *csvDialect) (csvDialect, error) {
+	bad := func(detail string) (csvDialect, error) {
+		return csvDialect{}, newProblem(http.StatusUnsupportedMediaType, typeInvalidCSV,
+			"The CSV media type is incomplete or invalid",
+			detail+`; declare it as text/csv; header=present; delimiter=";"; decimal=","`)
+	}
+	var d csvDialect
+	if def != nil {
+		d = *def
+	}
+	switch v, ok := params["delimiter"]; {
+	case !ok && def == nil:
+		return bad("the delimiter parameter is missing")
+	case !ok:
+	case v == ",", v == ";":
+		d.delimiter = rune(v[0])
+	case v == "tab", v == "\t":
+		d.delimiter = '\t'
+	default:
+		return bad(fmt.Sprintf("delimiter %q is not one of \",\", \";\", \"tab\"", v))
+	}
+	switch v, ok := params["decimal"]; {
+	case !ok && def == nil:
+		return bad("the decimal parameter is missing")
+	case !ok:
+	case v == ".", v == ",":
+		d.decimal = rune(v[0])
+	default:
+		return bad(fmt.Sprintf("decimal %q is not \".\" or \",\"", v))
+	}
+	if d.delimiter == d.decimal {
+		return bad("the delimiter and the decimal separator are the same character")
+	}
+	if h, ok := params["header"]; ok && !strings.EqualFold(h, "present") {
+		return bad("header=" + h + " is not supported: the first row must name the columns (header=present)")
+	}
+	if cs, ok := params["charset"]; ok && !strings.EqualFold(cs, "utf-8") {
+		return bad("charset " + cs + " is not supported: send UTF-8")
+	}
+	return d, nil
+}
+
+// csvColumn is one addressable leaf of the sample: its path from the root
+// of the JSON form, the Go kind its cells are read as, and its unit.
+type csvColumn struct {
+	path []pathStep
+	kind reflect.Kind
+	unit string
+}
+
+// pathStep is a member name, or an array index when isIndex.
+type pathStep struct {
+	name    string
+	index   int
+	isIndex bool
+}
+
+// csvColumns maps every column name to its leaf, read once from the json,
+// unit and validate tags of advisor.Sample, so the CSV contract follows the
+// JSON one without a second list to keep in step.
+var csvColumns = sync.OnceValue(func() map[string]csvColumn {
+	out := map[string]csvColumn{}
+	addColumns(out, reflect.TypeOf(advisor.Sample{}), "", nil, "")
+	return out
+})
+
+func addColumns(out map[string]csvColumn, t reflect.Type, column string, path []pathStep, tag reflect.StructTag) {
+	if t.Kind() == reflect.Pointer {
+		t = t.Elem()
+	}
+	join := func(name string) string {
+		if column == "" {
+			return name
+		}
+		return column + "." + name
+	}
+	step := func(s pathStep) []pathStep { return append(path[:len(path):len(path)], s) }
+	switch t.Kind() {
+	case reflect.Struct:
+		for i := range t.NumField() {
+			f := t.Field(i)
+			name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
+			if name != "" && name != "-" {
+				addColumns(out, f.Type, join(name), step(pathStep{name: name}), f.Tag)
+			}
+		}
+	case reflect.Slice:
+		// Only arrays of objects with an item limit are addressable, so a
+		// header can never ask for an unbounded array.
+		elem := t.Elem()
+		if elem.Kind() == reflect.Pointer {
+			elem = elem.Elem()
+		}
+		if elem.Kind() != reflect.Struct {
+			return
+		}
+		for i := range maxItems(tag.Get("validate")) {
+			addColumns(out, elem, join(strconv.Itoa(i)), step(pathStep{index: i, isIndex: true}), "")
+		}
+	case reflect.String, reflect.Float64, reflect.Int, reflect.Bool:
+		out[column] = csvColumn{path: path, kind: t.Kind(), unit: tag.Get("unit")}
+	}
+}
+
+// maxItems reads the max=N item limit of a slice's validate tag (0 if none).
+func maxItems(validate string) int {
+	for _, part := range strings.Split(validate, ",") {
+		if v, ok := strings.CutPrefix(part, "max="); ok {
+			n, _ := strconv.Atoi(v)
+			return n
+		}
+	}
+	return 0
+}
+
+// csvEntries reads a CSV batch into entries: the header is checked whole,
+// then each row becomes one sample's JSON form or that row's problem.
+// Reading stops one row past maxBatchSamples; the handler refuses the batch.
+//
+// A batch may be sent as CSV (RFC 4180) with a header row. The dialect is
+// never guessed: the Content-Type must declare it,
+//
+//	Content-Type: text/csv; header=present; delimiter=";"; decimal=","
+//
+//	delimiter  required: "," or ";" or "tab"
+//	decimal    required: "." or ","; must differ from the delimiter
+//	header     optional: "present"; "absent" is refused (the header names the columns)
+//	charset    optional: "utf-8"; no other is read (a leading BOM is dropped)
+//
+// Each header cell is the dotted path of one leaf of the sample's JSON form,
+// array elements by 0-based index, spelled exactly as in JSON (units in the
+// names):
+//
+//	sample_id;symptom;particles.material;particles.diameter_nm;particles.zeta_mV;medium.electrolytes.0.formula;medium.electrolytes.0.concentration_mM
+//
+// Every leaf of advisor.Sample is a column (testdata/batch/README.md lists
+// them); an index may go up to the array's item limit less one. A header
+// with an unknown, repeated or empty column is refused whole (400) before
+// any row is read, and so is a body that does not parse as CSV.
+//
+// Each row is one sample. An empty cell means "not given". A cell is read
+// by the Go type of its field: numbers with the declared decimal separator,
+// an optional sign and exponent and no thousands separator ("1,5" and
+// "2,5e3" with decimal=","; "1.234,5" is refused), whole numbers for
+// valences, true or false for flags, text as written (surrounding spaces
+// trimmed). The row is then assembled into the sample's JSON form and goes
+// down the same strict decode and validation path as POST /v1/triage. A
+// cell that does not parse, or a row with more or fewer fields than the
+// header, fails that row only. Rows whose cells are all empty are skipped.
+//
+// Pointers in a CSV item's problem name the cell as /rows/<n>/<column>,
+// where n is the item's index (0-based, header and skipped rows not
+// counted) and the item's line is the row's line in the file.
+//
+// With "Accept: text/csv" the answer is CSV too, one row per sample in the
+// order sent, in the request's dialect unless the Accept range declares its
+// own, with the columns of csvAnswerHeader.
+func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
+	r := csv.NewReader(bytes.NewReader(body))
+	r.Comma = d.delimiter
+	r.FieldsPerRecord = -1
+	header, err := r.Read()
+	if errors.Is(err, io.EOF) {
+		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV body is empty",
+			"the first row must be the header naming the columns")
+	}
+	if err != nil {
+		return nil, csvSyntaxProblem(err)
+	}
+	cols, idCol, err := csvHeader(header)
+	if err != nil {
+		return nil, err
+	}
+	var entries []batchEntry
+	for len(entries) <= maxBatchSamples {
+		rec, err := r.Read()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			return nil, csvSyntaxProblem(err)
+		}
+		if allEmpty(rec) {
+			continue
+		}
+		line, _ := r.FieldPos(0)
+		e := batchEntry{line: line}
+		if idCol >= 0 && idCol < len(rec) {
+			if id := strings.TrimSpace(rec[idCol]); len(id) <= 128 {
+				e.sampleID = id
+			}
+		}
+		if len(rec) != len(cols) {
+			e.err = newProblem(http.StatusBadRequest, typeInvalidCSV, "A row has the wrong number of fields",
+				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
+				advisor.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
+		} else {
+			e.raw, e.err = csvSample(cols, rec, d)
+		}
+		entries = append(entries, e)
+	}
+	return entries, nil
+}
+
+// csvHeader resolves the header's columns and the index of sample_id (-1
+// when absent). Every unknown, repeated or empty name is reported at once.
+func csvHeader(header []string) ([]csvColumn, int, error) {
+	known := csvColumns()
+	cols := make([]csvColumn, len(header))
+	seen := map[string]bool{}
+	idCol := -1
+	var problems []advisor.FieldProblem
+	for j, name := range header {
+		name = strings.TrimSpace(name)
+		ptr := "/header/" + strconv.Itoa(j)
+		col, ok := known[name]
+		switch {
+		case name == "":
+			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: "empty column name"})
+		case seen[name]:
+			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: fmt.Sprintf("column %q appears twice", name)})
+		case !ok:
+			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: unknownColumn(name, known),
+				Valid: "the dotted path of a sample field, e.g. particles.diameter_nm or medium.electrolytes.0.formula"})
+		}
+		seen[name] = true
+		cols[j] = col
+		if name == "sample_id" {
+			idCol = j
+		}
+	}
+	if len(problems) > 0 {
+		return nil, 0, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV header names unknown or repeated columns",
+			"no row was read; columns are the JSON fields of a sample as dotted paths (see /openapi.json)", problems...)
+	}
+	return cols, idCol, nil
+}
+
+// unknownColumn explains an unknown column, suggesting the column that
+// differs only in case (units such as mV and mPa_s are case-sensitive).
+func unknownColumn(name string, known map[string]csvColumn) string {
+	for k := range known {
+		if strings.EqualFold(k, name) {
+			return fmt.Sprintf("unknown column %q; did you mean %q?", name, k)
+		}
+	}
+	return fmt.Sprintf("unknown column %q", name)
+}
+
+func csvSyntaxProblem(err error) error {
+	detail := "the body does not parse as CSV with the declared delimiter"
+	var pe *csv.ParseError
+	if errors.As(err, &pe) {
+		detail = fmt.Sprintf("line %d, column %d: %v", pe.Line, pe.Column, pe.Err)
+	}
+	return newProblem(http.StatusBadRequest, typeInvalidCSV, "The body is not valid CSV", detail)
+}
+
+func allEmpty(rec []string) bool {
+	for _, cell := range rec {
+		if strings.TrimSpace(cell) != "" {
+			return false
+		}
+	}
+	return true
+}
+
+// csvSample assembles one row into the sample's JSON form. Every cell that
+// does not parse is reported, with its pointer relative to the sample.
+func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
+	root := map[string]any{}
+	var problems []advisor.FieldProblem
+	for j, cell := range rec {
+		cell = strings.TrimSpace(cell)
+		if cell == "" {
+			continue
+		}
+		v, reason := parseCell(cell, cols[j].kind, d)
+		if reason != "" {
+			problems = append(problems, advisor.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].unit})
+			continue
+		}
+		setPath(root, cols[j].path, v)
+	}
+	if len(problems) > 0 {
+		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "A cell does not parse",
+			fmt.Sprintf("%d cell(s) are not of their column's type", len(problems)), problems...)
+	}
+	return json.Marshal(root)
+}
+
+func jsonPointer(path []pathStep) string {
+	var b strings.Builder
+	for _, s := range path {
+		b.WriteByte('/')
+		if s.isIndex {
+			b.WriteString(strconv.Itoa(s.index))
+		} else {
+			b.WriteString(s.name)
+		}
+	}
+	return b.String()
+}
+
+// csvPointer turns a pointer inside row index's sample into the cell's
+// pointer /rows/<index>/<column>; the column is the dotted path.
+func csvPointer(index int, pointer string) string {
+	p := "/rows/" + strconv.Itoa(index)
+	if pointer != "" {
+		p += "/" + strings.ReplaceAll(strings.TrimPrefix(pointer, "/"), "/", ".")
+	}
+	return p
+}
+
+// setPath sets v at path in the JSON object obj, creating the objects and
+// arrays on the way. Array elements skipped over become empty objects, so
+// that validation names their missing fields at their own index.
+func setPath(obj map[string]any, path []pathStep, v any) {
+	name := path[0].name
+	switch {
+	case len(path) == 1:
+		obj[name] = v
+	case path[1].isIndex:
+		arr, _ := obj[name].([]any)
+		for len(arr) <= path[1].index {
+			arr = append(arr, map[string]any{})
+		}
+		obj[name] = arr
+		setPath(arr[path[1].index].(map[string]any), path[2:], v)
+	default:
+		child, ok := obj[name].(map[string]any)
+		if !ok {
+			child = map[string]any{}
+			obj[name] = child
+		}
+		setPath(child, path[1:], v)
+	}
+}
+
+// parseCell reads a non-empty cell as kind, or says why it cannot.
+func parseCell(cell string, kind reflect.Kind, d csvDialect) (any, string) {
+	switch kind {
+	case reflect.Float64:
+		return parseDecimal(cell, d.decimal)
+	case reflect.Int:
+		n, err := strconv.ParseInt(cell, 10, 64)
+		if err != nil {
+			return nil, fmt.Sprintf("%q is not a whole number", cell)
+		}
+		return n, ""
+	case reflect.Bool:
+		b, err := strconv.ParseBool(cell)
+		if err != nil {
+			return nil, fmt.Sprintf("%q is not true or false", cell)
+		}
+		return b, ""
+	}
+	return cell, ""
+}
+
+// parseDecimal reads [sign] digits [decimal digits] [e [sign] digits] with
+// the declared decimal separator and nothing else: no thousands separator,
+// no other separator, no NaN or infinity. Accepting either separator would
+// read "1,234" as 1.234 in one file and 1234 in another.
+func parseDecimal(s string, decimal rune) (any, string) {
+	sep := byte(decimal)
+	i := 0
+	if i < len(s) && (s[i] == '+' || s[i] == '-') {
+		i++
+	}
+	whole := countDigits(s[i:])
+	i += whole
+	frac := 0
+	if i < len(s) && s[i] == sep {
+		i++
+		frac = countDigits(s[i:])
+		i += frac
+	}
+	ok := whole+frac > 0
+	if ok && i < len(s) && (s[i] == 'e' || s[i] == 'E') {
+		i++
+		if i < len(s) && (s[i] == '+' || s[i] == '-') {
+			i++
+		}
+		exp := countDigits(s[i:])
+		ok = exp > 0
+		i += exp
+	}
+	if !ok || i != len(s) {
+		return nil, fmt.Sprintf("%q is not a number written with the declared decimal separator %q (no thousands separators)",
+			s, string(decimal))
+	}
+	v, err := strconv.ParseFloat(strings.Replace(s, string(sep), ".", 1), 64)
+	if err != nil {
+		return nil, fmt.Sprintf("%q is beyond the range of a 64-bit float", s)
+	}
+	return v, ""
+}
+
+func countDigits(s string) int {
+	n := 0
+	for n < len(s) && s[n] >= '0' && s[n] <= '9' {
+		n++
+	}
+	return n
+}
+
+// csvAnswerHeader is the header of a CSV answer: per sample its status and
+// either its top cause with that cause's first remedy and target, or a
+// one-line summary of its problem.
+var csvAnswerHeader = []string{"sample_id", "status", "top_cause", "score", "top_remedy",
+	"target_quantity", "target_op", "target_value", "target_unit", "problem"}
+
+// writeCSVItems answers with one CSV row per item, numbers written with the
+// dialect's decimal separator.
+func writeCSVItems(c echo.Context, items []batchItem, d csvDialect) error {
+	var buf bytes.Buffer
+	w := csv.NewWriter(&buf)
+	w.Comma = d.delimiter
+	w.UseCRLF = true
+	num := func(v float64) string {
+		return strings.Replace(strconv.FormatFloat(v, 'g', -1, 64), ".", string(d.decimal), 1)
+	}
+	_ = w.Write(csvAnswerHeader)
+	for _, it := range items {
+		row := make([]string, len(csvAnswerHeader))
+		row[0], row[1] = it.SampleID, strconv.Itoa(it.Status)
+		if it.Report != nil && len(it.Report.Causes) > 0 {
+			top := it.Report.Causes[0]
+			row[2], row[3] = top.ID, num(top.Score)
+			if len(top.Remedies) > 0 {
+				rem := top.Remedies[0]
+				row[4] = rem.ID
+				if t := rem.Target; t != nil {
+					row[5], row[6], row[7], row[8] = t.Quantity, t.Op, num(t.Value), t.Unit
+				}
+			}
+		}
+		if it.Problem != nil {
+			row[9] = problemSummary(it.Problem)
+		}
+		_ = w.Write(row)
+	}
+	w.Flush()
+	if err := w.Error(); err != nil {
+		return err
+	}
+	ct := mime.FormatMediaType(mimeCSV, map[string]string{"charset": "utf-8", "header": "present",
+		"delimiter": d.delimiterName(), "decimal": string(d.decimal)})
+	return c.Blob(http.StatusOK, ct, buf.Bytes())
+}
+
+// problemSummary puts a problem on one line: its title, then each field.
+func problemSummary(p *Problem) string {
+	parts := []string{p.Title}
+	if p.Detail != "" && len(p.Errors) == 0 {
+		parts = append(parts, p.Detail)
+	}
+	for _, f := range p.Errors {
+		s := f.Pointer + " " + f.Reason
+		if f.Valid != "" {
+			s += " (valid: " + f.Valid
+			if f.Unit != "" {
+				s += ", in " + f.Unit
+			}
+			s += ")"
+		}
+		parts = append(parts, s)
+	}
+	return strings.Join(parts, "; ")
+}
