@@ -48,7 +48,7 @@ func (e *Engine) Triage(s *Sample) (*Report, error) {
 		Cautions:    cautions(ev),
 		Assumptions: ev.n.list,
 		Models:      ev.models,
-		Inputs:      *s,
+		Inputs:      understood(s, ev.c),
 	}, nil
 }
 

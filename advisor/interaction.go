@@ -25,7 +25,7 @@ func (ev *evaluation) computeInteraction() {
 		ev.set("ph_distance_from_iep", math.Abs(c.ph-c.iep), "|pH - isoelectric pH|")
 	}
 	if !math.IsNaN(c.henry) {
-		ev.set("henry_function", c.henry, "Ohshima (1994) closed form of Henry's function")
+		ev.set("henry_function", c.henry, "Henry's function used to convert mobility to zeta (see assumptions)")
 	}
 
 	ev.pair = physics.Pair{Radius: c.radius, Hamaker: c.hamaker, Kappa: kappa, EpsR: c.liquid.epsR, TempK: T,
@@ -79,16 +79,25 @@ func shielded(p physics.Pair) bool {
 	return p.StericThickness > 0 && p.Energy(2*p.StericThickness) >= 0
 }
 
-func (ev *evaluation) chooseModels() {
-	m := Models{VanDerWaals: "hamaker_exact", DoubleLayer: "linear_superposition"}
-	if ev.c.models != nil {
-		if ev.c.models.VanDerWaals != "" {
-			m.VanDerWaals = ev.c.models.VanDerWaals
+// effectiveModels fills the model choices a request left open with the defaults.
+func effectiveModels(req *Models) Models {
+	m := Models{VanDerWaals: "hamaker_exact", DoubleLayer: "linear_superposition", ZetaFromMobility: "henry_ohshima"}
+	if req != nil {
+		if req.ZetaFromMobility != "" {
+			m.ZetaFromMobility = req.ZetaFromMobility
 		}
-		if ev.c.models.DoubleLayer != "" {
-			m.DoubleLayer = ev.c.models.DoubleLayer
+		if req.VanDerWaals != "" {
+			m.VanDerWaals = req.VanDerWaals
+		}
+		if req.DoubleLayer != "" {
+			m.DoubleLayer = req.DoubleLayer
 		}
 	}
+	return m
+}
+
+func (ev *evaluation) chooseModels() {
+	m := effectiveModels(ev.c.models)
 	ev.pair.Retarded = m.VanDerWaals == "retarded_gregory"
 	ev.pair.ConstantPotential = m.DoubleLayer == "constant_potential"
 	vdw := map[string]string{
@@ -130,6 +139,10 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 // type present (its ionic strength per mole).
 func (ev *evaluation) criticalCoagulation() {
 	c := ev.c
+	z := max(c.counterValence, 1)
+	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.zeta) / (4 * physics.Boltzmann * c.storageTempK))
+	ev.set("ccc_high_potential", physics.CCCHighPotential(c.hamaker, gamma, c.liquid.epsR, c.storageTempK, z),
+		"Derjaguin-Landau-Verwey-Overbeek closed form for a z:z salt, -A a/(12 h) attraction, linear superposition")
 	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0)
 	if !ok {
 		return

@@ -160,11 +160,21 @@ func resolveZeta(p *Particles, c *conditions, n *notes) {
 		c.zeta, c.zetaSource = *p.ZetaMV*1e-3, "measured"
 	case p.Mobility != nil:
 		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
-		c.henry = physics.HenryOhshima(kappa * c.radius)
+		model := effectiveModels(c.models).ZetaFromMobility
+		var how string
+		switch model {
+		case "smoluchowski":
+			c.henry, how = 1.5, "Smoluchowski's limit (thin double layer, f = 1.5)"
+		case "huckel":
+			c.henry, how = 1, "Hueckel's limit (thick double layer, f = 1)"
+		case "henry_exact":
+			c.henry, how = physics.HenrySwanFurst(kappa*c.radius), "Henry's equation with the exact f(kappa a) of Swan & Furst (2012)"
+		default:
+			c.henry, how = physics.HenryOhshima(kappa*c.radius), "Henry's equation with Ohshima's (1994) closed form of f(kappa a)"
+		}
 		c.zeta = physics.ZetaHenry(mu, c.liquid.viscosity, c.liquid.epsR, c.henry)
 		c.zetaSource = "mobility"
-		n.add("zeta potential %s from mobility by Henry's equation with Ohshima's closed form f(kappa a) = %.4g",
-			formatQuantity(c.zeta*1e3, "mV"), c.henry)
+		n.add("zeta potential %s from mobility by %s, f = %.4g", formatQuantity(c.zeta*1e3, "mV"), how, c.henry)
 	case !math.IsNaN(c.iep) && !math.IsNaN(c.ph):
 		c.zeta = physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK)
 		c.zetaSource = "estimated"

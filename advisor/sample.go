@@ -20,8 +20,9 @@ type Sample struct {
 
 // Models selects optional physical models; the defaults are named in every report.
 type Models struct {
-	VanDerWaals string `json:"van_der_waals,omitempty" validate:"omitempty,oneof=hamaker_exact retarded_gregory"`
-	DoubleLayer string `json:"double_layer,omitempty" validate:"omitempty,oneof=linear_superposition constant_potential"`
+	VanDerWaals      string `json:"van_der_waals,omitempty" validate:"omitempty,oneof=hamaker_exact retarded_gregory"`
+	DoubleLayer      string `json:"double_layer,omitempty" validate:"omitempty,oneof=linear_superposition constant_potential"`
+	ZetaFromMobility string `json:"zeta_from_mobility,omitempty" validate:"omitempty,oneof=henry_ohshima henry_exact smoluchowski huckel"`
 }
 
 // Particles describes the dispersed phase.

@@ -42,6 +42,7 @@ var scaleSpecs = []ScaleSpec{
 	{"log10_aggregation_half_life_days", "1", "base-10 logarithm of the aggregation half-life in days (with W)"},
 	{"log10_half_life_over_shelf_life", "1", "base-10 logarithm of the aggregation half-life over the shelf life"},
 	{"critical_coagulation_concentration", "mM", "salt concentration at which the barrier vanishes, for the counter-ion valence present"},
+	{"ccc_high_potential", "mM", "critical coagulation concentration of a z:z salt of the counter-ion valence, high-potential closed form (for comparison)"},
 	{"ionic_strength_over_ccc", "1", "ionic strength over the critical ionic strength at which the barrier vanishes"},
 	{"steric_contact_energy", "kT", "van der Waals energy when the steric layers touch (h = 2 thickness)"},
 	{"depletion_well", "kT", "Asakura-Oosawa depletion energy at contact"},
