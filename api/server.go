@@ -41,17 +41,19 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
 
-	guarded := e.Group("", apiKeyAuth(cfg.APIKeys))
-	guarded.GET("/openapi.json", h.openAPI)
-	v1 := guarded.Group("/v1")
+	// Authentication is route middleware, not group middleware: a group with
+	// middleware adds catch-all routes that would turn 405s into 404s.
+	auth := apiKeyAuth(cfg.APIKeys)
 	limit := middleware.BodyLimit(cfg.BodyLimit)
-	v1.POST("/triage", h.triage, limit)
-	v1.POST("/triage/batch", h.batch, middleware.BodyLimit(batchBodyLimit))
-	v1.POST("/scales", h.scales, limit)
-	v1.POST("/interaction-profile", h.interactionProfile, limit)
-	v1.GET("/catalog", h.catalog)
-	v1.GET("/rules", h.rules)
-	v1.GET("/materials", h.materials)
+	e.GET("/openapi.json", h.openAPI, auth)
+	v1 := e.Group("/v1")
+	v1.POST("/triage", h.triage, auth, limit)
+	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit))
+	v1.POST("/scales", h.scales, auth, limit)
+	v1.POST("/interaction-profile", h.interactionProfile, auth, limit)
+	v1.GET("/catalog", h.catalog, auth)
+	v1.GET("/rules", h.rules, auth)
+	v1.GET("/materials", h.materials, auth)
 	return e
 }
 

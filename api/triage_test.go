@@ -225,3 +225,12 @@ func TestScalesWithoutSymptom(t *testing.T) {
 		t.Errorf("debye_length %v, want 3.04 nm", d)
 	}
 }
+
+func TestWrongMethod(t *testing.T) {
+	t.Parallel()
+	h := testServer(t)
+	rec := do(t, h, http.MethodGet, "/v1/triage", "", "")
+	if rec.Code != http.StatusMethodNotAllowed || rec.Header().Get("Content-Type") != problemContentType {
+		t.Errorf("GET /v1/triage: %d %s", rec.Code, rec.Header().Get("Content-Type"))
+	}
+}

@@ -86,22 +86,27 @@ func TestBinaryEndToEnd(t *testing.T) {
 		t.Fatal(err)
 	}
 	defer cmd.Process.Kill()
-	lines := bufio.NewScanner(stdout)
+	listening := make(chan string, 1)
+	go func() {
+		lines := bufio.NewScanner(stdout)
+		for lines.Scan() {
+			var entry struct {
+				Message string `json:"message"`
+				Addr    string `json:"addr"`
+			}
+			if json.Unmarshal(lines.Bytes(), &entry) == nil && entry.Message == "listening" {
+				listening <- entry.Addr
+				break
+			}
+		}
+		io.Copy(io.Discard, stdout)
+	}()
 	var addr string
-	for lines.Scan() {
-		var entry struct {
-			Message string `json:"message"`
-			Addr    string `json:"addr"`
-		}
-		if json.Unmarshal(lines.Bytes(), &entry) == nil && entry.Message == "listening" {
-			addr = entry.Addr
-			break
-		}
+	select {
+	case addr = <-listening:
+	case <-time.After(30 * time.Second):
+		t.Fatal("server did not say it was listening within 30 s")
 	}
-	if addr == "" {
-		t.Fatal("server never said it was listening")
-	}
-	go io.Copy(io.Discard, stdout)
 	base := "http://" + addr
 
 	demo, err := os.Open("../../testdata/demo/gravity_settling.json")
