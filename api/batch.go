@@ -306,12 +306,6 @@ func failedItem(item batchItem, err error, i int, base pointerBase) batchItem {
 	p := problemFor(err)
 	fields := make([]advisor.FieldProblem, len(p.Errors))
 	for j, f := range p.Errors {
-		if f.Pointer != "" && !strings.HasPrefix(f.Pointer, "/") {
-			// A bare member name (an unknown field): its place in the
-			// sample is not known, so point at the sample and name it.
-			f.Reason = fmt.Sprintf("%s %q", f.Reason, f.Pointer)
-			f.Pointer = ""
-		}
 		f.Pointer = base(i, f.Pointer)
 		fields[j] = f
 	}

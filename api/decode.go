@@ -8,6 +8,7 @@ import (
 	"io"
 	"mime"
 	"net/http"
+	"reflect"
 	"strings"
 
 	"github.com/labstack/echo/v4"
@@ -37,7 +38,7 @@ func unmarshalStrict(body []byte, v any) error {
 	dec := json.NewDecoder(bytes.NewReader(body))
 	dec.DisallowUnknownFields()
 	if err := dec.Decode(v); err != nil {
-		return jsonProblem(err, body)
+		return jsonProblem(err, body, reflect.TypeOf(v))
 	}
 	if dec.More() {
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
@@ -46,8 +47,9 @@ func unmarshalStrict(body []byte, v any) error {
 	return nil
 }
 
-// jsonProblem explains a decoding error with the field as a JSON pointer.
-func jsonProblem(err error, body []byte) error {
+// jsonProblem explains a decoding error with the field as a JSON pointer,
+// found by walking the body against target when encoding/json does not say.
+func jsonProblem(err error, body []byte, target reflect.Type) error {
 	var syn *json.SyntaxError
 	var typ *json.UnmarshalTypeError
 	switch {
@@ -55,21 +57,38 @@ func jsonProblem(err error, body []byte) error {
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
 			fmt.Sprintf("syntax error at byte %d: %s", syn.Offset, syn.Error()))
 	case errors.As(err, &typ):
-		ptr := "/" + strings.ReplaceAll(typ.Field, ".", "/")
+		ptr, kind := "/"+strings.ReplaceAll(typ.Field, ".", "/"), jsonKind(typ.Type.String())
+		if p, k, ok := locateIn(body, target); ok && k != "" {
+			ptr, kind = p, k
+		}
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A field has the wrong type",
-			fmt.Sprintf("expected %s, got JSON %s", typ.Type.String(), typ.Value),
-			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + jsonKind(typ.Type.String())})
+			fmt.Sprintf("expected %s, got JSON %s", kind, typ.Value),
+			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
 	case errors.Is(err, io.EOF) || len(bytes.TrimSpace(body)) == 0:
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is empty", "send a JSON object")
 	case errors.Is(err, io.ErrUnexpectedEOF):
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "the JSON value is truncated")
 	case strings.HasPrefix(err.Error(), "json: unknown field "):
 		name := strings.Trim(strings.TrimPrefix(err.Error(), "json: unknown field "), `"`)
+		if p, k, ok := locateIn(body, target); ok && k == "" {
+			name = p
+		}
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "Unknown field",
 			"the field "+name+" is not part of the contract (see /openapi.json); check its spelling and unit suffix",
 			advisor.FieldProblem{Pointer: name, Reason: "unknown field"})
 	}
 	return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "")
+}
+
+// locateIn decodes body generically and locates its first misfit for target.
+func locateIn(body []byte, target reflect.Type) (pointer, expected string, ok bool) {
+	dec := json.NewDecoder(bytes.NewReader(body))
+	dec.UseNumber()
+	var v any
+	if dec.Decode(&v) != nil {
+		return "", "", false
+	}
+	return locate(v, target, "")
 }
 
 func jsonKind(goType string) string {
