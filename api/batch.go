@@ -247,7 +247,9 @@ func (h *handlers) triageEntry(i int, e batchEntry, base pointerBase) (item batc
 	item = batchItem{Index: i, Line: e.line, SampleID: e.sampleID}
 	defer func() {
 		if r := recover(); r != nil {
-			item = failedItem(item, fmt.Errorf("panic: %v", r), i, base)
+			err := fmt.Errorf("panic: %v", r)
+			h.log.Error().Err(err).Int("item", i).Msg("batch item failed")
+			item = failedItem(item, err, i, base)
 		}
 		h.metrics.countItem(item.Status)
 	}()

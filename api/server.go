@@ -36,7 +36,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	e.Use(m.middleware)
 	e.Use(recoverPanic)
 
-	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m}
+	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
@@ -62,6 +62,7 @@ type handlers struct {
 	validator *sampleValidator
 	openapi   []byte
 	metrics   *metrics
+	log       zerolog.Logger
 }
 
 func (h *handlers) health(c echo.Context) error {
