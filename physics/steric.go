@@ -118,10 +118,11 @@ const (
 // J at surface separation h in m and must be monotone in h (true of the
 // Hamaker sphere–sphere expressions, retarded or not); tempK in K.
 //
-// The root is found by bisection in log(delta) to a relative precision of
-// 1e-10. It returns 0 when even a 0.01 nm layer suffices and +Inf when no
-// layer thinner than 1 mm does. It panics if allowedKT or tempK is not
-// positive or vdwAt returns NaN.
+// The root is found by FindRootBracket in log(delta) to a relative
+// precision of 1e-9, on the side where the criterion holds. It returns 0
+// when even a 0.01 nm layer suffices and +Inf when no layer thinner than
+// 1 mm does. It panics if allowedKT or tempK is not positive or vdwAt
+// returns NaN.
 //
 // With the Derjaguin limit V = -A a/(12 h) the answer is A a/(24 kB T
 // allowedKT). The criterion follows Napper (1983, ch. 2): a steric layer
@@ -135,27 +136,21 @@ func MinimumStericThickness(vdwAt func(h float64) float64, tempK, allowedKT floa
 		panic("physics: MinimumStericThickness needs allowedKT > 0 and tempK > 0")
 	}
 	limit := allowedKT * Boltzmann * tempK
-	small := func(delta float64) bool {
-		v := vdwAt(2 * delta)
+	// excess(s) = ln|V(2 e^s)| - ln(limit) falls through zero at the answer.
+	excess := func(s float64) float64 {
+		v := vdwAt(2 * math.Exp(s))
 		if math.IsNaN(v) {
 			panic("physics: MinimumStericThickness: vdwAt returned NaN")
 		}
-		return math.Abs(v) <= limit
-	}
-	if small(stericThicknessFloor) {
-		return 0
-	}
-	if !small(stericThicknessCeiling) {
-		return math.Inf(1)
+		return math.Log(math.Abs(v)+math.SmallestNonzeroFloat64) - math.Log(limit)
 	}
 	lo, hi := math.Log(stericThicknessFloor), math.Log(stericThicknessCeiling)
-	for hi-lo > 1e-10 {
-		mid := 0.5 * (lo + hi)
-		if small(math.Exp(mid)) {
-			hi = mid
-		} else {
-			lo = mid
-		}
+	if excess(lo) <= 0 {
+		return 0
 	}
-	return math.Exp(hi)
+	if excess(hi) > 0 {
+		return math.Inf(1)
+	}
+	_, s, _ := FindRootBracket(excess, lo, hi, 1e-9)
+	return math.Exp(s)
 }
