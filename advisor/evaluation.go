@@ -18,6 +18,11 @@ type evaluation struct {
 	pair    physics.Pair // the interaction of two median particles, when evaluable
 	hasPair bool
 	vdwOnly physics.Pair // the same pair without double layer, for steric checks
+
+	acceptablePotential struct { // solved once per triage, shared by two remedies
+		done, ok bool
+		psi      float64
+	}
 }
 
 var scaleIndex = func() map[string]ScaleSpec {

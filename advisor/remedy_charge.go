@@ -119,8 +119,14 @@ func solveSurfaceCharge(ev *evaluation) (Target, string, bool) {
 
 // smallestAcceptablePotential solves stabilityMargin = 0 on |psi| between
 // the present potential and 200 mV, keeping the sign of the surface.
+// The answer is kept for the rest of the triage: raise_surface_charge and
+// move_ph_from_iep both need it.
 func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
-	return potentialWhere(ev, func(p physics.Pair) float64 { return stabilityMargin(ev, p) })
+	if m := &ev.acceptablePotential; !m.done {
+		m.psi, m.ok = potentialWhere(ev, func(p physics.Pair) float64 { return stabilityMargin(ev, p) })
+		m.done = true
+	}
+	return ev.acceptablePotential.psi, ev.acceptablePotential.ok
 }
 
 // potentialWhere finds the smallest |psi| in [0, 200 mV] at which margin, a
