@@ -166,3 +166,13 @@ func TestBinaryEndToEnd(t *testing.T) {
 		t.Errorf("server exit: %v", err)
 	}
 }
+
+// BenchmarkNewEngine is the start-up work: rules compiled, library loaded
+// (issue target: under 100 ms).
+func BenchmarkNewEngine(b *testing.B) {
+	for b.Loop() {
+		if _, err := newEngine(); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
