@@ -2,6 +2,7 @@ package advisor
 
 import (
 	"math"
+	"strings"
 
 	"colloidtriage/physics"
 )
@@ -65,8 +66,10 @@ func roundSignificant(v float64, n int) float64 {
 	return r
 }
 
+// model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(name, choice string) {
 	ev.models[name] = choice
+	ev.n.add("model for %s: %s", strings.ReplaceAll(name, "_", " "), choice)
 }
 
 func (ev *evaluation) inputFacts() {
