@@ -178,8 +178,12 @@ func compileOptions(afterCauses bool) []expr.Option {
 func (rs *RuleSet) Rules() []RuleInfo {
 	out := make([]RuleInfo, len(rs.rules))
 	for i, r := range rs.rules {
+		remedies := r.Remedies
+		if remedies == nil {
+			remedies = []string{}
+		}
 		out[i] = RuleInfo{ID: r.ID, File: r.file, Line: r.line, Cause: r.Cause, Symptoms: r.Symptoms,
-			When: r.When, Certainty: r.Certainty, Remedies: r.Remedies, AfterCauses: r.AfterCauses}
+			When: r.When, Certainty: r.Certainty, Remedies: remedies, AfterCauses: r.AfterCauses}
 	}
 	return out
 }
