@@ -177,12 +177,7 @@ type exchange struct {
 	keys         []string // API keys the server runs with
 	status       int
 	request      verdict
-	bug          handlerBug
 }
-
-// handlerBug names a known deviation of a handler from the contract: what
-// it is, and a text that the breach it causes contains.
-type handlerBug struct{ what, match string }
 
 func (x exchange) newRequest() *http.Request {
 	req := httptest.NewRequest(x.method, x.path, strings.NewReader(x.body))
@@ -236,25 +231,11 @@ func (c *contract) check(t *testing.T, h http.Handler, x exchange) []string {
 	return broken
 }
 
-// report fails t for each breach of the contract, except those of a known
-// handler bug (x.bug), which are logged and skip the test; a bug that no
-// longer shows fails, so that its note is removed when it is fixed.
+// report fails t for each breach of the contract.
 func (x exchange) report(t *testing.T, broken []string) {
 	t.Helper()
-	known := 0
 	for _, b := range broken {
-		if x.bug.match != "" && strings.Contains(b, x.bug.match) {
-			known++
-			t.Logf("known handler bug (%s): %s", x.bug.what, b)
-			continue
-		}
 		t.Error(b)
-	}
-	switch {
-	case x.bug.match != "" && known == 0:
-		t.Errorf("the known handler bug %q no longer shows: remove its note", x.bug.what)
-	case known > 0 && !t.Failed():
-		t.Skipf("known handler bug: %s", x.bug.what)
 	}
 }
 
