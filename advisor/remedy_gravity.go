@@ -31,7 +31,19 @@ func solveParticleSize(ev *evaluation) (Target, string, bool) {
 		return Target{}, "density already matched", false
 	}
 	d := math.Sqrt(18 * c.liquid.viscosity * allowedStokesSpeed(ev) / (drho * physics.StandardGravity))
-	return Target{"particles.diameter_nm", "<=", d * 1e9, "nm"}, clearLayerCriterion(ev), true
+	// Particles whose gravitational length reaches the container height
+	// never leave a clear layer, however long they stand: at sedimentation
+	// equilibrium the top holds at least 1/e of the bottom's concentration
+	// (Perrin's barometric profile).
+	kT := physics.Boltzmann * c.storageTempK
+	brownian := 2 * math.Cbrt(3*kT/(4*math.Pi*drho*physics.StandardGravity*c.height))
+	crit := clearLayerCriterion(ev)
+	if brownian > d {
+		d = brownian
+		crit = "gravitational length >= container height, so Brownian motion keeps the particles up (Perrin); " +
+			"the Stokes criterion alone would ask for less"
+	}
+	return Target{"particles.diameter_nm", "<=", d * 1e9, "nm"}, crit, true
 }
 
 // Liquids reach densities of about 600 to 2000 kg/m^3 (hydrocarbons to

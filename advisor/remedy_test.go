@@ -1,0 +1,83 @@
+package advisor
+
+import (
+	"math"
+	"testing"
+
+	"colloidtriage/physics"
+)
+
+func evaluated(t *testing.T, name string) (*Engine, *evaluation) {
+	t.Helper()
+	e := benchEngine(&testing.B{})
+	ev, err := e.evaluate(benchSample(&testing.B{}, name))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return e, ev
+}
+
+// TestRemedyTargetsInvertThePhysics puts each solved target back into the
+// forward physics and checks that it meets its criterion exactly (to the
+// solver's tolerance): the targets are inverses, not rules of thumb.
+func TestRemedyTargetsInvertThePhysics(t *testing.T) {
+	t.Parallel()
+	kT := func(ev *evaluation) float64 { return physics.Boltzmann * ev.c.storageTempK }
+
+	// Settling: a 2.5 um rutile slurry. The size target is set by Perrin's
+	// barometric law (gravitational length = container height), the
+	// viscosity target by hindered Stokes settling.
+	_, ev := evaluated(t, "gravity_settling.json")
+	c := ev.c
+	drho := c.particleDensity - c.liquid.density
+	if tg, _, ok := solveParticleSize(ev); !ok {
+		t.Error("no size target")
+	} else if lg := physics.GravitationalLength(tg.Value*0.5e-9, drho, c.storageTempK); math.Abs(lg/c.height-1) > 5e-3 {
+		t.Errorf("size target %v nm: gravitational length %v m, want the container height %v m", tg.Value, lg, c.height)
+	}
+	if tg, _, ok := solveViscosity(ev); !ok {
+		t.Error("no viscosity target")
+	} else {
+		v := physics.StokesVelocity(c.radius, drho, tg.Value*1e-3) * physics.RichardsonZakiFactor(c.phi, physics.RichardsonZakiExponentLowRe)
+		if got := physics.ClearLayer(v, c.shelfLife, c.height); math.Abs(got/c.maxClear-1) > 5e-3 {
+			t.Errorf("viscosity target %v mPa s: clear layer %v m, want %v m", tg.Value, got, c.maxClear)
+		}
+	}
+	if tg, _, ok := solveYieldStress(ev); !ok {
+		t.Error("no yield-stress target")
+	} else if y := physics.YieldNumber(tg.Value, c.radius, drho); math.Abs(y/physics.BerisCriticalYieldNumber-1) > 5e-3 {
+		t.Errorf("yield stress target %v Pa: yield number %v, want 0.143", tg.Value, y)
+	}
+	if tg, _, ok := solveStericThickness(ev); !ok {
+		t.Error("no steric target")
+	} else if v := ev.vdwOnly.Energy(2*tg.Value*1e-9) / kT(ev); math.Abs(math.Abs(v)/c.criteria.maxStericKT-1) > 2e-2 {
+		t.Errorf("layer target %v nm: vdW at contact %v kT, want -%v kT", tg.Value, v, c.criteria.maxStericKT)
+	}
+
+	// Salt: the ionic-strength target leaves the pair exactly at the edge
+	// of acceptance (barrier and half-life margins >= 0, and just below it
+	// not acceptable).
+	_, ev = evaluated(t, "electrostatic_screening.json")
+	tg, _, ok := solveIonicStrength(ev)
+	if !ok {
+		t.Fatal("no ionic-strength target")
+	}
+	at := stabilityMargin(ev, ev.withIonicStrength(tg.Value))
+	above := stabilityMargin(ev, ev.withIonicStrength(tg.Value*1.02))
+	if at < -1e-2 || above >= 0 {
+		t.Errorf("ionic strength target %v mM: margin %v there, %v 2 %% above; want >= 0 and < 0", tg.Value, at, above)
+	}
+
+	// Crowding: the volume-fraction target gives the criterion's viscosity.
+	_, ev = evaluated(t, "near_jamming.json")
+	if tg, _, ok := solveVolumeFraction(ev); !ok {
+		t.Error("no volume-fraction target")
+	} else {
+		c := ev.c
+		eff := tg.Value * ev.f.number("effective_volume_fraction") / c.phi
+		got := physics.KriegerDougherty(eff, ev.f.number("max_packing_fraction"), physics.DefaultIntrinsicViscosity)
+		if math.Abs(got/c.criteria.maxRelViscosity-1) > 1e-2 {
+			t.Errorf("volume fraction target %v: relative viscosity %v, want %v", tg.Value, got, c.criteria.maxRelViscosity)
+		}
+	}
+}
