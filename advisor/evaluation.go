@@ -20,6 +20,8 @@ type evaluation struct {
 	hasPair bool
 	vdwOnly physics.Pair // the same pair without double layer, for steric checks
 
+	lastBarrier float64 // separation of the last barrier found while solving remedies, a warm start
+
 	acceptablePotential struct { // solved once per triage, shared by two remedies
 		done, ok bool
 		psi      float64

@@ -32,9 +32,10 @@ func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
 	}
 	kT := physics.Boltzmann * c.storageTempK
 	barrier := 0.0
-	b := p.Barrier()
+	b := p.BarrierNear(ev.lastBarrier)
 	if b.Found {
 		barrier = b.Energy / kT
+		ev.lastBarrier = b.Separation
 	}
 	byBarrier := barrier - c.criteria.minBarrierKT
 	if byBarrier < 0 {
