@@ -41,17 +41,7 @@ var (
 	unfilled = regexp.MustCompile(`\{[A-Za-z0-9_]+\}`)
 )
 
-var demoEngine = sync.OnceValues(func() (*advisor.Engine, error) {
-	rs, err := advisor.LoadRuleSet(rules.FS)
-	if err != nil {
-		return nil, err
-	}
-	lib, err := advisor.LoadLibrary(rules.FS)
-	if err != nil {
-		return nil, err
-	}
-	return advisor.NewEngine(rs, lib), nil
-})
+var demoEngine = sync.OnceValues(func() (*advisor.Engine, error) { return advisor.LoadEngine(rules.FS) })
 
 type demoCase struct {
 	name  string // file name without .json

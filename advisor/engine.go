@@ -1,6 +1,7 @@
 package advisor
 
 import (
+	"io/fs"
 	"math"
 
 	"github.com/expr-lang/expr/vm"
@@ -22,6 +23,21 @@ type Engine struct {
 // NewEngine builds an engine from a compiled rule set and a loaded library.
 func NewEngine(rules *RuleSet, lib *Library) *Engine {
 	return &Engine{rules: rules, lib: lib}
+}
+
+// LoadEngine compiles the rule set of builtin (the catalogue, its rule
+// files and its library, as in rules.FS) plus any site packs, loads the
+// library, and builds the engine.
+func LoadEngine(builtin fs.FS, packs ...fs.FS) (*Engine, error) {
+	rs, err := LoadRuleSet(builtin, packs...)
+	if err != nil {
+		return nil, err
+	}
+	lib, err := LoadLibrary(builtin)
+	if err != nil {
+		return nil, err
+	}
+	return NewEngine(rs, lib), nil
 }
 
 // RuleSet returns the engine's compiled rule set.

@@ -8,20 +8,16 @@ import (
 	"colloidtriage/rules"
 )
 
-func benchEngine(b *testing.B) *Engine {
+func benchEngine(b testing.TB) *Engine {
 	b.Helper()
-	rs, err := LoadRuleSet(rules.FS)
+	e, err := LoadEngine(rules.FS)
 	if err != nil {
 		b.Fatal(err)
 	}
-	lib, err := LoadLibrary(rules.FS)
-	if err != nil {
-		b.Fatal(err)
-	}
-	return NewEngine(rs, lib)
+	return e
 }
 
-func benchSample(b *testing.B, name string) *Sample {
+func benchSample(b testing.TB, name string) *Sample {
 	b.Helper()
 	data, err := os.ReadFile("../testdata/demo/" + name)
 	if err != nil {

@@ -13,11 +13,11 @@ import (
 
 func profileEngine(t testing.TB) *advisor.Engine {
 	t.Helper()
-	rs, err := advisor.LoadRuleSet(rules.FS)
+	e, err := advisor.LoadEngine(rules.FS)
 	if err != nil {
 		t.Fatal(err)
 	}
-	return advisor.NewEngine(rs, loadEmbedded(t))
+	return e
 }
 
 func ptr[T any](v T) *T { return &v }

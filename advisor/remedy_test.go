@@ -9,8 +9,8 @@ import (
 
 func evaluated(t *testing.T, name string) (*Engine, *evaluation) {
 	t.Helper()
-	e := benchEngine(&testing.B{})
-	ev, err := e.evaluate(benchSample(&testing.B{}, name))
+	e := benchEngine(t)
+	ev, err := e.evaluate(benchSample(t, name))
 	if err != nil {
 		t.Fatal(err)
 	}

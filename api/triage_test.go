@@ -19,15 +19,11 @@ import (
 // and library.
 func testEngine(t testing.TB) *advisor.Engine {
 	t.Helper()
-	rs, err := advisor.LoadRuleSet(rules.FS)
+	e, err := advisor.LoadEngine(rules.FS)
 	if err != nil {
 		t.Fatal(err)
 	}
-	lib, err := advisor.LoadLibrary(rules.FS)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return advisor.NewEngine(rs, lib)
+	return e
 }
 
 func testServer(t testing.TB) http.Handler {

@@ -79,15 +79,7 @@ func newEngine(packDirs ...string) (*advisor.Engine, error) {
 		}
 		packs = append(packs, fsDir(d))
 	}
-	rs, err := advisor.LoadRuleSet(rules.FS, toFS(packs)...)
-	if err != nil {
-		return nil, err
-	}
-	lib, err := advisor.LoadLibrary(rules.FS)
-	if err != nil {
-		return nil, err
-	}
-	return advisor.NewEngine(rs, lib), nil
+	return advisor.LoadEngine(rules.FS, toFS(packs)...)
 }
 
 func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv func(string) string) int {
