@@ -135,7 +135,7 @@ func (e *Engine) resolveHamaker(p *Particles, c *conditions, mat materialProps, 
 	default:
 		epsP := pick(p.Permittivity, mat.epsR)
 		nP := pick(p.RefractiveIndex, mat.refrIndex)
-		if !math.IsNaN(epsP) && !math.IsNaN(nP) && !math.IsNaN(c.liquid.refrIndex) {
+		if !math.IsNaN(epsP) && !math.IsNaN(nP) && c.liquid.epsR > 0 && c.liquid.refrIndex > 0 {
 			c.hamaker = physics.HamakerTaborWinterton(epsP, nP, c.liquid.epsR, c.liquid.refrIndex, c.storageTempK)
 			n.add("hamaker constant %s estimated by the Tabor-Winterton (Lifshitz) approximation from permittivities and refractive indices",
 				formatQuantity(c.hamaker*1e21, "zJ"))

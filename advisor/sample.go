@@ -32,7 +32,7 @@ type Particles struct {
 	DiameterNm        *float64    `json:"diameter_nm,omitempty" validate:"required_without=SizeDistribution,omitempty,gte=0.5,lte=1e7" unit:"nm"`
 	SizeSpan          *float64    `json:"size_span,omitempty" validate:"omitempty,gte=0,lte=5" unit:"1"`
 	SizeDistribution  []SizeClass `json:"size_distribution,omitempty" validate:"omitempty,min=1,max=100,dive"`
-	DensityKgM3       *float64    `json:"density_kg_m3,omitempty" validate:"omitempty,gt=0,lte=25000" unit:"kg/m^3"`
+	DensityKgM3       *float64    `json:"density_kg_m3,omitempty" validate:"omitempty,gte=0.05,lte=25000" unit:"kg/m^3"`
 	VolumeFraction    *float64    `json:"volume_fraction,omitempty" validate:"omitempty,gt=0,lt=0.74" unit:"1"`
 	ZetaMV            *float64    `json:"zeta_mV,omitempty" validate:"omitempty,gte=-300,lte=300" unit:"mV"`
 	Mobility          *float64    `json:"mobility_um_cm_per_V_s,omitempty" validate:"omitempty,gte=-20,lte=20" unit:"um cm/(V s)"`
@@ -41,8 +41,8 @@ type Particles struct {
 	RefractiveIndex   *float64    `json:"refractive_index,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
 	Permittivity      *float64    `json:"relative_permittivity,omitempty" validate:"omitempty,gte=1,lte=1e4" unit:"1"`
 	SolubilityMolM3   *float64    `json:"solubility_mol_m3,omitempty" validate:"omitempty,gte=0,lte=1e4" unit:"mol/m^3"`
-	MolarVolumeCm3Mol *float64    `json:"molar_volume_cm3_mol,omitempty" validate:"omitempty,gt=0,lte=5000" unit:"cm^3/mol"`
-	TensionMNm        *float64    `json:"interfacial_tension_mN_m,omitempty" validate:"omitempty,gt=0,lte=100" unit:"mN/m"`
+	MolarVolumeCm3Mol *float64    `json:"molar_volume_cm3_mol,omitempty" validate:"omitempty,gte=1,lte=5000" unit:"cm^3/mol"`
+	TensionMNm        *float64    `json:"interfacial_tension_mN_m,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"mN/m"`
 }
 
 // SizeClass is one class of an explicit size distribution.
@@ -78,8 +78,8 @@ type Electrolyte struct {
 // FreePolymer is dissolved, non-adsorbing polymer (a depletant).
 type FreePolymer struct {
 	ConcentrationGL  *float64 `json:"concentration_g_L" validate:"required,gte=0,lte=500" unit:"g/L"`
-	RadiusGyrationNm *float64 `json:"radius_of_gyration_nm,omitempty" validate:"omitempty,gt=0,lte=1000" unit:"nm"`
-	MolarMassKgMol   *float64 `json:"molar_mass_kg_mol,omitempty" validate:"omitempty,gt=0,lte=100000" unit:"kg/mol"`
+	RadiusGyrationNm *float64 `json:"radius_of_gyration_nm,omitempty" validate:"omitempty,gte=0.1,lte=1000" unit:"nm"`
+	MolarMassKgMol   *float64 `json:"molar_mass_kg_mol,omitempty" validate:"omitempty,gte=0.1,lte=100000" unit:"kg/mol"`
 }
 
 // Stabilizer describes an adsorbed steric layer and adsorbing polymer.
@@ -93,22 +93,22 @@ type Stabilizer struct {
 
 // AdsorbingPolymer is a polymer that adsorbs on the particles (a possible bridge).
 type AdsorbingPolymer struct {
-	MolarMassKgMol  *float64 `json:"molar_mass_kg_mol" validate:"required,gt=0,lte=100000" unit:"kg/mol"`
+	MolarMassKgMol  *float64 `json:"molar_mass_kg_mol" validate:"required,gte=0.1,lte=100000" unit:"kg/mol"`
 	SurfaceCoverage *float64 `json:"surface_coverage" validate:"required,gte=0,lte=1" unit:"1"`
 }
 
 // Storage is where and how long the product must stay stable.
 type Storage struct {
-	ContainerHeightMm *float64 `json:"container_height_mm,omitempty" validate:"omitempty,gt=0,lte=20000" unit:"mm"`
-	ShelfLifeDays     *float64 `json:"shelf_life_days,omitempty" validate:"omitempty,gt=0,lte=36500" unit:"d"`
+	ContainerHeightMm *float64 `json:"container_height_mm,omitempty" validate:"omitempty,gte=1,lte=20000" unit:"mm"`
+	ShelfLifeDays     *float64 `json:"shelf_life_days,omitempty" validate:"omitempty,gte=0.01,lte=36500" unit:"d"`
 	TemperatureC      *float64 `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
 	ShearRatePerS     *float64 `json:"shear_rate_per_s,omitempty" validate:"omitempty,gte=0,lte=1e7" unit:"1/s"`
-	MaxClearLayerMm   *float64 `json:"max_clear_layer_mm,omitempty" validate:"omitempty,gt=0,lte=20000" unit:"mm"`
+	MaxClearLayerMm   *float64 `json:"max_clear_layer_mm,omitempty" validate:"omitempty,gte=0.01,lte=20000" unit:"mm"`
 }
 
 // Observation is what the complaint reports.
 type Observation struct {
-	AgeDays                *float64 `json:"age_days,omitempty" validate:"omitempty,gt=0,lte=36500" unit:"d"`
+	AgeDays                *float64 `json:"age_days,omitempty" validate:"omitempty,gte=0.001,lte=36500" unit:"d"`
 	ClearLayerMm           *float64 `json:"clear_layer_mm,omitempty" validate:"omitempty,gte=0,lte=20000" unit:"mm"`
 	SedimentRedisperses    *bool    `json:"sediment_redisperses,omitempty"`
 	ViscosityChangePercent *float64 `json:"viscosity_change_percent,omitempty" validate:"omitempty,gte=-100,lte=100000" unit:"%"`
@@ -120,5 +120,5 @@ type Criteria struct {
 	MinBarrierKT         *float64 `json:"min_barrier_kT,omitempty" validate:"omitempty,gte=0,lte=200" unit:"kT"`
 	HalfLifeToShelfLife  *float64 `json:"half_life_to_shelf_life,omitempty" validate:"omitempty,gte=1,lte=1e6" unit:"1"`
 	MaxRelativeViscosity *float64 `json:"max_relative_viscosity,omitempty" validate:"omitempty,gt=1,lte=1e4" unit:"1"`
-	MaxStericContactKT   *float64 `json:"max_steric_contact_kT,omitempty" validate:"omitempty,gt=0,lte=100" unit:"kT"`
+	MaxStericContactKT   *float64 `json:"max_steric_contact_kT,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"kT"`
 }

@@ -9,7 +9,6 @@ import (
 	"math"
 	"net/http"
 	"net/http/httptest"
-	"os"
 	"reflect"
 	"strconv"
 	"strings"
@@ -26,10 +25,6 @@ import (
 // (DESIGN.md §7): bad input gets a 4xx application/problem+json with a
 // title, field errors name the field as a JSON pointer (RFC 6901), range
 // errors carry the unit and the valid range, and nothing is ever a 5xx.
-//
-// A case that shows a known bug carries a one-line note and is skipped, so
-// that the suite stays green; set COLLOIDTRIAGE_BUGS=1 to run those cases
-// and see them fail, and delete the note once the bug is fixed.
 
 // badCase is one request that must be refused.
 type badCase struct {
@@ -42,32 +37,6 @@ type badCase struct {
 	unit         string   // ... with this unit ...
 	validHas     []string // ... and a valid range holding each of these
 	root         bool     // errors[] must hold the pointer "" (the whole document)
-	bug          string   // a known bug: the case is skipped with this note
-}
-
-// skipIfBug skips a case that shows a known bug unless COLLOIDTRIAGE_BUGS is set.
-func skipIfBug(t *testing.T, bug string) {
-	t.Helper()
-	if bug != "" && os.Getenv("COLLOIDTRIAGE_BUGS") == "" {
-		t.Skip("BUG: " + bug)
-	}
-}
-
-// Known bugs, each shared by several cases.
-const (
-	bugDuplicateKey = "a duplicate member name is accepted and the last value silently wins (RFC 7493 §2.3 forbids duplicates)"
-	bugFoldedName   = "member names match case-insensitively, so zeta_MV (megavolt) or SYMPTOM are read as zeta_mV and symptom"
-	bugChunked413   = "a body over the limit sent without Content-Length (chunked) answers 400, not 413"
-	bugTrailingEnd  = `a stray "]" or "}" after the JSON object is accepted (json.Decoder.More reports no more data before a closing token)`
-	bugTaborHot     = "a temperature outside the liquid's range is collected as a 422 but the engine goes on; a Hamaker constant from Tabor-Winterton (oil droplets, or a material in a non-aqueous liquid) then panics: 500"
-	bugTinyHeight   = "a container height inside its tag range (gt=0) that underflows to 0 m (5e-324 mm), with a size distribution, panics in physics.SedimentedFraction: 500"
-	bugTinyPolymer  = "a free-polymer molar mass inside its tag range (gt=0) but below ~1e-282 kg/mol overflows the number density and panics in physics.AsakuraOosawa: 500"
-)
-
-// extremeBugs are the generated extreme cases that show a known bug.
-var extremeBugs = map[string]string{
-	"/medium/free_polymer/molar_mass_kg_mol=1e-320": bugTinyPolymer,
-	"/medium/free_polymer/molar_mass_kg_mol=5e-324": bugTinyPolymer,
 }
 
 // sampleBase is a valid sample with every required field set: 2.5 um
@@ -298,7 +267,7 @@ func generatedBadCases() []badCase {
 		b := boundsOf(f.field)
 		if b.lo == "" || b.hi == "" {
 			cases = append(cases, badCase{name: "unbounded " + f.pointer, body: bodyWith(f, 1.0), status: 0,
-				pointer: f.pointer, bug: "the numeric field has no range in its validate tag"})
+				pointer: f.pointer}) // a numeric field without a range: the valid 1.0 must then fail this case
 			continue
 		}
 		isInt := baseKind(f.field.Type) == reflect.Int
@@ -385,8 +354,8 @@ func handBadCases() []badCase {
 		{name: "whitespace body", body: " \n\t ", status: 400},
 		{name: "trailing value", body: base + " {}", status: 400},
 		{name: "trailing garbage", body: base + "x", status: 400},
-		{name: "trailing bracket", body: base + "]", status: 400, bug: bugTrailingEnd},
-		{name: "trailing brace", body: base + "}", status: 400, bug: bugTrailingEnd},
+		{name: "trailing bracket", body: base + "]", status: 400},
+		{name: "trailing brace", body: base + "}", status: 400},
 		// The body must be one JSON object.
 		{name: "array body", body: "[" + base + "]", status: 400, root: true},
 		{name: "string body", body: `"settling"`, status: 400},
@@ -401,19 +370,19 @@ func handBadCases() []badCase {
 		// winning can hide a unit mistake in a LIMS export, and two parsers
 		// that pick differently disagree about what was triaged, so 400.
 		{name: "duplicate symptom", body: `{"symptom":"settling","symptom":"caking","particles":{"diameter_nm":2500,"density_kg_m3":4200}}`,
-			status: 400, bug: bugDuplicateKey},
+			status: 400},
 		{name: "duplicate nested number", body: particles(`"diameter_nm":2500,"diameter_nm":25,"density_kg_m3":4200`),
-			status: 400, bug: bugDuplicateKey},
+			status: 400},
 		{name: "duplicate object", body: baseWith(`"storage":{"shelf_life_days":365},"storage":{"shelf_life_days":1}`),
-			status: 400, bug: bugDuplicateKey},
+			status: 400},
 		// Names are exact: the unit suffix is part of the name, and mV is
 		// not MV.
 		{name: "name in upper case", body: `{"SYMPTOM":"settling","particles":{"diameter_nm":2500,"density_kg_m3":4200}}`,
-			status: 400, pointer: "/SYMPTOM", bug: bugFoldedName},
+			status: 400, pointer: "/SYMPTOM"},
 		{name: "unit suffix in wrong case", body: particles(`"diameter_nm":2500,"density_kg_m3":4200,"zeta_MV":-45`),
-			status: 400, pointer: "/particles/zeta_MV", bug: bugFoldedName},
+			status: 400, pointer: "/particles/zeta_MV"},
 		{name: "duplicate by case", body: `{"symptom":"settling","Symptom":"caking","particles":{"diameter_nm":2500,"density_kg_m3":4200}}`,
-			status: 400, bug: bugFoldedName},
+			status: 400},
 		// Unknown members: 400 naming where they are.
 		{name: "unknown top-level field", body: baseWith(`"particle":{}`), status: 400, pointer: "/particle"},
 		{name: "unknown nested field", body: particles(`"diameter_nm":2500,"density_kg_m3":4200,"diamter_nm":3`),
@@ -504,11 +473,11 @@ func handBadCases() []badCase {
 			status: 422, pointer: "/storage/temperature_c", unit: "degC", validHas: tempValid},
 		{name: "hexadecane frozen", body: medium(`"liquid":"hexadecane","temperature_c":5`), status: 422, pointer: "/medium/temperature_c", unit: "degC", validHas: tempValid},
 		{name: "oil droplets stored at -60 degC", body: `{"symptom":"creaming","particles":{"material":"soybean_oil","diameter_nm":1400},"storage":{"temperature_c":-60}}`,
-			status: 422, pointer: "/storage/temperature_c", unit: "degC", validHas: tempValid, bug: bugTaborHot},
+			status: 422, pointer: "/storage/temperature_c", unit: "degC", validHas: tempValid},
 		{name: "oil droplets in water at -60 degC", body: `{"symptom":"creaming","particles":{"material":"soybean_oil","diameter_nm":1400},"medium":{"temperature_c":-60}}`,
-			status: 422, pointer: "/medium/temperature_c", unit: "degC", validHas: tempValid, bug: bugTaborHot},
+			status: 422, pointer: "/medium/temperature_c", unit: "degC", validHas: tempValid},
 		{name: "silica in glycerol stored at 200 degC", body: `{"symptom":"settling","particles":{"material":"silica_amorphous","diameter_nm":1400},"medium":{"liquid":"glycerol"},"storage":{"temperature_c":200}}`,
-			status: 422, pointer: "/storage/temperature_c", unit: "degC", validHas: tempValid, bug: bugTaborHot},
+			status: 422, pointer: "/storage/temperature_c", unit: "degC", validHas: tempValid},
 		{name: "temperature below absolute zero", body: medium(`"temperature_c":-300`), status: 422, pointer: "/medium/temperature_c", unit: "degC"},
 
 		// Names that are not in the library or the salt parser.
@@ -671,7 +640,6 @@ func TestBadInput(t *testing.T) {
 		seen[c.name] = true
 		t.Run(c.name, func(t *testing.T) {
 			t.Parallel()
-			skipIfBug(t, c.bug)
 			checkProblem(t, sendCase(t, h, c), c)
 		})
 	}
@@ -731,21 +699,19 @@ func TestBodyLimitsPerRoute(t *testing.T) {
 		name, path, body string
 		chunked          bool
 		status           int
-		bug              string
 	}{
-		{"triage over", "/v1/triage", over, false, 413, ""},
-		{"triage under", "/v1/triage", under, false, 200, ""},
-		{"triage over chunked", "/v1/triage", over, true, 413, bugChunked413},
-		{"scales over chunked", "/v1/scales", over, true, 413, bugChunked413},
-		{"profile over chunked", "/v1/interaction-profile", over, true, 413, bugChunked413},
+		{"triage over", "/v1/triage", over, false, 413},
+		{"triage under", "/v1/triage", under, false, 200},
+		{"triage over chunked", "/v1/triage", over, true, 413},
+		{"scales over chunked", "/v1/scales", over, true, 413},
+		{"profile over chunked", "/v1/interaction-profile", over, true, 413},
 		// The batch route takes 64 MiB; a sample of 300 KiB fits.
-		{"batch over single limit", "/v1/triage/batch", `{"samples":[` + over + `]}`, false, 200, ""},
-		{"batch over", "/v1/triage/batch", batchOver, false, 413, ""},
-		{"batch over chunked", "/v1/triage/batch", batchOver, true, 413, bugChunked413},
+		{"batch over single limit", "/v1/triage/batch", `{"samples":[` + over + `]}`, false, 200},
+		{"batch over", "/v1/triage/batch", batchOver, false, 413},
+		{"batch over chunked", "/v1/triage/batch", batchOver, true, 413},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			skipIfBug(t, c.bug)
 			var body io.Reader = strings.NewReader(c.body)
 			if c.chunked {
 				body = chunkedReader{body}
@@ -859,7 +825,6 @@ func finiteJSON(data []byte) error {
 type extremeCase struct {
 	name, body string
 	path       string // default /v1/triage
-	bug        string
 }
 
 func handExtremeCases() []extremeCase {
@@ -890,7 +855,7 @@ func handExtremeCases() []extremeCase {
 		{name: "shelf life 1 day", body: sample(tio2, `"storage":{"shelf_life_days":1}`)},
 		{name: "shelf life 100 years", body: sample(tio2, `"storage":{"shelf_life_days":36500}`)},
 		{name: "container 1 mm", body: sample(tio2, `"storage":{"container_height_mm":1}`)},
-		{name: "container 5e-324 mm with a size span", body: sample(tio2+`,"size_span":1`, `"storage":{"container_height_mm":5e-324}`), bug: bugTinyHeight},
+		{name: "container 5e-324 mm with a size span", body: sample(tio2+`,"size_span":1`, `"storage":{"container_height_mm":5e-324}`)},
 		{name: "container 20 m", body: sample(tio2, `"storage":{"container_height_mm":20000}`)},
 		{name: "hexadecane without salt", body: sample(`"material":"silica_amorphous","diameter_nm":300`, `"medium":{"liquid":"hexadecane"}`)},
 		{name: "toluene without salt", body: `{"symptom":"flocculation","particles":{"material":"carbon_black","diameter_nm":100,"zeta_mV":-30},"medium":{"liquid":"toluene"}}`},
@@ -915,7 +880,7 @@ func handExtremeCases() []extremeCase {
 		{name: "shear 1e7 per s", body: `{"symptom":"flocculation","particles":{"material":"silica_amorphous","diameter_nm":2000,"zeta_mV":-5},"storage":{"shear_rate_per_s":1e7}}`},
 		{name: "thick steric layer", body: sample(tio2, `"stabilizer":{"layer_thickness_nm":1000,"solvent_quality":"poor"}`)},
 		{name: "cloud point below storage", body: sample(tio2, `"stabilizer":{"layer_thickness_nm":10,"cloud_point_c":-20},"storage":{"temperature_c":60}`)},
-		{name: "free polymer of 1e-300 kg/mol", body: sample(tio2, `"medium":{"free_polymer":{"concentration_g_L":250,"molar_mass_kg_mol":1e-300}}`), bug: bugTinyPolymer},
+		{name: "free polymer of 1e-300 kg/mol", body: sample(tio2, `"medium":{"free_polymer":{"concentration_g_L":250,"molar_mass_kg_mol":1e-300}}`)},
 		{name: "free polymer at 500 g/L", body: sample(tio2, `"medium":{"free_polymer":{"concentration_g_L":500,"radius_of_gyration_nm":1000,"molar_mass_kg_mol":100000}}`)},
 		{name: "adsorbing polymer full coverage", body: `{"symptom":"flocculation","particles":{"material":"kaolinite","diameter_nm":500},"stabilizer":{"adsorbing_polymer":{"molar_mass_kg_mol":100000,"surface_coverage":1}}}`},
 		{name: "adsorbing polymer bare", body: `{"symptom":"flocculation","particles":{"material":"kaolinite","diameter_nm":500},"stabilizer":{"adsorbing_polymer":{"molar_mass_kg_mol":1e-9,"surface_coverage":0}}}`},
@@ -972,7 +937,7 @@ func generatedExtremeCases() []extremeCase {
 		}
 		for _, v := range vals {
 			name := f.pointer + "=" + formatNumber(v)
-			cases = append(cases, extremeCase{name: name, body: bodyWith(f, v), bug: extremeBugs[name]})
+			cases = append(cases, extremeCase{name: name, body: bodyWith(f, v)})
 		}
 	}
 	return cases
@@ -1020,7 +985,6 @@ func TestExtremeInput(t *testing.T) {
 		seen[c.name] = true
 		t.Run(c.name, func(t *testing.T) {
 			t.Parallel()
-			skipIfBug(t, c.bug)
 			path := c.path
 			if path == "" {
 				path = "/v1/triage"

@@ -4,9 +4,7 @@ import (
 	"bytes"
 	"context"
 	"encoding/json"
-	"errors"
 	"fmt"
-	"io"
 	"mime"
 	"net/http"
 	"runtime"
@@ -161,13 +159,9 @@ func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBas
 }
 
 func readBatchBody(c echo.Context) ([]byte, error) {
-	body, err := io.ReadAll(c.Request().Body)
+	body, err := readBody(c, typeInvalidBatch)
 	if err != nil {
-		var tooLarge *http.MaxBytesError
-		if errors.As(err, &tooLarge) {
-			return nil, echo.NewHTTPError(http.StatusRequestEntityTooLarge)
-		}
-		return nil, newProblem(http.StatusBadRequest, typeInvalidBatch, "The request body could not be read", "")
+		return nil, err
 	}
 	return bytes.TrimPrefix(body, utf8BOM), nil
 }

@@ -23,15 +23,27 @@ func decodeJSON(c echo.Context, v any) error {
 	if err := requireContentType(c, echo.MIMEApplicationJSON); err != nil {
 		return err
 	}
-	body, err := io.ReadAll(c.Request().Body)
+	body, err := readBody(c, typeInvalidJSON)
 	if err != nil {
-		var tooLarge *http.MaxBytesError
-		if errors.As(err, &tooLarge) {
-			return echo.NewHTTPError(http.StatusRequestEntityTooLarge)
-		}
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body could not be read", "")
+		return err
 	}
 	return unmarshalStrict(body, v)
+}
+
+// readBody reads the whole request body. A body over the route's limit is a
+// 413 whether the limit was met by a declared Content-Length or inside a
+// chunked body (echo's limit reader then fails with its own 413 error).
+func readBody(c echo.Context, problemType string) ([]byte, error) {
+	body, err := io.ReadAll(c.Request().Body)
+	if err == nil {
+		return body, nil
+	}
+	var tooLarge *http.MaxBytesError
+	var he *echo.HTTPError
+	if errors.As(err, &tooLarge) || (errors.As(err, &he) && he.Code == http.StatusRequestEntityTooLarge) {
+		return nil, echo.NewHTTPError(http.StatusRequestEntityTooLarge)
+	}
+	return nil, newProblem(http.StatusBadRequest, problemType, "The request body could not be read", "")
 }
 
 func unmarshalStrict(body []byte, v any) error {
@@ -40,9 +52,13 @@ func unmarshalStrict(body []byte, v any) error {
 	if err := dec.Decode(v); err != nil {
 		return jsonProblem(err, body, reflect.TypeOf(v))
 	}
-	if dec.More() {
+	if rest := bytes.TrimSpace(body[dec.InputOffset():]); len(rest) > 0 {
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
 			"unexpected data after the JSON value")
+	}
+	if p, bad := checkMembers(body, reflect.TypeOf(v)); bad {
+		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A member is not part of the contract", p.reason,
+			advisor.FieldProblem{Pointer: p.pointer, Reason: p.reason})
 	}
 	return nil
 }

@@ -141,16 +141,7 @@ func (c *pairCurve) signedBarrier(hint float64) (float64, float64) {
 	}
 	lo, hi := c.searchRange()
 	var hs, vs [scanPoints]float64
-	ratio := math.Pow(hi/lo, 1.0/(scanPoints-1))
-	h := lo
-	top, local := 0, -1
-	for i := range hs {
-		hs[i], vs[i] = h, c.energy(h)
-		if vs[i] > vs[top] {
-			top = i
-		}
-		h *= ratio
-	}
+	top, local := c.scan(&hs, &vs, lo, hi), -1
 	for i := 1; i < scanPoints-1; i++ {
 		if vs[i] >= vs[i-1] && vs[i] >= vs[i+1] && (local < 0 || vs[i] > vs[local]) {
 			local = i
@@ -163,7 +154,8 @@ func (c *pairCurve) signedBarrier(hint float64) (float64, float64) {
 	case top == scanPoints-1:
 		return 0, 0
 	}
-	return vs[top], 0
+	edge := c.refine(&hs, &vs, 0, 1)
+	return edge.Energy, 0
 }
 
 // maximumNear climbs from hint (in steps of 0.25 in ln h, at most eight) to

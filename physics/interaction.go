@@ -252,15 +252,13 @@ const scanPoints = 40
 func (c *pairCurve) extrema(withMinimum bool) (barrier, minimum Extremum) {
 	lo, hi := c.searchRange()
 	var hs, vs [scanPoints]float64
-	ratio := math.Pow(hi/lo, 1.0/(scanPoints-1))
-	h := lo
-	top := 0
-	for i := range hs {
-		hs[i], vs[i] = h, c.energy(h)
-		if vs[i] > vs[top] {
-			top = i
-		}
-		h *= ratio
+	top := c.scan(&hs, &vs, lo, hi)
+	// A repulsion still rising at the end of the range (a very long Debye
+	// length) has its maximum further out: extend the scan, a decade at a
+	// time, up to 30 Debye lengths.
+	for top == scanPoints-1 && vs[top] > 0 && c.kappa > 0 && hi < 30/c.kappa {
+		lo, hi = hs[scanPoints-2], math.Min(10*hi, 30/c.kappa)
+		top = c.scan(&hs, &vs, lo, hi)
 	}
 	if top == scanPoints-1 {
 		return Extremum{}, Extremum{}
@@ -286,6 +284,22 @@ func (c *pairCurve) extrema(withMinimum bool) (barrier, minimum Extremum) {
 	return barrier, c.refine(&hs, &vs, bottom, -1)
 }
 
+// scan fills hs and vs with energies at scanPoints separations spaced
+// evenly in ln h from lo to hi and returns the index of the highest.
+func (c *pairCurve) scan(hs, vs *[scanPoints]float64, lo, hi float64) int {
+	ratio := math.Pow(hi/lo, 1.0/(scanPoints-1))
+	h := lo
+	top := 0
+	for i := range hs {
+		hs[i], vs[i] = h, c.energy(h)
+		if vs[i] > vs[top] {
+			top = i
+		}
+		h *= ratio
+	}
+	return top
+}
+
 // refine polishes grid point i of a maximum (sign = 1) or minimum (sign = -1)
 // within its two neighbouring intervals, by Newton's method on dV/d(ln h) = 0
 // with central differences (step 1e-4 in ln h), falling back to bisection of
@@ -297,7 +311,18 @@ func (c *pairCurve) refine(hs, vs *[scanPoints]float64, i int, sign float64) Ext
 	a := math.Log(hs[max(i-1, 0)])
 	b := math.Log(hs[min(i+1, scanPoints-1)])
 	best := Extremum{Energy: vs[i], Separation: hs[i], Found: true}
-	if i == 0 || i == scanPoints-1 {
+	if i == 0 {
+		// The scan's highest point is the closest approach, but the peak
+		// may lie just beyond it, inside the first interval.
+		a := math.Log(hs[0])
+		if sign*c.energy(math.Exp(a+1e-4)) > sign*vs[0] {
+			if s, f := c.polish(a, b, (a+b)/2, sign); sign*f > sign*best.Energy {
+				best.Energy, best.Separation = f, math.Exp(s)
+			}
+		}
+		return best
+	}
+	if i == scanPoints-1 {
 		return best
 	}
 	s, f := c.polish(a, b, math.Log(hs[i]), sign)

@@ -55,12 +55,23 @@ const negligibleExponent = -40.0
 
 func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 	lo, hi := c.searchRange()
-	ref := 0.0
-	if barrier.Found {
-		ref = barrier.Energy / c.kT
-	}
 	sLo := math.Log(lo)
 	sHi := math.Log(math.Max(hi, 2*c.radius))
+	// Beyond sHi the integral runs in x = 1/(u+2) from 0 to xMax; its
+	// energies are taken first so that ref, the exponent factored out, is the
+	// highest energy the integral sees even when no barrier was found in the
+	// search range (which keeps every exponential finite).
+	xMax := 1 / (math.Exp(sHi)/c.radius + 2)
+	var farU, farV [8]float64
+	ref := math.Max(0, c.energy(lo)/c.kT)
+	if barrier.Found {
+		ref = math.Max(ref, barrier.Energy/c.kT)
+	}
+	for k, x := range gaussLegendre8.x {
+		farU[k] = 1/(xMax*(x+1)/2) - 2
+		farV[k] = c.energy(farU[k]*c.radius) / c.kT
+		ref = math.Max(ref, farV[k])
+	}
 
 	var breaks [maxStabilityBreaks]float64
 	n := 0
@@ -111,17 +122,14 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 		}
 	}
 
-	// Beyond sHi: du/(u+2)^2 = -dx with x = 1/(u+2) running from 0 to xMax.
-	xMax := 1 / (math.Exp(sHi)/c.radius + 2)
+	// Beyond sHi: du/(u+2)^2 = -dx.
 	far := 0.0
-	for k, x := range gaussLegendre8.x {
-		xi := xMax * (x + 1) / 2
-		u := 1/xi - 2
+	for k, u := range farU {
 		beta := 1.0
 		if honig {
 			beta = (6*u*u + 13*u + 2) / (6*u*u + 4*u)
 		}
-		far += xMax / 2 * gaussLegendre8.w[k] * beta * math.Exp(c.energy(u*c.radius)/c.kT-ref)
+		far += xMax / 2 * gaussLegendre8.w[k] * beta * math.Exp(farV[k]-ref)
 	}
 	return (ref + math.Log(2*(near+far))) / math.Ln10
 }
