@@ -4,7 +4,6 @@ import (
 	"encoding/binary"
 	"encoding/json"
 	"errors"
-	"fmt"
 	"math"
 	"os"
 	"path/filepath"
@@ -68,9 +67,7 @@ func FuzzTriage(f *testing.F) {
 	})
 }
 
-// guarded runs one engine call; a panic fails the test unless it is a
-// known bug, which skips it (api/badinput_test.go holds the failing
-// requests).
+// guarded runs one engine call; a panic or a hang fails the test.
 func guarded(t *testing.T, eng *advisor.Engine, s *advisor.Sample, call func() (any, error)) (result any, err error) {
 	t.Helper()
 	start := time.Now()
@@ -79,9 +76,6 @@ func guarded(t *testing.T, eng *advisor.Engine, s *advisor.Sample, call func() (
 			t.Errorf("took %v (a triage should take well under 1 ms) for %s", d, sampleJSON(s))
 		}
 		if r := recover(); r != nil {
-			if bug := knownPanic(eng, s, fmt.Sprint(r)); bug != "" {
-				t.Skip("BUG: " + bug)
-			}
 			t.Fatalf("panic: %v\nfor %s", r, sampleJSON(s))
 		}
 	}()
@@ -91,42 +85,6 @@ func guarded(t *testing.T, eng *advisor.Engine, s *advisor.Sample, call func() (
 // slowCall is far beyond any triage's time, even under the fuzzer's
 // instrumentation: a call that takes longer hangs for a client.
 const slowCall = time.Second
-
-// knownPanic names the known bug behind a panic, if the panic and the
-// sample both match it.
-func knownPanic(eng *advisor.Engine, s *advisor.Sample, msg string) string {
-	switch {
-	case (strings.Contains(msg, "AsakuraOosawa") || strings.Contains(msg, "invalid Pair")) && s.Medium.FreePolymer != nil && s.Medium.FreePolymer.MolarMassKgMol != nil &&
-		*s.Medium.FreePolymer.MolarMassKgMol < 1e-200:
-		return "a free-polymer molar mass below ~1e-282 kg/mol overflows the number density: panic in physics.AsakuraOosawa or Pair"
-	case strings.Contains(msg, "Tabor–Winterton") && outsideLiquidRange(eng, s):
-		return "a temperature outside the liquid's range, with a Hamaker constant from Tabor-Winterton, panics instead of the 422"
-	case strings.Contains(msg, "SedimentedFraction") && s.Storage.ContainerHeightMm != nil && *s.Storage.ContainerHeightMm*1e-3 < 1e-300:
-		return "a container height that underflows to 0 m, with a size distribution, panics in physics.SedimentedFraction"
-	}
-	return ""
-}
-
-// outsideLiquidRange tells whether the medium or storage temperature lies
-// beyond the liquid's sourced range plus the 10 K of extrapolation that
-// advisor/fill.go allows.
-func outsideLiquidRange(eng *advisor.Engine, s *advisor.Sample) bool {
-	key := s.Medium.Liquid
-	if key == "" {
-		key = "water"
-	}
-	l, ok := eng.Library().Liquids[key]
-	if !ok {
-		return false
-	}
-	lo, hi := l.MinTempK-10, l.MaxTempK+10
-	for _, c := range []*float64{s.Medium.TemperatureC, s.Storage.TemperatureC} {
-		if c != nil && !(*c+273.15 >= lo && *c+273.15 <= hi) {
-			return true
-		}
-	}
-	return false
-}
 
 func checkTriageResult(t *testing.T, s *advisor.Sample, result any, err error) {
 	t.Helper()

@@ -2,7 +2,6 @@ package physics_test
 
 import (
 	"math"
-	"os"
 	"testing"
 
 	"colloidtriage/physics"
@@ -126,7 +125,6 @@ func FuzzPair(f *testing.F) {
 		if barrier.Found {
 			for _, x := range physics.SeparationGrid(p, 400) {
 				if tol := math.Max(kT, 1e-4*barrier.Energy); p.Energy(x) > barrier.Energy+tol {
-					skipMissedContactPeak(t, p, barrier, tol)
 					e := p.Energy(x)
 					t.Fatalf("Energy(%g) = %g kT above the barrier %+v (%g kT) for %+v", x, e/kT, barrier, barrier.Energy/kT, p)
 				}
@@ -135,8 +133,6 @@ func FuzzPair(f *testing.F) {
 
 		for _, honig := range []bool{false, true} {
 			if w := physics.Log10StabilityRatio(p, honig); !fuzzFinite(w) {
-				skipMissedContactPeak(t, p, barrier, 700*kT) // exp(700) is near float64's limit
-				skipBarrierBeyondRange(t, p, barrier, 700*kT)
 				t.Fatalf("Log10StabilityRatio(honig=%v) = %g for %+v", honig, w, p)
 			}
 		}
@@ -149,41 +145,7 @@ func FuzzPair(f *testing.F) {
 	})
 }
 
-// bugMissedContactPeak is a known bug; TestFuzzFindings holds its case.
-const bugMissedContactPeak = "a barrier peak just beyond the closest approach, narrower than the first scan interval, " +
-	"is missed: Barrier reports the contact value (too low) and Log10StabilityRatio can overflow to +Inf"
-
-// skipMissedContactPeak skips a failure that is the known bug: the barrier
-// is reported at the closest approach while the energy a little further
-// out is higher by more than excess (J).
-func skipMissedContactPeak(t *testing.T, p physics.Pair, barrier physics.Extremum, excess float64) {
-	t.Helper()
-	closest := math.Max(physics.MinimumSeparation, 2*p.StericThickness)
-	if !barrier.Found || barrier.Separation != closest {
-		return
-	}
-	for i := 1; i <= 1000; i++ {
-		if p.Energy(closest*(1+0.2*float64(i)/1000)) > barrier.Energy+excess {
-			t.Skip("BUG: " + bugMissedContactPeak)
-		}
-	}
-}
-
-// bugBarrierBeyondRange is a known bug; TestFuzzFindings holds its case.
-const bugBarrierBeyondRange = "when the energy still rises at the end of the search range (capped at 10 radii), " +
-	"no barrier is found and Log10StabilityRatio overflows to +Inf once the energy there exceeds ~709 kT"
-
-// skipBarrierBeyondRange skips a failure that is the known bug: no barrier
-// is found and the energy at the far end of the search range (the last
-// point of SeparationGrid) is above excess (J).
-func skipBarrierBeyondRange(t *testing.T, p physics.Pair, barrier physics.Extremum, excess float64) {
-	t.Helper()
-	if g := physics.SeparationGrid(p, 2); !barrier.Found && p.Energy(g[1]) > excess {
-		t.Skip("BUG: " + bugBarrierBeyondRange)
-	}
-}
-
-// TestFuzzFindings holds the inputs on which the fuzz targets found bugs.
+// TestFuzzFindings holds the inputs on which the fuzz targets found bugs, now fixed.
 func TestFuzzFindings(t *testing.T) {
 	t.Parallel()
 	// FuzzPair: a 10 mm sphere at 300 mV, constant potential, Debye length
@@ -198,9 +160,6 @@ func TestFuzzFindings(t *testing.T) {
 		ConstantPotential: true}
 	for name, pair := range map[string]physics.Pair{"10 mm at 429 K": p, "0.1 mm in water": q} {
 		t.Run(name, func(t *testing.T) {
-			if os.Getenv("COLLOIDTRIAGE_BUGS") == "" {
-				t.Skip("BUG: " + bugMissedContactPeak)
-			}
 			if w := physics.Log10StabilityRatio(pair, true); !fuzzFinite(w) {
 				t.Errorf("Log10StabilityRatio = %g for %+v", w, pair)
 			}
@@ -217,9 +176,6 @@ func TestFuzzFindings(t *testing.T) {
 	r := physics.Pair{Radius: 8.298273063100851e-09, Hamaker: 7.777777777777786e-19, Potential: -0.3, Kappa: 1e4,
 		EpsR: 78.4, TempK: 222.15, Retarded: true, ConstantPotential: true}
 	t.Run("8.3 nm, Debye length 100 um", func(t *testing.T) {
-		if os.Getenv("COLLOIDTRIAGE_BUGS") == "" {
-			t.Skip("BUG: " + bugBarrierBeyondRange)
-		}
 		if w := physics.Log10StabilityRatio(r, true); !fuzzFinite(w) {
 			t.Errorf("Log10StabilityRatio = %g for %+v", w, r)
 		}
