@@ -53,6 +53,7 @@ func (ev *evaluation) computeInteraction() {
 	}
 	b, m := ev.pair.Extrema()
 	if b.Found {
+		ev.lastBarrier = b.Separation
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (gonum search)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
 	} else {
@@ -143,7 +144,7 @@ func (ev *evaluation) criticalCoagulation() {
 	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.zeta) / (4 * physics.Boltzmann * c.storageTempK))
 	ev.set("ccc_high_potential", physics.CCCHighPotential(c.hamaker, gamma, c.liquid.epsR, c.storageTempK, z),
 		"Derjaguin-Landau-Verwey-Overbeek closed form for a z:z salt, -A a/(12 h) attraction, linear superposition")
-	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0)
+	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0, ev.lastBarrier)
 	if !ok {
 		return
 	}

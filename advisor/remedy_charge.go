@@ -68,7 +68,7 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
 	floor := ionicStrengthFloor(ev)
 	kT := physics.Boltzmann * c.storageTempK
-	top, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT)
+	top, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT, ev.lastBarrier)
 	switch {
 	case !ok && top == 0:
 		return 0, false

@@ -56,70 +56,59 @@ const (
 // is ignored; the potential is held fixed). criterion <= 0 asks for any
 // barrier, so it gives the critical coagulation concentration in terms of
 // ionic strength on the full model of p; criterion = 15 kT is a common
-// design margin for lasting stability.
+// design margin for lasting stability. hint (m) is where the barrier of p
+// is expected, from an earlier Barrier or Extrema; 0 when unknown.
 //
 // ok is false when no answer lies in [1e-6, 5000] mol/m^3: then I is 0 if
 // even 1e-6 mol/m^3 leaves the barrier below criterion, and +Inf if
 // 5000 mol/m^3 still leaves it at or above criterion (no attraction, say).
 // Method: the barrier falls monotonically with I (both double-layer models
 // decrease with kappa at every h), so the signed height of the primary
-// maximum minus criterion has one root in log10 I. It is bracketed by
-// decade steps from the pair's own ionic strength and solved by FindRoot's
-// Illinois iteration to 1e-4 decades (about 0.02 %); each step searches the
-// maximum near the previous one before falling back to a full scan. The
-// result is the end of the final bracket where the barrier still meets
-// criterion. It panics on an invalid Pair or a NaN criterion.
+// maximum minus criterion has one root in log10 I. By the envelope theorem
+// the height moves with ln kappa as the double layer's ln-kappa derivative
+// at the maximum (edlLogKappaSlope), which FindRootNewton uses from the
+// pair's own ionic strength, in steps of at most a decade, to 1e-4 decades
+// (about 0.02 %); each evaluation climbs to the maximum from the previous
+// one before falling back to a full scan. The result is the end of the
+// final bracket where the barrier still meets criterion. It panics on an
+// invalid Pair or a NaN criterion.
 //
 // Reference: Derjaguin & Landau (1941); Verwey & Overbeek (1948), the
 // condition that the maximum of the pair energy reach a given value.
-func CriticalIonicStrength(p Pair, criterion float64) (ionicStrength float64, ok bool) {
+func CriticalIonicStrength(p Pair, criterion, hint float64) (ionicStrength float64, ok bool) {
 	if math.IsNaN(criterion) {
 		panic("physics: CriticalIonicStrength needs a criterion")
 	}
 	c := p.curve()
 	floor := math.Max(criterion, 0)
-	hint := 0.0
-	margin := func(log10I float64) float64 {
+	margin := func(log10I float64) (float64, float64) {
 		c.kappa = DebyeKappa(math.Pow(10, log10I), p.EpsR, p.TempK)
 		v, h := c.signedBarrier(hint)
-		hint = h
-		if criterion <= 0 && v == 0 {
-			return -1 // no barrier at all: on the failing side
+		if h > 0 {
+			hint = h
 		}
-		return v - floor
+		if criterion <= 0 && v == 0 && h == 0 {
+			return -1, 0 // no barrier at all: on the failing side
+		}
+		at := h
+		if at == 0 {
+			at, _ = c.searchRange()
+		}
+		return v - floor, c.edlLogKappaSlope(at) * math.Ln10 / 2
 	}
 	lo, hi := math.Log10(minCriticalIonicStrength), math.Log10(maxCriticalIonicStrength)
 	start := 0.0 // 1 mol/m^3 without electrolyte
 	if p.Kappa > 0 {
 		start = math.Log10(ionicStrengthOfKappa(p.Kappa, p.EpsR, p.TempK))
 	}
-	start = math.Min(math.Max(start, lo), hi)
-	a, fa := start, margin(start)
-	step := 1.0
-	if fa < 0 {
-		step = -1
-	}
-	b, fb := a, fa
-	for (fb >= 0) == (fa >= 0) {
-		a, fa = b, fb
-		b = a + step
-		if b < lo || b > hi {
-			if step > 0 {
-				return math.Inf(1), false
-			}
-			return 0, false
-		}
-		fb = margin(b)
-	}
-	x, y, ok := FindRootBracket(margin, a, b, 1e-4)
-	if !ok {
+	hold, _, ok := FindRootNewton(margin, start, lo, hi, -1, 1, 1e-4)
+	switch {
+	case ok:
+		return math.Pow(10, hold), true
+	case math.IsNaN(hold):
 		return 0, false
 	}
-	// Keep the end of the bracket on the side where the barrier holds.
-	if fa >= 0 {
-		return math.Pow(10, x), true
-	}
-	return math.Pow(10, y), true
+	return math.Inf(1), false
 }
 
 // ionicStrengthOfKappa inverts DebyeKappa.
@@ -158,37 +147,34 @@ func (c *pairCurve) signedBarrier(hint float64) (float64, float64) {
 	return edge.Energy, 0
 }
 
-// maximumNear climbs from hint (in steps of 0.25 in ln h, at most eight) to
-// an interior maximum and polishes it; ok is false when it reaches the end
-// of the search range first.
+// maximumNear climbs from hint (in steps of 0.25 in ln h, at most eight,
+// uphill by the sign of V_s) until V_s changes sign, and polishes the
+// maximum so bracketed; ok is false when it reaches the end of the search
+// range first.
 func (c *pairCurve) maximumNear(hint float64) (v, h float64, ok bool) {
 	const step = 0.25
 	lo, hi := c.searchRange()
 	sLo, sHi := math.Log(lo), math.Log(hi)
 	s := math.Log(hint)
-	if s-step <= sLo || s+step >= sHi {
+	if !(s > sLo && s < sHi) {
 		return 0, 0, false
 	}
-	at := func(x float64) float64 { return c.energy(math.Exp(x)) }
-	left, mid, right := at(s-step), at(s), at(s+step)
+	_, slope, _ := c.slopes(hint)
+	dir := 1.0
+	if slope < 0 {
+		dir = -1
+	}
 	for k := 0; k < 8; k++ {
-		switch {
-		case mid >= left && mid >= right:
-			x, e := c.polish(s-step, s+step, s, 1)
-			return e, math.Exp(x), true
-		case right > mid:
-			s, left, mid = s+step, mid, right
-			if s+step >= sHi {
-				return 0, 0, false
-			}
-			right = at(s + step)
-		default:
-			s, right, mid = s-step, mid, left
-			if s-step <= sLo {
-				return 0, 0, false
-			}
-			left = at(s - step)
+		next := s + dir*step
+		if next <= sLo || next >= sHi {
+			return 0, 0, false
 		}
+		if _, nextSlope, _ := c.slopes(math.Exp(next)); dir*nextSlope <= 0 {
+			a, b := min(s, next), max(s, next)
+			x, e := c.polish(a, b, s, 1)
+			return e, math.Exp(x), true
+		}
+		s = next
 	}
 	return 0, 0, false
 }

@@ -69,7 +69,7 @@ func TestCriticalIonicStrength(t *testing.T) {
 	}
 	got := map[string]float64{}
 	for _, tt := range tests {
-		i, ok := CriticalIonicStrength(tt.pair, tt.criterion)
+		i, ok := CriticalIonicStrength(tt.pair, tt.criterion, 0)
 		got[tt.name] = i
 		// 1e-4 decades of bisection plus the two scans' resolution.
 		if !ok || interactionRelErr(i, tt.want) > 5e-4 {
@@ -109,12 +109,12 @@ func TestCriticalIonicStrengthOutOfRange(t *testing.T) {
 	t.Parallel()
 	// Without attraction salt cannot remove the barrier: +Inf, not ok.
 	p := Pair{Radius: 100e-9, Potential: -0.03, EpsR: 78.4, TempK: interactionTempK}
-	if i, ok := CriticalIonicStrength(p, 0); ok || !math.IsInf(i, 1) {
+	if i, ok := CriticalIonicStrength(p, 0, 0); ok || !math.IsInf(i, 1) {
 		t.Errorf("no attraction: got %g, %v, want +Inf, false", i, ok)
 	}
 	// Uncharged: no barrier at any salt, so 0, not ok.
 	p.Hamaker, p.Potential = 1e-20, 0
-	if i, ok := CriticalIonicStrength(p, 0); ok || i != 0 {
+	if i, ok := CriticalIonicStrength(p, 0, 0); ok || i != 0 {
 		t.Errorf("uncharged: got %g, %v, want 0, false", i, ok)
 	}
 }
@@ -123,6 +123,6 @@ func BenchmarkCriticalIonicStrength(b *testing.B) {
 	p := dlvoPair(-0.025, 1)
 	criterion := 15 * Boltzmann * interactionTempK
 	for b.Loop() {
-		CriticalIonicStrength(p, criterion)
+		CriticalIonicStrength(p, criterion, 0)
 	}
 }

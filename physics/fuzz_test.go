@@ -138,7 +138,7 @@ func FuzzPair(f *testing.F) {
 		}
 
 		// Documented: ok with I in [1e-6, 5000] mol/m^3, else 0 or +Inf.
-		is, ok := physics.CriticalIonicStrength(p, criterion)
+		is, ok := physics.CriticalIonicStrength(p, criterion, 0)
 		if ok && !(is >= 1e-6 && is <= 5000) || !ok && is != 0 && !math.IsInf(is, 1) {
 			t.Fatalf("CriticalIonicStrength(%g J) = %g, %v for %+v", criterion, is, ok, p)
 		}

@@ -64,3 +64,73 @@ func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64
 	}
 	return lo, hi, true
 }
+
+// FindRootNewton brackets and solves f(x) = 0 on [lo, hi] for a monotone f
+// whose slope has the sign slopeSign (+1 or -1), where f returns its value
+// and its derivative (exact or approximate). From the guess x0 it takes
+// Newton steps, capped at maxStep, towards the root until the sign of f
+// changes; inside the bracket it takes Newton steps, replaced by bisection
+// when one leaves the bracket, and once a step is shorter than tol/4 it
+// places the next point tol/4 beyond it so that the bracket closes on both
+// sides. It returns hold, the end of the final bracket where f >= 0, and
+// fail, the end where f < 0, with |hold - fail| < tol; when f keeps one sign
+// on the whole path to the end of [lo, hi], ok is false and the missing end
+// is NaN. At most 100 evaluations are made.
+//
+// Reference: W. H. Press, S. A. Teukolsky, W. T. Vetterling & B. P.
+// Flannery, Numerical Recipes, 3rd ed. (2007), sec. 9.4 (Newton–Raphson
+// with bisection safeguard).
+func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, maxStep, tol float64) (hold, fail float64, ok bool) {
+	hold, fail = math.NaN(), math.NaN()
+	x := math.Min(math.Max(x0, lo), hi)
+	fx, dfx := f(x)
+	record := func() {
+		if fx >= 0 {
+			hold = x
+		} else {
+			fail = x
+		}
+	}
+	record()
+	evaluations := 1
+	for math.IsNaN(hold) || math.IsNaN(fail) {
+		dir := slopeSign
+		if fx >= 0 {
+			dir = -slopeSign
+		}
+		step := maxStep
+		if newton := -fx / dfx; newton*dir > 0 && newton < math.Inf(1) && newton > math.Inf(-1) {
+			step = math.Min(math.Abs(newton), maxStep)
+		}
+		next := math.Min(math.Max(x+dir*step, lo), hi)
+		if next == x || evaluations >= 100 || math.IsNaN(fx) {
+			return hold, fail, false
+		}
+		x = next
+		fx, dfx = f(x)
+		evaluations++
+		record()
+	}
+	for math.Abs(hold-fail) >= tol && evaluations < 100 {
+		a, b := math.Min(hold, fail), math.Max(hold, fail)
+		next := x - fx/dfx
+		if !(next > a && next < b) {
+			next = (a + b) / 2
+		}
+		if math.Abs(next-x) < tol/4 {
+			other := hold
+			if fx >= 0 {
+				other = fail
+			}
+			next = x + math.Copysign(tol/4, other-x)
+		}
+		x = next
+		fx, dfx = f(x)
+		evaluations++
+		if math.IsNaN(fx) {
+			return hold, fail, false
+		}
+		record()
+	}
+	return hold, fail, true
+}
