@@ -26,24 +26,40 @@ const shieldedMargin = 1000.0
 // stabilityMargin is the smaller of the barrier margin (kT) and the
 // half-life margin (decades) of a pair; >= 0 means acceptable.
 func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
+	m, _ := stabilityMarginSlope(ev, p)
+	return m
+}
+
+// stabilityMarginSlope is stabilityMargin with an estimate of its slope in
+// log10 of the ionic strength, for Newton steps: by the envelope theorem the
+// barrier moves by LogKappaSlope ln(10)/2 per decade, and log10 W follows
+// the barrier over kT ln 10, less half a decade for the 1/(kappa a) of
+// W ~ exp(Vmax/kT)/(2 kappa a) (Reerink & Overbeek, Discuss. Faraday Soc.
+// 18 (1954) 74).
+func stabilityMarginSlope(ev *evaluation, p physics.Pair) (margin, slope float64) {
 	c := ev.c
 	if shielded(p) {
-		return shieldedMargin
+		return shieldedMargin, 0
 	}
 	kT := physics.Boltzmann * c.storageTempK
-	barrier := 0.0
+	barrier, barrierSlope := 0.0, 0.0
 	b := p.BarrierNear(ev.lastBarrier)
 	if b.Found {
 		barrier = b.Energy / kT
+		barrierSlope = p.LogKappaSlope(b.Separation) / kT * math.Ln10 / 2
 		ev.lastBarrier = b.Separation
 	}
 	byBarrier := barrier - c.criteria.minBarrierKT
 	if byBarrier < 0 {
-		return byBarrier
+		return byBarrier, barrierSlope
 	}
 	n0 := physics.NumberDensity(c.phi, c.radius)
 	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, physics.Log10StabilityRatioWith(p, b, true))
-	return math.Min(byBarrier, log10T-math.Log10(c.criteria.halfLifeRatio*c.shelfLife))
+	byHalfLife := log10T - math.Log10(c.criteria.halfLifeRatio*c.shelfLife)
+	if byBarrier < byHalfLife {
+		return byBarrier, barrierSlope
+	}
+	return byHalfLife, barrierSlope/math.Ln10 - 0.5
 }
 
 func (ev *evaluation) withIonicStrength(I float64) physics.Pair {
@@ -63,7 +79,8 @@ func ionicStrengthFloor(ev *evaluation) float64 {
 // largestAcceptableIonicStrength finds the largest ionic strength that meets
 // both criteria: first the barrier criterion, solved directly by
 // physics.CriticalIonicStrength; then, only if the half-life still falls
-// short there, the half-life margin by root finding below it.
+// short there, the half-life margin by Newton steps below it
+// (physics.FindRootNewton with the slope of stabilityMarginSlope).
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
 	floor := ionicStrengthFloor(ev)
@@ -78,25 +95,17 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	if top < floor {
 		return 0, false
 	}
-	margin := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
-	hi, lowest := math.Log10(top), math.Log10(floor)
-	if margin(hi) >= 0 {
-		return top, true
+	margin := func(logI float64) (float64, float64) {
+		return stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)))
 	}
-	// Step down a decade at a time: the half-life grows steeply as salt
-	// falls, so the root is usually within the first decade.
-	lo := hi
-	for {
-		hi, lo = lo, math.Max(lo-1, lowest)
-		if margin(lo) >= 0 {
-			break
-		}
-		if lo == lowest {
-			return 0, false
-		}
+	hold, fail, ok := physics.FindRootNewton(margin, math.Log10(top), math.Log10(floor), math.Log10(top), -1, 1, 1e-3)
+	switch {
+	case ok:
+		return math.Pow(10, hold), true
+	case math.IsNaN(fail):
+		return top, true // acceptable at the barrier criterion's own answer
 	}
-	a, _, ok := physics.FindRootBracket(margin, lo, hi, 1e-3)
-	return math.Pow(10, a), ok
+	return 0, false
 }
 
 func solveIonicStrength(ev *evaluation) (Target, string, bool) {

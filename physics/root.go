@@ -69,7 +69,8 @@ func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64
 // whose slope has the sign slopeSign (+1 or -1), where f returns its value
 // and its derivative (exact or approximate). From the guess x0 it takes
 // Newton steps, capped at maxStep, towards the root until the sign of f
-// changes; inside the bracket it takes Newton steps, replaced by bisection
+// changes (at least tol/4 at a time, so that a root approached from one side
+// is crossed); inside the bracket it takes Newton steps, replaced by bisection
 // when one leaves the bracket, and once a step is shorter than tol/4 it
 // places the next point tol/4 beyond it so that the bracket closes on both
 // sides. It returns hold, the end of the final bracket where f >= 0, and
@@ -100,7 +101,7 @@ func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, m
 		}
 		step := maxStep
 		if newton := -fx / dfx; newton*dir > 0 && newton < math.Inf(1) && newton > math.Inf(-1) {
-			step = math.Min(math.Abs(newton), maxStep)
+			step = math.Min(math.Max(math.Abs(newton), tol/4), maxStep)
 		}
 		next := math.Min(math.Max(x+dir*step, lo), hi)
 		if next == x || evaluations >= 100 || math.IsNaN(fx) {

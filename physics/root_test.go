@@ -50,6 +50,9 @@ func TestFindRootNewton(t *testing.T) {
 		{"dottie", func(x float64) (float64, float64) { return math.Cos(x) - x, -math.Sin(x) - 1 }, 0, -1, 2, -1, 0.7390851332151607},
 		{"ln10 from -20", func(x float64) (float64, float64) { return 10 - math.Exp(x), -math.Exp(x) }, -20, -30, 30, -1, math.Ln10},
 		{"wallis", func(x float64) (float64, float64) { return x*x*x - 2*x - 5, 3*x*x - 2 }, 3, 1.5, 5, 1, 2.0945514815423265},
+		// Newton's iterates on a convex function approach the root from one
+		// side only, yet the bracket closes.
+		{"one-sided", func(x float64) (float64, float64) { return math.Exp(-x) - 0.5, -math.Exp(-x) }, 0, -5, 5, -1, math.Ln2},
 		// A poor derivative estimate (half the true one) still converges.
 		{"rough slope", func(x float64) (float64, float64) { calls++; return 2 - x*x, -x }, 0.5, 0, 10, -1, math.Sqrt2},
 	}

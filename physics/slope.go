@@ -82,3 +82,14 @@ func (c *pairCurve) edlLogKappaSlope(h float64) float64 {
 	}
 	return -x * c.edlContact * math.Exp(-x)
 }
+
+// LogKappaSlope returns the derivative of Energy at surface separation h
+// (m, >= 0) with respect to ln Kappa at fixed potential, in J. Taken at the
+// barrier it is, by the envelope theorem, the rate at which the barrier's
+// height changes with ln Kappa (a decade of ionic strength is ln 10 / 2 in
+// ln Kappa), which lets root searches over the salt take Newton steps. It
+// panics on a negative h or an invalid Pair.
+func (p Pair) LogKappaSlope(h float64) float64 {
+	c := p.curve()
+	return c.edlLogKappaSlope(checkSeparation(h))
+}

@@ -52,7 +52,7 @@ func TestCurveSlopes(t *testing.T) {
 				up := k.energy(h)
 				k.kappa = c.kappa * math.Exp(-d)
 				want := (up - k.energy(h)) / (2 * d)
-				if got := c.edlLogKappaSlope(h); math.Abs(got-want) > 1e-6*scale {
+				if got := p.LogKappaSlope(h); math.Abs(got-want) > 1e-6*scale {
 					t.Errorf("%s h=%g: dV/dln kappa %g, want %g", name, h, got, want)
 				}
 			}

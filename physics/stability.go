@@ -23,9 +23,9 @@ import (
 // Method: composite 6-point Gauss–Legendre (gonum quad.Legendre nodes) in
 // ln h from the closest approach to max(h_max, 2a), on panels no wider than
 // 1.5 in ln h plus panels of 1.5, 3 and 6 widths either side of the barrier
-// (width from the curvature there), skipping panels where the integrand is
-// below exp(-40) of its peak, and 8 points in x = 1/(u+2) beyond. Against a
-// fine trapezoidal reference (testdata/reference/interaction.py) log10 W
+// (width from the curvature there), skipping parts whose bound is below
+// 1e-10 of the barrier's contribution, and 8 points in x = 1/(u+2) beyond.
+// Against a fine trapezoidal reference (testdata/reference/interaction.py) log10 W
 // agrees to better than 1e-4 in the tested cases, from W < 1 to W = 1e4048,
 // which the tests hold it to. It panics on an invalid Pair.
 //
@@ -47,65 +47,98 @@ func Log10StabilityRatioWith(p Pair, barrier Extremum, honig bool) float64 {
 	return c.log10StabilityRatio(barrier, honig)
 }
 
-// negligibleExponent: a panel whose integrand is below exp(-40) of the
-// barrier's at both ends, and which does not hold the barrier, adds less
-// than 1e-17 of the integral and is skipped (the curve has no other maximum
-// inside one panel).
-const negligibleExponent = -40.0
+// negligibleShare: a part of the integral whose bound is below this share of
+// the barrier's own contribution is skipped. With at most 56 panels and the
+// far part, the skipped parts together stay below 1e-8 of W, far under the
+// 1e-4 accuracy held in log10 W.
+const negligibleShare = 1e-10
+
+// maxWeight bounds the weight beta(u) u/(u+2)^2 of the integrand in ln h
+// (1/8 at u = 2 without Honig, 0.236 near u = 0.8 with it), and maxFarBeta
+// bounds beta(u) for u >= 2 (Honig's factor falls from 1.625 at u = 2
+// towards 1).
+const (
+	maxWeight  = 0.25
+	maxFarBeta = 2.0
+)
 
 func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 	lo, hi := c.searchRange()
 	sLo := math.Log(lo)
 	sHi := math.Log(math.Max(hi, 2*c.radius))
-	// Beyond sHi the integral runs in x = 1/(u+2) from 0 to xMax; its
-	// energies are taken first so that ref, the exponent factored out, is the
-	// highest energy the integral sees even when no barrier was found in the
-	// search range (which keeps every exponential finite).
-	xMax := 1 / (math.Exp(sHi)/c.radius + 2)
-	var farU, farV [8]float64
+	weight := func(u float64) float64 {
+		betaU := u
+		if honig {
+			betaU = (6*u*u + 13*u + 2) / (6*u + 4)
+		}
+		return betaU / ((u + 2) * (u + 2))
+	}
+	// ref, the exponent factored out, is the highest energy the integral
+	// sees, so that every exponential stays finite even when no barrier was
+	// found in the search range. skipBelow is the exponent under which a
+	// part of unit width is negligible against the barrier's contribution,
+	// about weight(u*) times the barrier width; without a barrier nothing is
+	// skipped.
 	ref := math.Max(0, c.energy(lo)/c.kT)
+	skipBelow := math.Inf(-1)
+	var sBarrier, width float64
 	if barrier.Found {
 		ref = math.Max(ref, barrier.Energy/c.kT)
+		sBarrier = math.Log(barrier.Separation)
+		width = c.barrierWidth(sBarrier)
+		skipBelow = math.Log(negligibleShare * weight(barrier.Separation/c.radius) * math.Min(width, maxStabilityPanel))
 	}
-	for k, x := range gaussLegendre8.x {
-		farU[k] = 1/(xMax*(x+1)/2) - 2
-		farV[k] = c.energy(farU[k]*c.radius) / c.kT
-		ref = math.Max(ref, farV[k])
+	// Beyond sHi the integral runs in x = 1/(u+2) from 0 to xMax. There
+	// (past 3 depletion ranges) the energy is at most the double layer's at
+	// sHi, which bounds the far part; when it is not negligible its energies
+	// join ref.
+	xMax := 1 / (math.Exp(sHi)/c.radius + 2)
+	_, edlHi, _ := c.parts(math.Exp(sHi))
+	var farU, farV [8]float64
+	withFar := edlHi/c.kT-ref+math.Log(xMax*maxFarBeta) >= skipBelow
+	if withFar {
+		for k, x := range gaussLegendre8.x {
+			farU[k] = 1/(xMax*(x+1)/2) - 2
+			farV[k] = c.energy(farU[k]*c.radius) / c.kT
+			ref = math.Max(ref, farV[k])
+		}
 	}
 
+	// Background edges every maxStabilityPanel at most, except inside the
+	// barrier's own panels (within 6 widths of it), which replace them there.
 	var breaks [maxStabilityBreaks]float64
 	n := 0
+	aroundBarrier := barrier.Found && width < maxStabilityPanel
+	reach := barrierPanelEdges[len(barrierPanelEdges)-1] * width
 	panels := int(math.Ceil((sHi - sLo) / maxStabilityPanel))
 	panels = min(max(panels, 1), maxBackgroundPanels)
 	for i := 0; i <= panels; i++ {
-		breaks[n] = sLo + (sHi-sLo)*float64(i)/float64(panels)
+		s := sLo + (sHi-sLo)*float64(i)/float64(panels)
+		if aroundBarrier && i > 0 && i < panels && math.Abs(s-sBarrier) < reach {
+			continue
+		}
+		breaks[n] = s
 		n++
 	}
-	if barrier.Found {
-		sStar := math.Log(barrier.Separation)
-		width := c.barrierWidth(sStar)
-		if width < maxStabilityPanel {
-			for _, k := range barrierPanelEdges {
-				if s := sStar + k*width; s > sLo && s < sHi {
-					breaks[n] = s
-					n++
-				}
+	if aroundBarrier {
+		for _, k := range barrierPanelEdges {
+			if s := sBarrier + k*width; s > sLo && s < sHi {
+				breaks[n] = s
+				n++
 			}
 		}
 	}
 	sortSmall(breaks[:n])
 
+	// A panel without the barrier has no interior maximum of V, so its
+	// integrand is at most maxWeight exp(V/kT - ref) at its higher end.
 	near := 0.0
-	sBarrier := math.Inf(1)
-	if barrier.Found {
-		sBarrier = math.Log(barrier.Separation)
-	}
 	expLeft := c.energy(math.Exp(breaks[0]))/c.kT - ref
 	for i := 0; i+1 < n; i++ {
 		half := (breaks[i+1] - breaks[i]) / 2
 		expRight := c.energy(math.Exp(breaks[i+1]))/c.kT - ref
-		skip := expLeft < negligibleExponent && expRight < negligibleExponent &&
-			!(sBarrier >= breaks[i] && sBarrier <= breaks[i+1])
+		holdsBarrier := barrier.Found && sBarrier >= breaks[i] && sBarrier <= breaks[i+1]
+		skip := !holdsBarrier && math.Max(expLeft, expRight)+math.Log(2*half*maxWeight) < skipBelow
 		expLeft = expRight
 		if !(half > 1e-12) || skip {
 			continue
@@ -113,18 +146,16 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 		mid := (breaks[i+1] + breaks[i]) / 2
 		for k, x := range gaussLegendre6.x {
 			h := math.Exp(mid + half*x)
-			u := h / c.radius
-			betaU := u
-			if honig {
-				betaU = (6*u*u + 13*u + 2) / (6*u + 4)
-			}
-			near += half * gaussLegendre6.w[k] * betaU / ((u + 2) * (u + 2)) * math.Exp(c.energy(h)/c.kT-ref)
+			near += half * gaussLegendre6.w[k] * weight(h/c.radius) * math.Exp(c.energy(h)/c.kT-ref)
 		}
 	}
 
 	// Beyond sHi: du/(u+2)^2 = -dx.
 	far := 0.0
 	for k, u := range farU {
+		if !withFar {
+			break
+		}
 		beta := 1.0
 		if honig {
 			beta = (6*u*u + 13*u + 2) / (6*u*u + 4*u)
@@ -147,12 +178,9 @@ var barrierPanelEdges = [6]float64{-6, -3, -1.5, 1.5, 3, 6}
 // barrierWidth is the width in ln h of exp(V/kT) about s, from the curvature
 // at an interior maximum and from the slope at an end of the range.
 func (c *pairCurve) barrierWidth(s float64) float64 {
-	const d = 1e-3
-	vm := c.energy(math.Exp(s-d)) / c.kT
-	v0 := c.energy(math.Exp(s)) / c.kT
-	vp := c.energy(math.Exp(s+d)) / c.kT
-	curvature := (vp - 2*v0 + vm) / (d * d)
-	slope := (vp - vm) / (2 * d)
+	_, slope, curvature := c.slopes(math.Exp(s))
+	slope /= c.kT
+	curvature /= c.kT
 	return 1 / math.Sqrt(math.Abs(curvature)+slope*slope+1e-300)
 }
 
