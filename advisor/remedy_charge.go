@@ -95,8 +95,17 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	if top < floor {
 		return 0, false
 	}
+	// The envelope-theorem slope starts the search; from the second point
+	// on, the secant through the last two points, which also carries the
+	// prefactor of W, is the better estimate.
+	lastLogI, lastMargin := math.NaN(), math.NaN()
 	margin := func(logI float64) (float64, float64) {
-		return stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)))
+		m, slope := stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)))
+		if secant := (m - lastMargin) / (logI - lastLogI); secant < 0 {
+			slope = secant
+		}
+		lastLogI, lastMargin = logI, m
+		return m, slope
 	}
 	hold, fail, ok := physics.FindRootNewton(margin, math.Log10(top), math.Log10(floor), math.Log10(top), -1, 1, 1e-3)
 	switch {

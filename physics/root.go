@@ -69,11 +69,11 @@ func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64
 // whose slope has the sign slopeSign (+1 or -1), where f returns its value
 // and its derivative (exact or approximate). From the guess x0 it takes
 // Newton steps, capped at maxStep, towards the root until the sign of f
-// changes (at least tol/4 at a time, so that a root approached from one side
-// is crossed); inside the bracket it takes Newton steps, replaced by bisection
-// when one leaves the bracket, and once a step is shorter than tol/4 it
-// places the next point tol/4 beyond it so that the bracket closes on both
-// sides. It returns hold, the end of the final bracket where f >= 0, and
+// changes; inside the bracket it takes Newton steps towards its other end,
+// replaced by bisection when one leaves the bracket. A step shorter than tol
+// is lengthened by tol/4, so that once the estimate is that close the next
+// point lands across the root and the bracket closes from both sides, even
+// where Newton's iterates approach from one side only (a convex f). It returns hold, the end of the final bracket where f >= 0, and
 // fail, the end where f < 0, with |hold - fail| < tol; when f keeps one sign
 // on the whole path to the end of [lo, hi], ok is false and the missing end
 // is NaN. At most 100 evaluations are made.
@@ -101,7 +101,7 @@ func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, m
 		}
 		step := maxStep
 		if newton := -fx / dfx; newton*dir > 0 && newton < math.Inf(1) && newton > math.Inf(-1) {
-			step = math.Min(math.Max(math.Abs(newton), tol/4), maxStep)
+			step = math.Min(overshoot(math.Abs(newton), tol), maxStep)
 		}
 		next := math.Min(math.Max(x+dir*step, lo), hi)
 		if next == x || evaluations >= 100 || math.IsNaN(fx) {
@@ -114,16 +114,13 @@ func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, m
 	}
 	for math.Abs(hold-fail) >= tol && evaluations < 100 {
 		a, b := math.Min(hold, fail), math.Max(hold, fail)
-		next := x - fx/dfx
+		other := hold
+		if fx >= 0 {
+			other = fail
+		}
+		next := x + math.Copysign(overshoot(math.Abs(fx/dfx), tol), other-x)
 		if !(next > a && next < b) {
 			next = (a + b) / 2
-		}
-		if math.Abs(next-x) < tol/4 {
-			other := hold
-			if fx >= 0 {
-				other = fail
-			}
-			next = x + math.Copysign(tol/4, other-x)
 		}
 		x = next
 		fx, dfx = f(x)
@@ -134,4 +131,13 @@ func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, m
 		record()
 	}
 	return hold, fail, true
+}
+
+// overshoot lengthens a Newton step shorter than tol by tol/4 (see
+// FindRootNewton).
+func overshoot(step, tol float64) float64 {
+	if step < tol {
+		return step + tol/4
+	}
+	return step
 }
