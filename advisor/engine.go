@@ -78,7 +78,7 @@ func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]strin
 }
 
 func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{}, scales: make(map[string]Scale, len(scaleSpecs)), models: map[string]string{}, f: factTemplate()}
+	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: map[string]string{}, f: factTemplate()}
 	c, err := e.resolve(s, ev.n)
 	if err != nil {
 		return nil, err
