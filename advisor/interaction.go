@@ -54,7 +54,7 @@ func (ev *evaluation) computeInteraction() {
 	b, m := ev.pair.Extrema()
 	if b.Found {
 		ev.lastBarrier = b.Separation
-		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (gonum search)")
+		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (logarithmic scan, Newton refinement)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
 	} else {
 		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
