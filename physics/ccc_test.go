@@ -71,6 +71,14 @@ func TestCriticalIonicStrength(t *testing.T) {
 	for _, tt := range tests {
 		i, ok := CriticalIonicStrength(tt.pair, tt.criterion, 0)
 		got[tt.name] = i
+		// A warm start from the barrier at 1 mM, as the advisor passes it,
+		// lands in the same 1e-4-decade bracket.
+		p := tt.pair.WithIonicStrength(1)
+		if b := p.Barrier(); b.Found {
+			if warm, wok := CriticalIonicStrength(p, tt.criterion, b.Separation); wok != ok || interactionRelErr(warm, i) > 5e-4 {
+				t.Errorf("%s: warm start %.7g (ok %v), cold %.7g", tt.name, warm, wok, i)
+			}
+		}
 		// 1e-4 decades of bisection plus the two scans' resolution.
 		if !ok || interactionRelErr(i, tt.want) > 5e-4 {
 			t.Errorf("%s: got %.7g mol/m^3 (ok %v), want %.7g", tt.name, i, ok, tt.want)
