@@ -15,11 +15,11 @@ import "math"
 //   - Asakura–Oosawa, V = -P (6a+4delta+h) g^2 with g = 2 delta - h:
 //     dV/dh = -P g (g - 2L), d2V/dh2 = -P (2L - 4g), L = 6a+4delta+h.
 //
-// V is summed as in parts. Each is the derivative of the published expression (Hamaker 1937;
-// Gregory 1981; Verwey & Overbeek 1948; Hogg, Healy & Fuerstenau 1966;
-// Asakura & Oosawa 1958); none has the cancellation of the energies
-// themselves, so they hold full precision at every separation.
-
+// V is summed as in parts. Each derivative is that of the published
+// expression (Hamaker 1937; Gregory 1981; Verwey & Overbeek 1948; Hogg,
+// Healy & Fuerstenau 1966; Asakura & Oosawa 1958); none has the
+// cancellation of the energies themselves, so they hold full precision at
+// every separation.
 func (c *pairCurve) slopes(h float64) (v, vs, vss float64) {
 	switch {
 	case c.hamaker == 0:
