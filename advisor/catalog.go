@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"fmt"
 	"io/fs"
+	"strings"
 
 	"gopkg.in/yaml.v3"
 )
@@ -40,6 +41,11 @@ func loadCatalog(fsys fs.FS, name string) (*Catalog, []byte, error) {
 				return nil, nil, fmt.Errorf("%s: empty or duplicate id %q", name, e.ID)
 			}
 			seen[e.ID] = true
+		}
+	}
+	for _, e := range c.Remedies {
+		if strings.Count(e.Action, "{target}") > 1 {
+			return nil, nil, fmt.Errorf("%s: remedy %q: an action holds at most one {target}", name, e.ID)
 		}
 	}
 	return &c, data, nil

@@ -78,7 +78,7 @@ func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]strin
 }
 
 func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: map[string]string{}, f: factTemplate()}
+	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), f: factTemplate()}
 	c, err := e.resolve(s, ev.n)
 	if err != nil {
 		return nil, err
@@ -92,7 +92,7 @@ func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
 }
 
 type firing struct {
-	rule rule
+	rule *rule
 	text string
 }
 
@@ -110,11 +110,12 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 	scores := map[string]*causeScore{}
 	var machine vm.VM
 	run := func(after bool) {
-		for _, r := range e.rules.rules {
+		for i := range e.rules.rules {
+			r := &e.rules.rules[i]
 			if r.AfterCauses != after || !r.appliesTo(ev.c.symptom) {
 				continue
 			}
-			out, err := runRule(&machine, r, ev.f)
+			out, err := runRule(&machine, r.program, ev.f)
 			if err != nil || !out {
 				continue
 			}
@@ -156,31 +157,51 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 
 func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 	entry, _ := find(e.rules.Catalog.Causes, cs.id)
+	evidence, remedies := 0, 0
+	for _, fr := range cs.fired {
+		evidence += len(fr.rule.Evidence)
+		remedies += len(fr.rule.Remedies)
+	}
 	c := Cause{ID: cs.id, Rank: rank, Score: math.Round(cs.cf*1000) / 1000, Title: entry.Title,
-		Evidence: []Evidence{}, Remedies: []Remedy{}}
-	var texts []string
-	seenEvidence, seenRemedy := map[string]bool{}, map[string]bool{}
+		Evidence: make([]Evidence, 0, evidence), Remedies: make([]Remedy, 0, remedies)}
+	texts := make([]string, 0, len(cs.fired))
 	for _, fr := range cs.fired {
 		texts = append(texts, fr.text)
 		for _, name := range fr.rule.Evidence {
 			v := ev.f.number(name)
-			if seenEvidence[name] || math.IsNaN(v) || math.IsInf(v, 0) {
+			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
 				continue
 			}
-			seenEvidence[name] = true
 			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: fr.rule.When})
 		}
 		if fr.rule.Certainty < 0 {
 			continue
 		}
 		for _, id := range fr.rule.Remedies {
-			if seenRemedy[id] {
-				continue
+			if !hasRemedy(c.Remedies, id) {
+				c.Remedies = append(c.Remedies, e.remedy(ev, id))
 			}
-			seenRemedy[id] = true
-			c.Remedies = append(c.Remedies, e.remedy(ev, id))
 		}
 	}
 	c.Explanation = strings.Join(texts, " ")
 	return c
+}
+
+// hasEvidence and hasRemedy look through the few entries of one cause.
+func hasEvidence(list []Evidence, scale string) bool {
+	for _, ev := range list {
+		if ev.Scale == scale {
+			return true
+		}
+	}
+	return false
+}
+
+func hasRemedy(list []Remedy, id string) bool {
+	for _, r := range list {
+		if r.ID == id {
+			return true
+		}
+	}
+	return false
 }

@@ -23,13 +23,23 @@ func (e *Engine) remedy(ev *evaluation, id string) Remedy {
 	t, criterion, ok := solve(ev)
 	r.Criterion = criterion
 	if !ok || math.IsNaN(t.Value) || math.IsInf(t.Value, 0) {
-		r.Action = strings.ReplaceAll(entry.Action, "{target}", "no target found within the physical range ("+criterion+")")
+		r.Action = withTarget(entry.Action, "no target found within the physical range ("+criterion+")")
 		return r
 	}
 	t.Value = roundSignificant(t.Value, 3)
 	r.Target = &t
-	r.Action = strings.ReplaceAll(entry.Action, "{target}", t.Quantity+" "+t.Op+" "+formatQuantity(t.Value, t.Unit))
+	r.Action = withTarget(entry.Action, t.Quantity+" "+t.Op+" "+formatQuantity(t.Value, t.Unit))
 	return r
+}
+
+// withTarget puts target in place of the {target} of an action (the
+// catalogue holds at most one).
+func withTarget(action, target string) string {
+	before, after, ok := strings.Cut(action, "{target}")
+	if !ok {
+		return action
+	}
+	return before + target + after
 }
 
 // remedySolvers maps each remedy with a computable target to its solver;

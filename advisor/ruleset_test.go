@@ -99,3 +99,14 @@ func TestRuleCatalogueChecks(t *testing.T) {
 		t.Errorf("duplicate id: got %v", err)
 	}
 }
+
+func TestCatalogActionHoldsOneTarget(t *testing.T) {
+	t.Parallel()
+	fsys := fstest.MapFS{"catalog.yaml": {Data: []byte("remedies:\n  - id: twice\n    action: \"{target} and {target}\"\n")}}
+	if _, _, err := loadCatalog(fsys, "catalog.yaml"); err == nil || !strings.Contains(err.Error(), "at most one {target}") {
+		t.Errorf("two {target}: got %v", err)
+	}
+	if got := withTarget("Raise it: {target}.", "x >= 1"); got != "Raise it: x >= 1." {
+		t.Errorf("withTarget = %q", got)
+	}
+}
