@@ -71,7 +71,7 @@ func roundSignificant(v float64, n int) float64 {
 // model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(name, choice string) {
 	ev.models[name] = choice
-	ev.n.list = append(ev.n.list, "model for "+strings.ReplaceAll(name, "_", " ")+": "+choice)
+	ev.n.text("model for " + strings.ReplaceAll(name, "_", " ") + ": " + choice)
 }
 
 func (ev *evaluation) inputFacts() {

@@ -26,7 +26,7 @@ func (e *Engine) liquidAt(l Liquid, tempC float64, field string, n *notes) (liqu
 	}
 	p, lines := l.Properties(T)
 	for _, line := range lines {
-		n.add("%s", line)
+		n.text(line)
 	}
 	st := liquidState{key: l.Key, density: p.Density, viscosity: p.Viscosity, epsR: p.RelativePermittivity,
 		refrIndex: p.RefractiveIndex, aqueous: l.Aqueous, flammable: l.Flammable, flashPointC: math.NaN()}

@@ -109,7 +109,7 @@ func (l Liquid) Properties(tempK float64) (LiquidProperties, []string) {
 		if !p.InSourcedRange {
 			how += ", each extended beyond 0-100 °C along its last 10 K (density and permittivity linear in T, ln(viscosity) linear in 1/T)"
 		}
-		notes = append(notes, fmt.Sprintf("%s at %s: %s", l.Name, at, how))
+		notes = append(notes, l.Name+" at "+at+": "+how)
 	} else {
 		var use tableUse
 		p.Density, use = l.Density.at(tempK, false)
@@ -119,8 +119,8 @@ func (l Liquid) Properties(tempK float64) (LiquidProperties, []string) {
 		p.RelativePermittivity, use = l.RelativePermittivity.at(tempK, false)
 		notes = append(notes, l.RelativePermittivity.note("relative permittivity", l.Name, tempK, use))
 	}
-	notes = append(notes, fmt.Sprintf("refractive index of %s %g, not corrected for temperature; source: %s",
-		l.Name, l.RefractiveIndex.Value, l.RefractiveIndex.Source))
+	notes = append(notes, "refractive index of "+l.Name+" "+shortest(l.RefractiveIndex.Value)+
+		", not corrected for temperature; source: "+l.RefractiveIndex.Source)
 	return p, notes
 }
 
@@ -206,7 +206,7 @@ func (t LiquidTable) note(property, liquid string, tempK float64, use tableUse) 
 	case useSinglePoint:
 		how = fmt.Sprintf("the value at %s used at every temperature (its temperature dependence is not tabulated)", celsiusText(first))
 	}
-	return fmt.Sprintf("%s of %s at %s: %s; source: %s", property, liquid, at, how, t.Source)
+	return property + " of " + liquid + " at " + at + ": " + how + "; source: " + t.Source
 }
 
 // celsiusText prints a temperature in °C to 0.01 K, without trailing zeros.

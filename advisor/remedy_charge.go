@@ -15,8 +15,8 @@ import (
 // root of the smaller margin is the target.
 
 func stabilityCriterion(ev *evaluation) string {
-	return fmt.Sprintf("energy barrier >= %g kT and aggregation half-life >= %g x shelf life",
-		ev.c.criteria.minBarrierKT, ev.c.criteria.halfLifeRatio)
+	return "energy barrier >= " + shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
+		shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
 }
 
 // shieldedMargin is the margin of a sterically shielded pair: finite, so that

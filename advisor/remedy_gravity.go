@@ -13,8 +13,8 @@ import (
 // maxClear/shelfLife.
 
 func clearLayerCriterion(ev *evaluation) string {
-	return fmt.Sprintf("clear layer at the end of a %g d shelf life <= %s (hindered Stokes settling)",
-		ev.c.shelfLife/day, formatQuantity(ev.c.maxClear*1e3, "mm"))
+	return "clear layer at the end of a " + shortest(ev.c.shelfLife/day) + " d shelf life <= " +
+		formatQuantity(ev.c.maxClear*1e3, "mm") + " (hindered Stokes settling)"
 }
 
 // allowedStokesSpeed is the largest isolated-particle Stokes speed, m/s,

@@ -12,7 +12,7 @@ import (
 const cloudPointMarginK = 10.0
 
 func stericCriterion(ev *evaluation) string {
-	return fmt.Sprintf("|van der Waals energy| at layer contact (h = 2 thickness) <= %g kT", ev.c.criteria.maxStericKT)
+	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + shortest(ev.c.criteria.maxStericKT) + " kT"
 }
 
 // thickestAdsorbedLayer is about the largest thickness adsorbed polymer or

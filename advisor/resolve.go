@@ -1,9 +1,8 @@
 package advisor
 
 import (
-	"fmt"
 	"math"
-	"strings"
+	"strconv"
 
 	"colloidtriage/physics"
 )
@@ -26,9 +25,9 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 		c.phase = "solid"
 		if hasMat && mat.phase != "" {
 			c.phase = mat.phase
-			n.add("particles.phase = %s from the library entry %q", c.phase, p.Material)
+			n.text("particles.phase = " + c.phase + " from the library entry " + strconv.Quote(p.Material))
 		} else {
-			n.add("particles.phase not given: solid assumed")
+			n.text("particles.phase not given: solid assumed")
 		}
 	}
 
@@ -38,7 +37,7 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 	if s.Storage.TemperatureC != nil {
 		storageT, tempField = *s.Storage.TemperatureC, "/storage/temperature_c"
 	} else {
-		n.add("storage.temperature_c not given: stability judged at the medium temperature, %g degC", mediumT)
+		n.text("storage.temperature_c not given: stability judged at the medium temperature, " + shortest(mediumT) + " degC")
 	}
 	c.storageTempK = physics.Kelvin(storageT)
 	c.liquid = e.resolveLiquid(m, mediumT, storageT, tempField, bad, n)
@@ -74,7 +73,11 @@ func valueOr(v *float64, def float64, n *notes, field, unit string) float64 {
 	if v != nil {
 		return *v
 	}
-	n.add("%s not given: default %s", field, strings.TrimSpace(fmt.Sprintf("%g %s", def, unit)))
+	text := field + " not given: default " + shortest(def)
+	if unit != "" {
+		text += " " + unit
+	}
+	n.text(text)
 	return def
 }
 
@@ -85,7 +88,7 @@ func firstKnown(v *float64, lib float64, field, unit, key string, n *notes) floa
 		return *v
 	}
 	if !math.IsNaN(lib) {
-		n.add("%s = %s from the library entry %q", field, formatQuantity(lib, unit), key)
+		n.text(field + " = " + formatQuantity(lib, unit) + " from the library entry " + strconv.Quote(key))
 		return lib
 	}
 	return math.NaN()
@@ -121,7 +124,7 @@ func (e *Engine) resolveSize(p *Particles, c *conditions, bad *InputError, n *no
 		n.add("size distribution: volume-weighted log-normal with span %g, %d classes", *p.SizeSpan, physics.DefaultLogNormalClasses)
 	default:
 		c.radius = *p.DiameterNm * 0.5e-9
-		n.add("single particle size: no size_span or size_distribution given")
+		n.text("single particle size: no size_span or size_distribution given")
 	}
 }
 
@@ -131,7 +134,7 @@ func (e *Engine) resolveHamaker(p *Particles, c *conditions, mat materialProps, 
 		c.hamaker = *p.HamakerZJ * 1e-21
 	case !math.IsNaN(mat.hamakerWater) && c.liquid.key == "water":
 		c.hamaker = mat.hamakerWater
-		n.add("hamaker_zJ = %s across water from the library entry %q", formatQuantity(c.hamaker*1e21, "zJ"), p.Material)
+		n.text("hamaker_zJ = " + formatQuantity(c.hamaker*1e21, "zJ") + " across water from the library entry " + strconv.Quote(p.Material))
 	default:
 		epsP := pick(p.Permittivity, mat.epsR)
 		nP := pick(p.RefractiveIndex, mat.refrIndex)
@@ -163,8 +166,8 @@ func resolveStorage(s *Sample, c *conditions, n *notes) {
 		c.maxClear = *st.MaxClearLayerMm * 1e-3
 	} else {
 		c.maxClear = defaultClearLayerShare * c.height
-		n.add("storage.max_clear_layer_mm not given: acceptance criterion %g %% of the container height, %s",
-			defaultClearLayerShare*100, formatQuantity(c.maxClear*1e3, "mm"))
+		n.text("storage.max_clear_layer_mm not given: acceptance criterion " + shortest(defaultClearLayerShare*100) +
+			" % of the container height, " + formatQuantity(c.maxClear*1e3, "mm"))
 	}
 	if st.ShearRatePerS != nil {
 		c.shear = *st.ShearRatePerS

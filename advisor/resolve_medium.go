@@ -116,8 +116,8 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 		pair := physics.IonsFromPH(*m.PH)
 		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
 		ions = append(ions, monovalent(excess)...)
-		n.add("pH %g is outside 4-10: %s of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength",
-			*m.PH, formatQuantity(excess, "mM"))
+		n.text("pH " + shortest(*m.PH) + " is outside 4-10: " + formatQuantity(excess, "mM") +
+			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
 	}
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
