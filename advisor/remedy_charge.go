@@ -93,15 +93,15 @@ const ionicStrengthTol = 1e-3
 // short there, the half-life margin below it.
 //
 // The half-life margin is searched on the peak estimate of log10 W
-// (physics.Log10StabilityRatioPeak, a barrier and its curvature) anchored
-// to the quadrature at the last exact point, whose gap to the estimate
-// changes slowly with the ionic strength (by about 0.003 decades over the
-// 0.7 decades of the demo's search). The root of the anchored margin,
-// aimed half the tolerance into the acceptable side, is then
-// checked by the quadrature: it is the answer when its exact margin is >= 0
-// and within the tolerance of the root (by the local slope); otherwise the
-// gap is renewed there and the search repeated. A few rounds without an
-// answer fall back to Newton steps on the exact margin.
+// (physics.Log10StabilityRatioPeak, a barrier and its curvature), offset by
+// its gap to the quadrature at the last exact point: the gap changes slowly
+// with the ionic strength (from 0 to 0.003 decades over the 0.7 decades of
+// the demo's search), so the first search runs on the estimate alone. The
+// root of the estimated margin, aimed half the tolerance into the
+// acceptable side, is checked by the quadrature: it is the answer when its
+// exact margin is >= 0 and within the tolerance of the root (by the local
+// slope); otherwise the gap is renewed there and the search repeated. A few
+// rounds without an answer fall back to Newton steps on the exact margin.
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
 	floor := ionicStrengthFloor(ev)
@@ -117,7 +117,7 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 		return 0, false
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
-	gap := math.NaN()
+	gap := 0.0
 	exact := func(logI float64) (float64, float64) {
 		return stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)), func(p physics.Pair, b physics.Extremum) float64 {
 			w := exactLog10W(p, b)
@@ -125,20 +125,24 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 			return w
 		})
 	}
-	x := hi
-	m, slope := exact(x)
-	if m >= 0 {
-		return top, true
-	}
-	for round := 0; round < 3 && !math.IsNaN(gap) && slope < 0; round++ {
-		aim := -slope * ionicStrengthTol / 2
-		anchored := func(logI float64) (float64, float64) {
+	estimate := func(aim float64) func(float64) (float64, float64) {
+		return func(logI float64) (float64, float64) {
 			m, s := stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)), func(p physics.Pair, b physics.Extremum) float64 {
 				return physics.Log10StabilityRatioPeak(p, b, true) + gap
 			})
 			return m - aim, s
 		}
-		next, _, found := physics.FindRootNewton(secantRefined(anchored), x, lo, hi, -1, 1, ionicStrengthTol/4)
+	}
+	x := hi
+	m, slope := estimate(0)(x)
+	if m >= 0 {
+		m, slope = exact(x)
+		if m >= 0 {
+			return top, true
+		}
+	}
+	for round := 0; round < 3 && !math.IsNaN(m) && !math.IsNaN(gap) && slope < 0; round++ {
+		next, _, found := physics.FindRootNewton(secantRefined(estimate(-slope*ionicStrengthTol/2)), x, lo, hi, -1, 1, ionicStrengthTol/4)
 		if !found {
 			break
 		}
