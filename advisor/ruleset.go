@@ -225,6 +225,7 @@ func (r rule) explain(f facts) string {
 		return r.text[0].literal
 	}
 	var b strings.Builder
+	b.Grow(len(r.Explain) + 16) // a placeholder's name is about as long as its value
 	for _, part := range r.text {
 		if part.fact != "" {
 			b.WriteString(f.format(part.fact))

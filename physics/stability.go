@@ -104,6 +104,7 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 	n := 0
 	aroundBarrier := barrier.Found && width < maxStabilityPanel
 	reach := barrierPanelEdges[len(barrierPanelEdges)-1] * width
+	core := barrierCoreWidths * width * (1 + 1e-9) // its edges included
 	panels := int(math.Ceil((sHi - sLo) / maxStabilityPanel))
 	panels = min(max(panels, 1), maxBackgroundPanels)
 	for i := 0; i <= panels; i++ {
@@ -139,7 +140,7 @@ func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
 		}
 		mid := (breaks[i+1] + breaks[i]) / 2
 		rule := gaussLegendre6
-		if !aroundBarrier || breaks[i+1] <= sBarrier-reach || breaks[i] >= sBarrier+reach {
+		if !aroundBarrier || breaks[i+1] <= sBarrier-core || breaks[i] >= sBarrier+core {
 			rule = gaussLegendre4
 		}
 		for k, x := range rule.x {
@@ -205,8 +206,12 @@ const (
 )
 
 // barrierPanelEdges are the extra panel edges, in barrier widths from the
-// barrier, that resolve a sharp exp(V/kT) peak.
+// barrier, that resolve a sharp exp(V/kT) peak; the panels within
+// barrierCoreWidths of it take 6 points, the tails beyond (at most e^-4.5 of
+// the peak) 4.
 var barrierPanelEdges = [6]float64{-6, -3, -1.5, 1.5, 3, 6}
+
+const barrierCoreWidths = 3
 
 // barrierWidth is the width in ln h of exp(V/kT) about s, from the curvature
 // at an interior maximum and from the slope at an end of the range.
