@@ -68,26 +68,35 @@ func BenchmarkLog10StabilityRatio(b *testing.B) {
 
 func TestLog10StabilityRatioPeak(t *testing.T) {
 	t.Parallel()
-	// Laplace's method on the barrier peak (N. G. de Bruijn, Asymptotic
-	// Methods in Analysis (1958), sec. 4.2) against the [calc] values of
+	// Gauss–Hermite on the barrier peak against the [calc] values of
 	// testdata/reference/interaction.py for the pairs with a barrier of at
-	// least 15 kT, where it is meant to serve: within 0.003 decades (the
-	// largest gap is 0.0019, at 26 kT), closer as the peak sharpens.
+	// least 15 kT, where it is meant to serve: within 2e-4 decades.
+	// (Laplace's method alone, the 1-point rule, is off by up to 2e-3.)
 	kT := Boltzmann * interactionTempK
 	for _, tt := range referencePairs {
 		if !(tt.barrierKT >= 15) {
 			continue
 		}
-		tol := 0.003
-		if tt.barrierKT >= 40 {
-			tol = 0.0015
-		}
 		b := tt.pair.Barrier()
-		if got := Log10StabilityRatioPeak(tt.pair, b, true); math.Abs(got-tt.log10WHonig) > tol {
-			t.Errorf("%s (%.1f kT): peak estimate %.4f, want %.4f ± %g", tt.name, b.Energy/kT, got, tt.log10WHonig, tol)
+		if got := Log10StabilityRatioPeak(tt.pair, b, true); math.Abs(got-tt.log10WHonig) > 2e-4 {
+			t.Errorf("%s (%.1f kT): peak estimate %.5f, want %.5f ± 2e-4", tt.name, b.Energy/kT, got, tt.log10WHonig)
 		}
 	}
 	if got := Log10StabilityRatioPeak(dlvoPair(0, 10), Extremum{}, true); !math.IsNaN(got) {
 		t.Errorf("without a barrier: %g, want NaN", got)
+	}
+}
+
+func TestGaussHermiteNodes(t *testing.T) {
+	t.Parallel()
+	// M. Abramowitz & I. A. Stegun, Handbook of Mathematical Functions
+	// (1964), table 25.10, n = 5: nodes 0, 0.958572464614, 2.020182870456;
+	// weights 0.945308720483, 0.393619323152, 0.019953242059.
+	want := []struct{ x, w float64 }{{-2.020182870456, 0.019953242059}, {-0.958572464614, 0.393619323152},
+		{0, 0.945308720483}, {0.958572464614, 0.393619323152}, {2.020182870456, 0.019953242059}}
+	for i, w := range want {
+		if math.Abs(gaussHermite5.x[i]-w.x) > 1e-11 || math.Abs(gaussHermite5.w[i]-w.w) > 1e-11 {
+			t.Errorf("node %d: (%.12f, %.12f), want (%.12f, %.12f)", i, gaussHermite5.x[i], gaussHermite5.w[i], w.x, w.w)
+		}
 	}
 }
