@@ -26,9 +26,36 @@ func (e *Engine) remedy(ev *evaluation, id string) Remedy {
 		r.Action = withTarget(entry.Action, "no target found within the physical range ("+criterion+")")
 		return r
 	}
-	t.Value = roundSignificant(t.Value, 3)
+	t.Value = roundTowardAcceptable(t.Value, t.Op)
 	r.Target = &t
 	r.Action = withTarget(entry.Action, t.Quantity+" "+t.Op+" "+formatQuantity(t.Value, t.Unit))
+	return r
+}
+
+// roundTowardAcceptable keeps 3 significant digits of a target, rounded
+// towards the side where the criterion holds (down for "<=", up for ">="),
+// so that the printed limit itself meets it.
+func roundTowardAcceptable(v float64, op string) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	p := math.Pow(10, 3-math.Ceil(math.Log10(math.Abs(v))))
+	scaled := v * p
+	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Abs(scaled) {
+		scaled = nearest // already 3 digits, but for the last bit
+	}
+	var r float64
+	switch op {
+	case "<=":
+		r = math.Floor(scaled) / p
+	case ">=":
+		r = math.Ceil(scaled) / p
+	default:
+		r = math.Round(scaled) / p
+	}
+	if math.IsInf(r, 0) || math.IsNaN(r) {
+		return v
+	}
 	return r
 }
 

@@ -37,6 +37,65 @@ func exactLog10W(p physics.Pair, b physics.Extremum) float64 {
 	return physics.Log10StabilityRatioWith(p, b, true)
 }
 
+// peakAnchor evaluates margins on the peak estimate of log10 W
+// (physics.Log10StabilityRatioPeak: 5 energies about the barrier, against
+// the tens of the quadrature) offset by gap, its difference from the
+// quadrature at the last exact evaluation. For barriers of 15 kT and more
+// the estimate is within 2e-4 decades, so the remedies search on it and
+// check their answer with one quadrature.
+type peakAnchor struct {
+	ev  *evaluation
+	gap float64
+}
+
+func (a *peakAnchor) estimated(p physics.Pair) (margin, slope float64) {
+	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
+		return physics.Log10StabilityRatioPeak(p, b, true) + a.gap
+	})
+}
+
+// exact is the margin on the quadrature; it renews the gap.
+func (a *peakAnchor) exact(p physics.Pair) (margin, slope float64) {
+	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
+		w := exactLog10W(p, b)
+		if gap := w - physics.Log10StabilityRatioPeak(p, b, true); !math.IsNaN(gap) {
+			a.gap = gap
+		}
+		return w
+	})
+}
+
+// anchoredRoot solves a margin for the remedies whose solver needs only
+// margins: solve runs on the estimated margin of pairAt(x), and its answer
+// is checked by the quadrature one step (toward, signed) into the
+// acceptable side, which renews the gap. The answer, that checked point,
+// stands when the estimate so anchored still fails one step the other way
+// of solve's answer: the root is then within two steps. Otherwise solve
+// repeats on the renewed estimate; after three rounds, or when the
+// estimate finds nothing, solve runs on the exact margin.
+func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve func(margin func(x float64) float64) (float64, bool), toward float64) (float64, bool) {
+	a := peakAnchor{ev: ev}
+	estimated := func(x float64) float64 {
+		m, _ := a.estimated(pairAt(x))
+		return m
+	}
+	for round := 0; round < 3; round++ {
+		x, ok := solve(estimated)
+		if !ok {
+			break
+		}
+		held := x + toward
+		m, _ := a.exact(pairAt(held))
+		if math.IsNaN(m) {
+			break
+		}
+		if m >= 0 && estimated(x-toward) < 0 {
+			return held, true
+		}
+	}
+	return solve(func(x float64) float64 { return stabilityMargin(ev, pairAt(x)) })
+}
+
 // stabilityMarginSlope is stabilityMargin, with log10 W from log10W, and an
 // estimate of its slope in log10 of the ionic strength, for Newton steps:
 // by the envelope theorem the barrier moves by LogKappaSlope ln(10)/2 per
@@ -117,18 +176,10 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 		return 0, false
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
-	gap := 0.0
-	exact := func(logI float64) (float64, float64) {
-		return stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)), func(p physics.Pair, b physics.Extremum) float64 {
-			w := exactLog10W(p, b)
-			gap = w - physics.Log10StabilityRatioPeak(p, b, true)
-			return w
-		})
-	}
+	a := peakAnchor{ev: ev}
+	exact := func(logI float64) (float64, float64) { return a.exact(ev.withIonicStrength(math.Pow(10, logI))) }
 	aimed := func(logI float64) (float64, float64) {
-		m, slope := stabilityMarginSlope(ev, ev.withIonicStrength(math.Pow(10, logI)), func(p physics.Pair, b physics.Extremum) float64 {
-			return physics.Log10StabilityRatioPeak(p, b, true) + gap
-		})
+		m, slope := a.estimated(ev.withIonicStrength(math.Pow(10, logI)))
 		return m + slope*ionicStrengthTol/2, slope // slope < 0: aimed into the acceptable side
 	}
 	x := hi
@@ -145,7 +196,7 @@ search:
 			return top, true
 		case m >= 0 && m < -slope*ionicStrengthTol:
 			return math.Pow(10, x), true
-		case math.IsNaN(m) || math.IsNaN(gap):
+		case math.IsNaN(m):
 			break search
 		}
 	}
@@ -199,8 +250,16 @@ func solveSurfaceCharge(ev *evaluation) (Target, string, bool) {
 // The answer is kept for the rest of the triage: raise_surface_charge and
 // move_ph_from_iep both need it.
 func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
-	if m := &ev.acceptablePotential; !m.done {
-		m.psi, m.ok = potentialWhere(ev, func(p physics.Pair) float64 { return stabilityMargin(ev, p) })
+	if m := &ev.acceptablePotential; !m.done && ev.hasPair {
+		withPotential := func(psi float64) physics.Pair {
+			p := ev.pair
+			p.Potential = math.Copysign(psi, ev.pair.Potential)
+			return p
+		}
+		solve := func(margin func(psi float64) float64) (float64, bool) {
+			return potentialWhere(ev, func(p physics.Pair) float64 { return margin(math.Abs(p.Potential)) })
+		}
+		m.psi, m.ok = anchoredRoot(ev, withPotential, solve, potentialTol)
 		m.done = true
 	}
 	return ev.acceptablePotential.psi, ev.acceptablePotential.ok
@@ -241,8 +300,11 @@ func potentialWhere(ev *evaluation, margin func(p physics.Pair) float64) (float6
 			lo = hi
 		}
 	}
-	return physics.FindRoot(at, lo, hi, 1e-5)
+	return physics.FindRoot(at, lo, hi, potentialTol)
 }
+
+// potentialTol is the accuracy of potential targets, V.
+const potentialTol = 1e-5
 
 // solvePH finds the pH at which the surface-potential estimate reaches the
 // needed potential, anchored to the measured zeta at the present pH when
@@ -278,25 +340,39 @@ func solvePH(ev *evaluation) (Target, string, bool) {
 	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(ev) + anchor, true
 }
 
+// multivalentTol is the relative accuracy of the multivalent-salt target.
+const multivalentTol = 1e-4
+
 func solveMultivalent(ev *evaluation) (Target, string, bool) {
 	c := ev.c
 	if c.multivalentSalt == "" || !ev.hasPair {
 		return Target{}, "no multivalent salt stated", false
 	}
 	other := c.ionicStrength - c.multivalentIonicShare*c.multivalentConc
-	margin := func(conc float64) float64 {
-		return stabilityMargin(ev, ev.withIonicStrength(math.Max(other+c.multivalentIonicShare*conc, ionicStrengthFloor(ev))))
+	withConc := func(conc float64) physics.Pair {
+		return ev.withIonicStrength(math.Max(other+c.multivalentIonicShare*conc, ionicStrengthFloor(ev)))
 	}
 	crit := stabilityCriterion(ev) + "; counter-ion valence kept (conservative)"
-	if margin(0) < 0 {
-		return Target{}, crit + ": not reached even without the multivalent salt", false
-	}
 	conc := c.multivalentConc
-	if margin(conc) < 0 {
-		var ok bool
-		if conc, ok = physics.FindRoot(margin, 0, conc, 1e-4*c.multivalentConc); !ok {
-			return Target{}, crit, false
+	a := peakAnchor{ev: ev}
+	if m, _ := a.estimated(withConc(conc)); m >= 0 {
+		if m, _ = a.exact(withConc(conc)); m >= 0 {
+			return Target{c.multivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
 		}
+	}
+	reached := true
+	solve := func(margin func(conc float64) float64) (float64, bool) {
+		if reached = margin(0) >= 0; !reached {
+			return 0, false
+		}
+		return physics.FindRoot(margin, 0, conc, multivalentTol*c.multivalentConc)
+	}
+	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.multivalentConc)
+	switch {
+	case !reached:
+		return Target{}, crit + ": not reached even without the multivalent salt", false
+	case !ok:
+		return Target{}, crit, false
 	}
 	return Target{c.multivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
 }
