@@ -78,7 +78,7 @@ func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]strin
 }
 
 func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), f: factTemplate()}
+	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), f: newFacts()}
 	c, err := e.resolve(s, ev.n)
 	if err != nil {
 		return nil, err
@@ -110,13 +110,25 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 	scores := map[string]*causeScore{}
 	var machine vm.VM
 	run := func(after bool) {
+		var env map[string]any // for the expression machine, built on first need
 		for i := range e.rules.rules {
 			r := &e.rules.rules[i]
 			if r.AfterCauses != after || !r.appliesTo(ev.c.symptom) {
 				continue
 			}
-			out, err := runRule(&machine, r.program, ev.f)
-			if err != nil || !out {
+			var out bool
+			if r.cond != nil {
+				out = r.cond(ev.f)
+			} else {
+				if env == nil {
+					env = ev.f.env(after)
+				}
+				var err error
+				if out, err = runRule(&machine, r.program, env); err != nil {
+					continue
+				}
+			}
+			if !out {
 				continue
 			}
 			cs := scores[r.Cause]
@@ -133,7 +145,7 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 	for _, cs := range scores {
 		top = math.Max(top, cs.cf)
 	}
-	ev.f[topCauseScore] = top
+	ev.f.setNumber(topCauseScore, top)
 	run(true)
 
 	list := make([]*causeScore, 0, len(scores))

@@ -28,10 +28,11 @@ type evaluation struct {
 	}
 }
 
-var scaleIndex = func() map[string]ScaleSpec {
-	m := map[string]ScaleSpec{}
+// scaleIndex holds the declared scales, each with its slot among the facts.
+var scaleIndex = func() map[string]declaredFact {
+	m := map[string]declaredFact{}
 	for _, s := range scaleSpecs {
-		m[s.Name] = s
+		m[s.Name] = factIndex[s.Name]
 	}
 	return m
 }()
@@ -44,7 +45,7 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 	if !ok {
 		panic("advisor: undeclared scale " + name)
 	}
-	ev.f[name] = v
+	ev.f.values[spec.slot].num = v
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
 			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)
@@ -76,38 +77,38 @@ func (ev *evaluation) model(name, choice string) {
 
 func (ev *evaluation) inputFacts() {
 	c, f := ev.c, ev.f
-	f["symptom"] = c.symptom
-	f["phase"] = c.phase
-	f["volume_fraction"] = c.phi
-	f["shelf_life_days"] = c.shelfLife / day
-	f["container_height_mm"] = c.height * 1e3
-	f["max_clear_layer_mm"] = c.maxClear * 1e3
-	f["storage_temperature_c"] = c.storageTempK - physics.CelsiusZero
-	f["observed_clear_layer_mm"] = c.observed.clearLayer * 1e3
-	f["age_days"] = c.observed.age / day
-	f["sediment_redisperses"] = c.observed.redisperses
-	f["viscosity_change_percent"] = c.observed.viscosityChange
-	f["size_growth_percent"] = c.observed.sizeGrowth
-	f["zeta_measured"] = c.zetaSource == "measured" || c.zetaSource == "mobility"
-	f["has_electrolyte"] = c.ionicStrength > 0
-	f["ph"] = c.ph
-	f["isoelectric_ph"] = c.iep
-	f["has_steric_layer"] = c.steric.present
-	f["steric_thickness_nm"] = nanOr(c.steric.present, c.steric.thickness*1e9)
+	f.setText("symptom", c.symptom)
+	f.setText("phase", c.phase)
+	f.setNumber("volume_fraction", c.phi)
+	f.setNumber("shelf_life_days", c.shelfLife/day)
+	f.setNumber("container_height_mm", c.height*1e3)
+	f.setNumber("max_clear_layer_mm", c.maxClear*1e3)
+	f.setNumber("storage_temperature_c", c.storageTempK-physics.CelsiusZero)
+	f.setNumber("observed_clear_layer_mm", c.observed.clearLayer*1e3)
+	f.setNumber("age_days", c.observed.age/day)
+	f.setText("sediment_redisperses", c.observed.redisperses)
+	f.setNumber("viscosity_change_percent", c.observed.viscosityChange)
+	f.setNumber("size_growth_percent", c.observed.sizeGrowth)
+	f.setFlag("zeta_measured", c.zetaSource == "measured" || c.zetaSource == "mobility")
+	f.setFlag("has_electrolyte", c.ionicStrength > 0)
+	f.setNumber("ph", c.ph)
+	f.setNumber("isoelectric_ph", c.iep)
+	f.setFlag("has_steric_layer", c.steric.present)
+	f.setNumber("steric_thickness_nm", nanOr(c.steric.present, c.steric.thickness*1e9))
 	if c.steric.hasQuality {
-		f["solvent_quality"] = c.steric.quality.String()
+		f.setText("solvent_quality", c.steric.quality.String())
 	}
-	f["cloud_point_c"] = c.steric.cloudK - physics.CelsiusZero
-	f["free_polymer_g_L"] = nanOr(c.freePolymer.present, c.freePolymer.concentration)
-	f["adsorbing_coverage"] = nanOr(c.adsorbing.present, c.adsorbing.coverage)
-	f["adsorbing_molar_mass_kg_mol"] = nanOr(c.adsorbing.present, c.adsorbing.molarMass)
-	f["shear_rate_per_s"] = c.shear
-	f["yield_stress_pa"] = c.yieldStress
-	f["min_barrier_kT"] = c.criteria.minBarrierKT
-	f["half_life_to_shelf_life"] = c.criteria.halfLifeRatio
-	f["has_size_distribution"] = c.classes != nil
-	f["max_relative_viscosity"] = c.criteria.maxRelViscosity
-	f["max_steric_contact_kT"] = c.criteria.maxStericKT
+	f.setNumber("cloud_point_c", c.steric.cloudK-physics.CelsiusZero)
+	f.setNumber("free_polymer_g_L", nanOr(c.freePolymer.present, c.freePolymer.concentration))
+	f.setNumber("adsorbing_coverage", nanOr(c.adsorbing.present, c.adsorbing.coverage))
+	f.setNumber("adsorbing_molar_mass_kg_mol", nanOr(c.adsorbing.present, c.adsorbing.molarMass))
+	f.setNumber("shear_rate_per_s", c.shear)
+	f.setNumber("yield_stress_pa", c.yieldStress)
+	f.setNumber("min_barrier_kT", c.criteria.minBarrierKT)
+	f.setNumber("half_life_to_shelf_life", c.criteria.halfLifeRatio)
+	f.setFlag("has_size_distribution", c.classes != nil)
+	f.setNumber("max_relative_viscosity", c.criteria.maxRelViscosity)
+	f.setNumber("max_steric_contact_kT", c.criteria.maxStericKT)
 }
 
 func nanOr(ok bool, v float64) float64 {

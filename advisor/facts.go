@@ -1,8 +1,8 @@
 package advisor
 
 import (
-	"maps"
 	"math"
+	"slices"
 	"strconv"
 )
 
@@ -21,6 +21,12 @@ type factSpec struct {
 	Kind    factKind
 	Unit    string
 	Meaning string
+}
+
+// declaredFact is a factSpec with its slot in facts.values.
+type declaredFact struct {
+	factSpec
+	slot int
 }
 
 // topCauseScore is visible only to rules marked after_causes: the highest
@@ -60,52 +66,97 @@ var inputFacts = []factSpec{
 	{"max_steric_contact_kT", numberFact, "kT", "acceptance criterion: deepest van der Waals energy at steric contact"},
 }
 
-var factIndex = func() map[string]factSpec {
-	m := map[string]factSpec{}
+// factIndex holds every declared fact with its slot in facts.values;
+// topCauseScore takes the last slot.
+var factIndex = func() map[string]declaredFact {
+	m := map[string]declaredFact{}
+	add := func(f factSpec) { m[f.Name] = declaredFact{f, len(m)} }
 	for _, f := range inputFacts {
-		m[f.Name] = f
+		add(f)
 	}
 	for _, s := range scaleSpecs {
-		m[s.Name] = factSpec{s.Name, numberFact, s.Unit, s.Meaning}
+		add(factSpec{s.Name, numberFact, s.Unit, s.Meaning})
 	}
+	add(factSpec{topCauseScore, numberFact, "1", "highest cause score before the after_causes rules"})
 	return m
 }()
 
-var factDefaults = func() map[string]any {
+// factDefaults are the values of facts not set for a sample: NaN, "" and
+// false.
+var factDefaults = func() []factValue {
+	v := make([]factValue, len(factIndex))
+	for _, f := range factIndex {
+		if f.Kind == numberFact {
+			v[f.slot].num = math.NaN()
+		}
+	}
+	return v
+}()
+
+// facts is the environment of the rules for one sample: one value per
+// declared fact, in its slot. Numbers not computed for this sample are NaN,
+// so every comparison with them is false.
+type facts struct{ values []factValue }
+
+// factValue holds a fact of any kind; its spec says which field counts.
+type factValue struct {
+	num  float64
+	text string
+	flag bool
+}
+
+func newFacts() facts { return facts{values: slices.Clone(factDefaults)} }
+
+// slot panics on an undeclared fact, a programming error.
+func slot(name string) int {
+	f, ok := factIndex[name]
+	if !ok {
+		panic("advisor: undeclared fact " + name)
+	}
+	return f.slot
+}
+
+func (f facts) setNumber(name string, v float64) { f.values[slot(name)].num = v }
+func (f facts) setText(name, v string)           { f.values[slot(name)].text = v }
+func (f facts) setFlag(name string, v bool)      { f.values[slot(name)].flag = v }
+func (f facts) number(name string) float64       { return f.values[slot(name)].num }
+
+// value is a fact as the expression language sees it.
+func (f facts) value(spec declaredFact) any {
+	v := f.values[spec.slot]
+	switch spec.Kind {
+	case numberFact:
+		return v.num
+	case textFact:
+		return v.text
+	}
+	return v.flag
+}
+
+// env is the facts as the expression machine's environment, for rules that
+// do not compile to a condition (see compileCondition); with
+// afterCauses, topCauseScore is declared too.
+func (f facts) env(afterCauses bool) map[string]any {
 	m := make(map[string]any, len(factIndex))
-	for name, f := range factIndex {
-		switch f.Kind {
-		case numberFact:
-			m[name] = math.NaN()
-		case textFact:
-			m[name] = ""
-		case flagFact:
-			m[name] = false
+	for name, spec := range factIndex {
+		if name != topCauseScore || afterCauses {
+			m[name] = f.value(spec)
 		}
 	}
 	return m
-}()
-
-// facts is the environment of the rules for one sample. Numbers not computed
-// for this sample are NaN, so every comparison with them is false.
-type facts map[string]any
-
-func factTemplate() facts { return maps.Clone(factDefaults) }
-
-func (f facts) number(name string) float64 { return f[name].(float64) }
+}
 
 // format renders a fact for an explanation: three significant digits and its unit.
 func (f facts) format(name string) string {
 	spec := factIndex[name]
-	switch v := f[name].(type) {
-	case float64:
-		return formatQuantity(v, spec.Unit)
-	case bool:
-		return strconv.FormatBool(v)
-	case string:
-		return v
+	v := f.values[spec.slot]
+	switch spec.Kind {
+	case numberFact:
+		return formatQuantity(v.num, spec.Unit)
+	case flagFact:
+		return strconv.FormatBool(v.flag)
 	}
-	return ""
+	return v.text
 }
 
 func formatQuantity(v float64, unit string) string {

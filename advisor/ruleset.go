@@ -32,6 +32,7 @@ type RuleSet struct {
 type rule struct {
 	ruleSpec
 	program *vm.Program
+	cond    condition  // the program as a closure over the facts; nil outside the subset
 	text    []textPart // explain, split at its placeholders once at load
 }
 
@@ -104,6 +105,13 @@ func (s ruleSpec) errorAt(key, msg string) *RuleError {
 	return &RuleError{File: s.file, RuleID: s.ID, Line: line, Column: col, Message: msg}
 }
 
+// fact looks up a fact the rule may name: top_cause_score only after the
+// causes.
+func (s ruleSpec) fact(name string) (declaredFact, bool) {
+	f, ok := factIndex[name]
+	return f, ok && (name != topCauseScore || s.AfterCauses)
+}
+
 func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 	if s.ID == "" {
 		return rule{}, s.errorAt("id", "empty rule id")
@@ -128,7 +136,7 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 		}
 	}
 	for _, name := range s.Evidence {
-		if f, ok := factIndex[name]; !ok || f.Kind != numberFact {
+		if f, ok := s.fact(name); !ok || f.Kind != numberFact {
 			return rule{}, s.errorAt("evidence", fmt.Sprintf("evidence %q is not a numeric fact", name))
 		}
 	}
@@ -136,7 +144,7 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 	last := 0
 	for _, m := range placeholder.FindAllStringSubmatchIndex(s.Explain, -1) {
 		name := s.Explain[m[2]:m[3]]
-		if _, ok := factIndex[name]; !ok {
+		if _, ok := s.fact(name); !ok {
 			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", name))
 		}
 		text = append(text, textPart{literal: s.Explain[last:m[0]]}, textPart{fact: name})
@@ -153,17 +161,14 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 		}
 		return rule{}, re
 	}
-	return rule{ruleSpec: s, program: program, text: text}, nil
+	return rule{ruleSpec: s, program: program, cond: compileCondition(program.Node()), text: text}, nil
 }
 
 // compileOptions declares the rule language: the facts with their types, a
 // boolean result, and known(x), which is false for a number the advisor
 // could not compute for this sample (such numbers make every comparison false).
 func compileOptions(afterCauses bool) []expr.Option {
-	env := factTemplate()
-	if afterCauses {
-		env[topCauseScore] = 0.0
-	}
+	env := newFacts().env(afterCauses)
 	return []expr.Option{
 		expr.Env(env),
 		expr.AsBool(),

@@ -86,6 +86,7 @@ func TestRuleCatalogueChecks(t *testing.T) {
 		{"certainty out of range", "    cause: gravity_settling\n    certainty: 1.5\n", "certainty must be in [-1, 1]"},
 		{"unknown remedy", "    cause: gravity_settling\n    certainty: 0.5\n    remedies: [pray]\n", `unknown remedy "pray"`},
 		{"evidence not a number", "    cause: gravity_settling\n    certainty: 0.5\n    evidence: [symptom]\n", "not a numeric fact"},
+		{"top score before the causes", "    cause: gravity_settling\n    certainty: 0.5\n    evidence: [top_cause_score]\n", "not a numeric fact"},
 	}
 	for _, c := range cases {
 		pack := fstest.MapFS{"site.rules.yaml": {Data: []byte(base + c.body)}}
