@@ -1,12 +1,13 @@
 package advisor
 
 import (
+	"cmp"
 	"io/fs"
 	"math"
+	"slices"
+	"strings"
 
 	"github.com/expr-lang/expr/vm"
-	"sort"
-	"strings"
 )
 
 // EngineVersion identifies this build of the engine in every report.
@@ -154,11 +155,11 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 			list = append(list, cs)
 		}
 	}
-	sort.Slice(list, func(i, j int) bool {
-		if list[i].cf != list[j].cf {
-			return list[i].cf > list[j].cf
+	slices.SortFunc(list, func(a, b *causeScore) int {
+		if a.cf != b.cf {
+			return cmp.Compare(b.cf, a.cf)
 		}
-		return list[i].id < list[j].id
+		return strings.Compare(a.id, b.id)
 	})
 	out := make([]Cause, len(list))
 	for i, cs := range list {

@@ -2,7 +2,6 @@ package advisor
 
 import (
 	"math"
-	"strings"
 
 	"colloidtriage/physics"
 )
@@ -72,7 +71,16 @@ func roundSignificant(v float64, n int) float64 {
 // model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(name, choice string) {
 	ev.models[name] = choice
-	ev.n.text("model for " + strings.ReplaceAll(name, "_", " ") + ": " + choice)
+	b := make([]byte, 0, len("model for : ")+len(name)+len(choice))
+	b = append(b, "model for "...)
+	for i := range len(name) {
+		if c := name[i]; c == '_' {
+			b = append(b, ' ')
+		} else {
+			b = append(b, c)
+		}
+	}
+	ev.n.text(string(append(append(b, ": "...), choice...)))
 }
 
 func (ev *evaluation) inputFacts() {

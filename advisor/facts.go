@@ -146,29 +146,36 @@ func (f facts) env(afterCauses bool) map[string]any {
 	return m
 }
 
-// format renders a fact for an explanation: three significant digits and its unit.
-func (f facts) format(name string) string {
+// appendFormat renders a fact for an explanation: three significant digits
+// and its unit.
+func (f facts) appendFormat(b []byte, name string) []byte {
 	spec := factIndex[name]
 	v := f.values[spec.slot]
 	switch spec.Kind {
 	case numberFact:
-		return formatQuantity(v.num, spec.Unit)
+		return appendQuantity(b, v.num, spec.Unit)
 	case flagFact:
-		return strconv.FormatBool(v.flag)
+		return strconv.AppendBool(b, v.flag)
 	}
-	return v.text
+	return append(b, v.text...)
 }
 
 func formatQuantity(v float64, unit string) string {
+	var buf [48]byte
+	return string(appendQuantity(buf[:0], v, unit))
+}
+
+// appendQuantity is formatQuantity appending to b.
+func appendQuantity(b []byte, v float64, unit string) []byte {
 	switch {
 	case math.IsNaN(v):
-		return "unknown"
+		return append(b, "unknown"...)
 	case math.IsInf(v, 0):
-		return "unbounded"
+		return append(b, "unbounded"...)
 	}
-	s := strconv.FormatFloat(v, 'g', 3, 64)
+	b = strconv.AppendFloat(b, v, 'g', 3, 64)
 	if unit == "" || unit == "1" {
-		return s
+		return b
 	}
-	return s + " " + unit
+	return append(append(b, ' '), unit...)
 }

@@ -19,4 +19,7 @@ func (n *notes) text(s string) { n.list = append(n.list, s) }
 
 // shortest prints v as fmt's %g does: the shortest representation that
 // reads back as v.
-func shortest(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
+func shortest(v float64) string {
+	var buf [32]byte
+	return string(strconv.AppendFloat(buf[:0], v, 'g', -1, 64))
+}

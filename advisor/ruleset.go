@@ -10,7 +10,6 @@ import (
 	"path"
 	"regexp"
 	"sort"
-	"strings"
 
 	"github.com/expr-lang/expr"
 	"github.com/expr-lang/expr/file"
@@ -225,18 +224,17 @@ func (s ruleSpec) appliesTo(symptom string) bool {
 }
 
 // explain fills the placeholders of a rule's text with the facts' values.
-func (r rule) explain(f facts) string {
+func (r *rule) explain(f facts) string {
 	if len(r.text) == 1 {
 		return r.text[0].literal
 	}
-	var b strings.Builder
-	b.Grow(len(r.Explain) + 16) // a placeholder's name is about as long as its value
+	b := make([]byte, 0, len(r.Explain)+16) // a placeholder's name is about as long as its value
 	for _, part := range r.text {
 		if part.fact != "" {
-			b.WriteString(f.format(part.fact))
+			b = f.appendFormat(b, part.fact)
 		} else {
-			b.WriteString(part.literal)
+			b = append(b, part.literal...)
 		}
 	}
-	return b.String()
+	return string(b)
 }
