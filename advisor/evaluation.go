@@ -60,7 +60,7 @@ func roundSignificant(v float64, n int) float64 {
 	if v == 0 {
 		return 0
 	}
-	p := math.Pow(10, float64(n)-math.Ceil(math.Log10(math.Abs(v))))
+	p := math.Pow10(n - int(math.Ceil(math.Log10(math.Abs(v)))))
 	r := math.Round(v*p) / p
 	if math.IsInf(r, 0) || math.IsNaN(r) {
 		return v

@@ -39,7 +39,7 @@ func roundTowardAcceptable(v float64, op string) float64 {
 	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
 		return v
 	}
-	p := math.Pow(10, 3-math.Ceil(math.Log10(math.Abs(v))))
+	p := math.Pow10(3 - int(math.Ceil(math.Log10(math.Abs(v)))))
 	scaled := v * p
 	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Abs(scaled) {
 		scaled = nearest // already 3 digits, but for the last bit
