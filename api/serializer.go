@@ -6,15 +6,19 @@ import (
 	"fmt"
 	"net/http"
 
+	gojson "github.com/goccy/go-json"
 	"github.com/labstack/echo/v4"
 )
 
 // plainJSON is echo's JSON serializer without HTML escaping, so that rule
-// tests such as "x < 3 && y > 1" read as written in reports.
+// tests such as "x < 3 && y > 1" read as written in reports. Responses are
+// encoded by goccy/go-json, a drop-in for encoding/json that writes the same
+// bytes (sorted map keys, the same number format; TestEncoderMatchesStdlib)
+// in about a third of the time; requests are still decoded by encoding/json.
 type plainJSON struct{}
 
 func (plainJSON) Serialize(c echo.Context, i any, indent string) error {
-	enc := json.NewEncoder(c.Response())
+	enc := gojson.NewEncoder(c.Response())
 	enc.SetEscapeHTML(false)
 	if indent != "" {
 		enc.SetIndent("", indent)
@@ -33,7 +37,7 @@ func (plainJSON) Deserialize(c echo.Context, i any) error {
 // marshalPlain encodes v without HTML escaping and without the trailing newline.
 func marshalPlain(v any) ([]byte, error) {
 	var buf bytes.Buffer
-	enc := json.NewEncoder(&buf)
+	enc := gojson.NewEncoder(&buf)
 	enc.SetEscapeHTML(false)
 	if err := enc.Encode(v); err != nil {
 		return nil, err
