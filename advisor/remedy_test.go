@@ -97,3 +97,54 @@ func TestRoundTowardAcceptable(t *testing.T) {
 		}
 	}
 }
+
+// TestAnchoredSearchesMatchExactRoots: the remedies that search on the peak
+// estimate of W and check with one quadrature land on the acceptable side
+// of the root of the exact margin (found here by false position on the
+// quadrature alone, to 1e-9), within two tolerances of it.
+func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
+	t.Parallel()
+	var checked [3]int
+	for _, name := range []string{"electrostatic_screening.json", "electrostatic_screening_2.json",
+		"low_surface_charge.json", "multivalent_ions.json", "multivalent_ions_2.json"} {
+		_, ev := evaluated(t, name)
+		c := ev.c
+		if I, ok := largestAcceptableIonicStrength(ev); ok && I < c.ionicStrength {
+			exact := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
+			checked[0]++
+			root, found := physics.FindRoot(exact, math.Log10(ionicStrengthFloor(ev)), math.Log10(c.ionicStrength), 1e-9)
+			if d := math.Log10(I) - root; !found || d > 0 || d < -2*ionicStrengthTol {
+				t.Errorf("%s: ionic strength %g mM, exact root %g mM", name, I, math.Pow(10, root))
+			}
+		}
+		if psi, ok := smallestAcceptablePotential(ev); ok && psi > 0 {
+			exact := func(psi float64) float64 {
+				p := ev.pair
+				p.Potential = math.Copysign(psi, ev.pair.Potential)
+				return stabilityMargin(ev, p)
+			}
+			checked[1]++
+			root, found := physics.FindRoot(exact, 0, 0.2, 1e-9)
+			if d := psi - root; !found || d < 0 || d > 2*potentialTol {
+				t.Errorf("%s: potential %g mV, exact root %g mV", name, psi*1e3, root*1e3)
+			}
+		}
+		if c.multivalentSalt != "" {
+			tg, _, ok := solveMultivalent(ev)
+			other := c.ionicStrength - c.multivalentIonicShare*c.multivalentConc
+			exact := func(conc float64) float64 {
+				return stabilityMargin(ev, ev.withIonicStrength(math.Max(other+c.multivalentIonicShare*conc, ionicStrengthFloor(ev))))
+			}
+			checked[2]++
+			root, found := physics.FindRoot(exact, 0, c.multivalentConc, 1e-12)
+			if !ok || !found {
+				t.Errorf("%s: multivalent target %v (%v), exact root found %v", name, tg.Value, ok, found)
+			} else if d := tg.Value - root; d > 1e-12 || d < -2*multivalentTol*c.multivalentConc-1e-3*root {
+				t.Errorf("%s: multivalent target %g mM, exact root %g mM", name, tg.Value, root)
+			}
+		}
+	}
+	if checked[0] == 0 || checked[1] == 0 || checked[2] == 0 {
+		t.Errorf("searches checked (ionic, potential, multivalent): %v; want each at least once", checked)
+	}
+}
