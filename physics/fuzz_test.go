@@ -135,6 +135,11 @@ func FuzzPair(f *testing.F) {
 			if w := physics.Log10StabilityRatio(p, honig); !fuzzFinite(w) {
 				t.Fatalf("Log10StabilityRatio(honig=%v) = %g for %+v", honig, w, p)
 			}
+			// The peak estimate: NaN without a barrier (or where it does
+			// not apply), never infinite.
+			if w := physics.Log10StabilityRatioPeak(p, barrier, honig); math.IsInf(w, 0) || !barrier.Found && !math.IsNaN(w) {
+				t.Fatalf("Log10StabilityRatioPeak(honig=%v) = %g with barrier %+v for %+v", honig, w, barrier, p)
+			}
 		}
 
 		// Documented: ok with I in [1e-6, 5000] mol/m^3, else 0 or +Inf.
@@ -178,6 +183,21 @@ func TestFuzzFindings(t *testing.T) {
 	t.Run("8.3 nm, Debye length 100 um", func(t *testing.T) {
 		if w := physics.Log10StabilityRatio(r, true); !fuzzFinite(w) {
 			t.Errorf("Log10StabilityRatio = %g for %+v", w, r)
+		}
+	})
+	// FuzzPair: a 10 mm sphere in a relative permittivity of 1 with a
+	// 400 nm depletant at 1e27 m^-3. The energy peaks at the edge of the
+	// depletion well (800 nm, a kink) at 984,189 kT; the Newton polish
+	// ended left of the kink, so the grid point at 957 nm (983,554 kT) was
+	// reported. The polish now keeps its best point.
+	k := physics.Pair{Radius: 0.0049999999579723375, Hamaker: 1e-18, Potential: 0.13875, Kappa: 1e4, EpsR: 1,
+		TempK: 271.15, Retarded: true, ConstantPotential: true, DepletionRange: 4.0000019999999377e-07,
+		DepletionDensity: 1e27, StericThickness: 8e-11}
+	t.Run("barrier at the kink of a depletion well", func(t *testing.T) {
+		b := k.Barrier()
+		kT := physics.Boltzmann * k.TempK
+		if math.Abs(b.Separation-2*k.DepletionRange) > 1e-12 || b.Energy/kT < 984189 {
+			t.Errorf("Barrier %g kT at %g nm, want 984,189 kT at the kink, 800 nm", b.Energy/kT, b.Separation*1e9)
 		}
 	})
 }

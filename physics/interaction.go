@@ -331,14 +331,17 @@ func (c *pairCurve) refine(hs, vs *[scanPoints]float64, i int, sign float64) Ext
 // polish finds the extremum of sign*V(exp(s)) in [a, b] starting from s, by
 // Newton's method on V_s = 0 with the closed-form V_s and V_ss of slopes,
 // falling back to bisection of the bracket whenever a step leaves it or the
-// curvature has the wrong sign. It returns ln h and V there. A smooth
-// extremum converges quadratically, in three or four evaluations, to 1e-9
-// in ln h.
+// curvature has the wrong sign. It returns the best point it evaluated, ln h
+// and V there: a smooth extremum converges quadratically, in three or four
+// evaluations, to 1e-9 in ln h; at a kink (the edge of a depletion well) the
+// bracket closes on the kink from both sides, whose higher side is kept.
 func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
-	var v float64
+	bestS, bestV := s, math.NaN()
 	for iter := 0; iter < 60; iter++ {
-		var vs, vss float64
-		v, vs, vss = c.slopes(math.Exp(s))
+		v, vs, vss := c.slopes(math.Exp(s))
+		if math.IsNaN(bestV) || sign*v > sign*bestV {
+			bestS, bestV = s, v
+		}
 		slope, curv := sign*vs, sign*vss
 		if slope > 0 {
 			a = s
@@ -358,5 +361,5 @@ func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
 		}
 		s = next
 	}
-	return s, v
+	return bestS, bestV
 }
