@@ -101,7 +101,8 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 // by the envelope theorem the barrier moves by LogKappaSlope ln(10)/2 per
 // decade, and log10 W follows the barrier over kT ln 10, less half a decade
 // for the 1/(kappa a) of W ~ exp(Vmax/kT)/(2 kappa a) (Reerink & Overbeek,
-// Discuss. Faraday Soc. 18 (1954) 74).
+// Discuss. Faraday Soc. 18 (1954) 74). The margin is NaN where log10W is
+// (the peak estimate where it does not apply).
 func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
 	c := ev.c
 	if shielded(p) {
@@ -119,8 +120,12 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 	if byBarrier < 0 {
 		return byBarrier, barrierSlope
 	}
+	w := log10W(p, b)
+	if math.IsNaN(w) {
+		return math.NaN(), barrierSlope // no estimate here: the search falls back to the quadrature
+	}
 	n0 := physics.NumberDensity(c.phi, c.radius)
-	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, log10W(p, b))
+	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, w)
 	byHalfLife := log10T - math.Log10(c.criteria.halfLifeRatio*c.shelfLife)
 	if byBarrier < byHalfLife {
 		return byBarrier, barrierSlope

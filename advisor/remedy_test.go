@@ -1,6 +1,7 @@
 package advisor
 
 import (
+	"encoding/json"
 	"math"
 	"testing"
 
@@ -146,5 +147,40 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 	}
 	if checked[0] == 0 || checked[1] == 0 || checked[2] == 0 {
 		t.Errorf("searches checked (ionic, potential, multivalent): %v; want each at least once", checked)
+	}
+}
+
+// TestRemedyWithoutPeakEstimate: FuzzTriage found a sample (a 12 nm median
+// in 60 mM salt) where the peak estimate of W does not apply at some point
+// of a remedy search, whose NaN reached the half-life and panicked; the
+// searches now fall back to the quadrature there.
+func TestRemedyWithoutPeakEstimate(t *testing.T) {
+	t.Parallel()
+	const sample = `{"sample_id":"FUZZ-1","symptom":"settling","particles":{"material":"titania_anatase","diameter_nm":60,
+		"size_distribution":[{"diameter_nm":11.838084919350958,"volume_fraction":0.5}],"volume_fraction":0.02,"zeta_mV":45},
+		"medium":{"liquid":"water","temperature_c":25,"ph":3.8,"electrolytes":[{"formula":"NaNO3","concentration_mM":60}]},
+		"storage":{"container_height_mm":250,"shelf_life_days":365},
+		"observation":{"age_days":10,"clear_layer_mm":100,"sediment_redisperses":true}}`
+	var s Sample
+	if err := json.Unmarshal([]byte(sample), &s); err != nil {
+		t.Fatal(err)
+	}
+	rep, err := benchEngine(t).Triage(&s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	targets := 0
+	for _, c := range rep.Causes {
+		for _, r := range c.Remedies {
+			if r.Target != nil {
+				targets++
+				if v := r.Target.Value; math.IsNaN(v) || math.IsInf(v, 0) {
+					t.Errorf("%s: target %v", r.ID, v)
+				}
+			}
+		}
+	}
+	if targets == 0 {
+		t.Errorf("no remedy target: %+v", rep.Causes)
 	}
 }
