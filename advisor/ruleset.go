@@ -163,11 +163,21 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 	return rule{ruleSpec: s, program: program, cond: compileCondition(program.Node()), text: text}, nil
 }
 
+// ruleEnv and afterCausesEnv declare the facts' types to the compiler (the
+// values are the defaults); read only.
+var (
+	ruleEnv        = newFacts().env(false)
+	afterCausesEnv = newFacts().env(true)
+)
+
 // compileOptions declares the rule language: the facts with their types, a
 // boolean result, and known(x), which is false for a number the advisor
 // could not compute for this sample (such numbers make every comparison false).
 func compileOptions(afterCauses bool) []expr.Option {
-	env := newFacts().env(afterCauses)
+	env := ruleEnv
+	if afterCauses {
+		env = afterCausesEnv
+	}
 	return []expr.Option{
 		expr.Env(env),
 		expr.AsBool(),
