@@ -21,6 +21,8 @@ type evaluation struct {
 
 	lastBarrier float64 // separation of the last barrier found while solving remedies, a warm start
 
+	stabilityText string // stabilityCriterion, written once per triage
+
 	acceptablePotential struct { // solved once per triage, shared by two remedies
 		done, ok bool
 		psi      float64

@@ -148,8 +148,7 @@ func (f facts) env(afterCauses bool) map[string]any {
 
 // appendFormat renders a fact for an explanation: three significant digits
 // and its unit.
-func (f facts) appendFormat(b []byte, name string) []byte {
-	spec := factIndex[name]
+func (f facts) appendFormat(b []byte, spec declaredFact) []byte {
 	v := f.values[spec.slot]
 	switch spec.Kind {
 	case numberFact:

@@ -15,8 +15,11 @@ import (
 // root of the smaller margin is the target.
 
 func stabilityCriterion(ev *evaluation) string {
-	return "energy barrier >= " + shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
-		shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
+	if ev.stabilityText == "" {
+		ev.stabilityText = "energy barrier >= " + shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
+			shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
+	}
+	return ev.stabilityText
 }
 
 // shieldedMargin is the margin of a sterically shielded pair: finite, so that

@@ -37,7 +37,8 @@ type rule struct {
 
 // textPart is literal text, or a fact whose value is formatted in its place.
 type textPart struct {
-	literal, fact string
+	literal string
+	fact    *declaredFact // nil for literal text
 }
 
 var placeholder = regexp.MustCompile(`\{([A-Za-z0-9_]+)\}`)
@@ -143,10 +144,11 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 	last := 0
 	for _, m := range placeholder.FindAllStringSubmatchIndex(s.Explain, -1) {
 		name := s.Explain[m[2]:m[3]]
-		if _, ok := s.fact(name); !ok {
+		f, ok := s.fact(name)
+		if !ok {
 			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", name))
 		}
-		text = append(text, textPart{literal: s.Explain[last:m[0]]}, textPart{fact: name})
+		text = append(text, textPart{literal: s.Explain[last:m[0]]}, textPart{fact: &f})
 		last = m[1]
 	}
 	text = append(text, textPart{literal: s.Explain[last:]})
@@ -240,8 +242,8 @@ func (r *rule) explain(f facts) string {
 	}
 	b := make([]byte, 0, len(r.Explain)+16) // a placeholder's name is about as long as its value
 	for _, part := range r.text {
-		if part.fact != "" {
-			b = f.appendFormat(b, part.fact)
+		if part.fact != nil {
+			b = f.appendFormat(b, *part.fact)
 		} else {
 			b = append(b, part.literal...)
 		}
