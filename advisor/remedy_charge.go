@@ -259,9 +259,13 @@ func solveSurfaceCharge(ev *evaluation) (Target, string, bool) {
 // move_ph_from_iep both need it.
 func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
 	if m := &ev.acceptablePotential; !m.done && ev.hasPair {
+		sign := -1.0 // as potentialWhere: the surface keeps its sign
+		if ev.pair.Potential > 0 {
+			sign = 1
+		}
 		withPotential := func(psi float64) physics.Pair {
 			p := ev.pair
-			p.Potential = math.Copysign(psi, ev.pair.Potential)
+			p.Potential = sign * psi
 			return p
 		}
 		solve := func(margin func(psi float64) float64) (float64, bool) {
@@ -373,9 +377,13 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 		if reached = margin(0) >= 0; !reached {
 			return 0, false
 		}
+		if margin(conc) >= 0 {
+			return conc, true // the present concentration is acceptable
+		}
 		return physics.FindRoot(margin, 0, conc, multivalentTol*c.multivalentConc)
 	}
 	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.multivalentConc)
+	conc = math.Max(conc, 0) // a root within the tolerance of none at all
 	switch {
 	case !reached:
 		return Target{}, crit + ": not reached even without the multivalent salt", false
