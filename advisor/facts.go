@@ -70,7 +70,12 @@ var inputFacts = []factSpec{
 // topCauseScore takes the last slot.
 var factIndex = func() map[string]declaredFact {
 	m := map[string]declaredFact{}
-	add := func(f factSpec) { m[f.Name] = declaredFact{f, len(m)} }
+	add := func(f factSpec) {
+		if _, dup := m[f.Name]; dup {
+			panic("advisor: fact " + f.Name + " declared twice")
+		}
+		m[f.Name] = declaredFact{f, len(m)}
+	}
 	for _, f := range inputFacts {
 		add(f)
 	}
