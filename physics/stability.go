@@ -25,16 +25,23 @@ import (
 // wider than 1.5 in ln h, 6 on the barrier's panels to 1.5 and 3 widths
 // either side (width from the curvature there) and 4 on its tails to 6
 // widths, skipping parts whose bound is below 1e-10 of the barrier's
-// contribution; 8 points in x = 1/(u+2) beyond. Against a fine trapezoidal
-// reference (testdata/reference/interaction.py) log10 W agrees to better
-// than 1e-4 in the tested cases, from W < 1 to W = 1e4048,
-// which the tests hold it to. It panics on an invalid Pair.
+// contribution; 8 points in x = 1/(u+2) beyond. A sharp barrier of 15 kT
+// or more that alone decides W (DLVO energies without depletion, the rest
+// of the range bounded below 1e-4 of it; see peakStabilityRatio) is
+// integrated instead by 7-point Gauss–Hermite about it, about 11 energies
+// against 40 to 60, within 1e-5 decades of the composite rule over a sweep
+// of 828 pairs. Against a fine trapezoidal reference
+// (testdata/reference/interaction.py) log10 W agrees to better than 1e-4 in
+// the tested cases, from W < 1 to W = 1e4048, which the tests hold it to.
+// It panics on an invalid Pair.
 //
 // References: N. Fuchs, "Über die Stabilität und Aufladung der Aerosole",
 // Z. Phys. 89 (1934) 736; G. R. Honig, G. J. Roebersen & P. H. Wiersema,
 // J. Colloid Interface Sci. 36 (1971) 97; D. J. Shaw, Introduction to Colloid
 // and Surface Chemistry, 4th ed. (1992), eq. 8.20; W. B. Russel, D. A.
-// Saville & W. R. Schowalter, Colloidal Dispersions (1989), ch. 8.
+// Saville & W. R. Schowalter, Colloidal Dispersions (1989), ch. 8;
+// M. Abramowitz & I. A. Stegun, Handbook of Mathematical Functions (1964),
+// 25.4.46 (Gauss–Hermite quadrature).
 func Log10StabilityRatio(p Pair, honig bool) float64 {
 	c := p.curve()
 	barrier, _ := c.extrema(false)
@@ -64,6 +71,60 @@ const (
 )
 
 func (c *pairCurve) log10StabilityRatio(barrier Extremum, honig bool) float64 {
+	if w, ok := c.peakStabilityRatio(barrier, honig); ok {
+		return w
+	}
+	return c.compositeStabilityRatio(barrier, honig)
+}
+
+// peakStabilityRatio is log10 W by 7-point Gauss–Hermite about a sharp
+// barrier of at least peakMinBarrierKT (the scheme of
+// Log10StabilityRatioPeak; the outer nodes lie 3.75 widths out), when that
+// barrier alone decides W: it stands peakQuadratureClearance widths clear
+// of the closest approach, no depletion well can add a second maximum, and
+// the range beyond peakTailWidths widths is bounded below peakRestShare of
+// the peak's share. Classic DLVO energies rise from the closest approach or
+// the primary minimum to the barrier and fall from it to the secondary
+// minimum and back towards 0, so beyond those widths the energy is at most
+// the larger of its value at the closest approach, at the ends of the
+// widths, and 0. ok is false where this does not hold.
+func (c *pairCurve) peakStabilityRatio(b Extremum, honig bool) (float64, bool) {
+	if !b.Found || b.Energy/c.kT < peakMinBarrierKT || c.depletionPrefactor > 0 {
+		return 0, false
+	}
+	lo, hi := c.searchRange()
+	sLo, sBarrier := math.Log(lo), math.Log(b.Separation)
+	width := c.barrierWidth(sBarrier)
+	if !(width <= maxPeakWidth && sBarrier-sLo >= peakQuadratureClearance*width) {
+		return 0, false
+	}
+	step := math.Sqrt2 * width
+	sum := 0.0
+	for k, t := range gaussHermite7.x {
+		h := math.Exp(sBarrier + step*t)
+		sum += gaussHermite7.w[k] * math.Exp(t*t+(c.energy(h)-b.Energy)/c.kT) * stabilityWeight(h/c.radius, honig)
+	}
+	core := step * sum
+	rest := math.Max(c.energy(lo), c.energy(math.Exp(sBarrier-peakTailWidths*width)))
+	rest = math.Max(rest, math.Max(c.energy(math.Exp(sBarrier+peakTailWidths*width)), 0))
+	span := math.Log(math.Max(hi, 2*c.radius)) - sLo
+	if bound := (maxWeight*span + maxFarBeta) * math.Exp((rest-b.Energy)/c.kT); !(bound < peakRestShare*core) {
+		return 0, false
+	}
+	return (b.Energy/c.kT + math.Log(2*core)) / math.Ln10, true
+}
+
+// The peak path of the stability ratio (peakStabilityRatio).
+const (
+	peakMinBarrierKT        = 15.0
+	peakQuadratureClearance = 5.0 // the Gaussian's mass below the closest approach < 3e-7
+	peakTailWidths          = 6.0 // beyond, a Gaussian peak has fallen by 18 kT
+	peakRestShare           = 1e-4
+)
+
+// compositeStabilityRatio is log10 W by the composite rule of
+// Log10StabilityRatio.
+func (c *pairCurve) compositeStabilityRatio(barrier Extremum, honig bool) float64 {
 	lo, hi := c.searchRange()
 	sLo := math.Log(lo)
 	sHi := math.Log(math.Max(hi, 2*c.radius))
@@ -251,12 +312,15 @@ var (
 	gaussLegendre4 = newGaussLegendre(4)
 	gaussLegendre6 = newGaussLegendre(6)
 	gaussLegendre8 = newGaussLegendre(8)
-	gaussHermite5  = func() quadratureRule {
-		r := quadratureRule{x: make([]float64, 5), w: make([]float64, 5)}
-		quad.Hermite{}.FixedLocations(r.x, r.w, math.Inf(-1), math.Inf(1))
-		return r
-	}()
+	gaussHermite5  = newGaussHermite(5)
+	gaussHermite7  = newGaussHermite(7)
 )
+
+func newGaussHermite(n int) quadratureRule {
+	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
+	quad.Hermite{}.FixedLocations(r.x, r.w, math.Inf(-1), math.Inf(1))
+	return r
+}
 
 func newGaussLegendre(n int) quadratureRule {
 	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
