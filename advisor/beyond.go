@@ -75,7 +75,7 @@ func (ev *evaluation) depletion(kT float64) {
 		"Asakura-Oosawa energy at contact, depletion layer = radius of gyration")
 	ev.set("free_polymer_overlap_ratio", fp.concentration/physics.OverlapConcentration(fp.molarMass, fp.rg),
 		"concentration over overlap concentration 3M/(4 pi NA Rg^3)")
-	ev.model("depletion", "Asakura-Oosawa (1954), ideal polymer, depletion thickness = Rg")
+	ev.model(depletionModel)
 }
 
 func (ev *evaluation) bridging() {
@@ -106,7 +106,7 @@ func (ev *evaluation) ripening() {
 		ev.set("predicted_size_growth_at_age", physics.SizeGrowthFromRate(c.radius, rate, c.observed.age)*100,
 			"LSW growth of the diameter over the observed age")
 	}
-	ev.model("ripening", "Lifshitz-Slyozov-Wagner (1961), diffusion-controlled")
+	ev.model(ripeningModel)
 }
 
 // rheology reports the Krieger-Dougherty viscosity on the effective volume

@@ -2,6 +2,7 @@ package advisor
 
 import (
 	"math"
+	"strings"
 
 	"colloidtriage/physics"
 )
@@ -70,19 +71,30 @@ func roundSignificant(v float64, n int) float64 {
 	return r
 }
 
+// modelChoice is a model the report names: its key in the report's models,
+// its description, and the assumption note that records it, written once.
+type modelChoice struct{ key, text, note string }
+
+func newModelChoice(key, text string) modelChoice {
+	return modelChoice{key, text, "model for " + strings.ReplaceAll(key, "_", " ") + ": " + text}
+}
+
+// The models of every triage but the two chosen by the request
+// (vanDerWaalsModels, doubleLayerModels).
+var (
+	hinderedSettlingModel = newModelChoice("hindered_settling", "Richardson-Zaki (1-phi)^4.65")
+	stabilityRatioModel   = newModelChoice("stability_ratio", "Fuchs (1934) integral with the Honig, Roebersen & Wiersema (1971) hydrodynamic factor")
+	halfLifeModel         = newModelChoice("aggregation_half_life", "Smoluchowski (1917) t1/2 = 3 eta W/(4 kT N0)")
+	viscosityModel        = newModelChoice("viscosity", "Krieger-Dougherty (1959), [eta] = 2.5, on the effective volume fraction")
+	scoringModel          = newModelChoice("scoring", "MYCIN certainty factors (Shortliffe & Buchanan 1975)")
+	depletionModel        = newModelChoice("depletion", "Asakura-Oosawa (1954), ideal polymer, depletion thickness = Rg")
+	ripeningModel         = newModelChoice("ripening", "Lifshitz-Slyozov-Wagner (1961), diffusion-controlled")
+)
+
 // model records a model choice in the report's models and assumptions.
-func (ev *evaluation) model(name, choice string) {
-	ev.models[name] = choice
-	b := make([]byte, 0, len("model for : ")+len(name)+len(choice))
-	b = append(b, "model for "...)
-	for i := range len(name) {
-		if c := name[i]; c == '_' {
-			b = append(b, ' ')
-		} else {
-			b = append(b, c)
-		}
-	}
-	ev.n.text(string(append(append(b, ": "...), choice...)))
+func (ev *evaluation) model(m modelChoice) {
+	ev.models[m.key] = m.text
+	ev.n.text(m.note)
 }
 
 func (ev *evaluation) inputFacts() {

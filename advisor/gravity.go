@@ -22,7 +22,7 @@ func (ev *evaluation) computeGravity() {
 
 	v := physics.StokesVelocity(c.radius, drho, eta)
 	hindered := v * physics.RichardsonZakiFactor(c.phi, physics.RichardsonZakiExponentLowRe)
-	ev.model("hindered_settling", "Richardson-Zaki (1-phi)^4.65")
+	ev.model(hinderedSettlingModel)
 	ev.set("stokes_velocity", math.Abs(v)*mmPerDayPerMS, "Stokes (1851), median diameter")
 	ev.set("hindered_velocity", math.Abs(hindered)*mmPerDayPerMS, "Stokes x Richardson-Zaki (1954), n = 4.65")
 	re := physics.ParticleReynolds(2*c.radius, math.Abs(v), rhoL, eta)

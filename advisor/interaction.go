@@ -100,13 +100,13 @@ func effectiveModels(req *Models) Models {
 // vanDerWaalsModels and doubleLayerModels describe the model choices of a
 // request in the report.
 var (
-	vanDerWaalsModels = map[string]string{
-		"hamaker_exact":    "Hamaker (1937) exact sphere-sphere expression, non-retarded",
-		"retarded_gregory": "Gregory (1981) retarded sphere-sphere expression, lambda = 100 nm",
+	vanDerWaalsModels = map[string]modelChoice{
+		"hamaker_exact":    newModelChoice("van_der_waals", "Hamaker (1937) exact sphere-sphere expression, non-retarded"),
+		"retarded_gregory": newModelChoice("van_der_waals", "Gregory (1981) retarded sphere-sphere expression, lambda = 100 nm"),
 	}
-	doubleLayerModels = map[string]string{
-		"linear_superposition": "linear superposition, equal spheres, Derjaguin limit (Bell, Levine & McCartney 1970)",
-		"constant_potential":   "constant potential, Hogg, Healy & Fuerstenau (1966)",
+	doubleLayerModels = map[string]modelChoice{
+		"linear_superposition": newModelChoice("double_layer", "linear superposition, equal spheres, Derjaguin limit (Bell, Levine & McCartney 1970)"),
+		"constant_potential":   newModelChoice("double_layer", "constant potential, Hogg, Healy & Fuerstenau (1966)"),
 	}
 )
 
@@ -114,12 +114,17 @@ func (ev *evaluation) chooseModels() {
 	m := effectiveModels(ev.c.models)
 	ev.pair.Retarded = m.VanDerWaals == "retarded_gregory"
 	ev.pair.ConstantPotential = m.DoubleLayer == "constant_potential"
-	ev.model("van_der_waals", vanDerWaalsModels[m.VanDerWaals])
-	ev.model("double_layer", doubleLayerModels[m.DoubleLayer])
-	ev.model("stability_ratio", "Fuchs (1934) integral with the Honig, Roebersen & Wiersema (1971) hydrodynamic factor")
-	ev.model("aggregation_half_life", "Smoluchowski (1917) t1/2 = 3 eta W/(4 kT N0)")
-	ev.model("viscosity", "Krieger-Dougherty (1959), [eta] = 2.5, on the effective volume fraction")
-	ev.model("scoring", "MYCIN certainty factors (Shortliffe & Buchanan 1975)")
+	vdw, okVdW := vanDerWaalsModels[m.VanDerWaals]
+	edl, okEDL := doubleLayerModels[m.DoubleLayer]
+	if !okVdW || !okEDL {
+		panic("advisor: model choice not validated: " + m.VanDerWaals + ", " + m.DoubleLayer)
+	}
+	ev.model(vdw)
+	ev.model(edl)
+	ev.model(stabilityRatioModel)
+	ev.model(halfLifeModel)
+	ev.model(viscosityModel)
+	ev.model(scoringModel)
 }
 
 // kinetics reports the Fuchs stability ratio and the Smoluchowski half-lives
