@@ -47,7 +47,7 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 	if !ok {
 		panic("advisor: undeclared scale " + name)
 	}
-	ev.f.values[spec.slot].num = v
+	ev.f.num[spec.slot] = v
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
 			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)

@@ -23,7 +23,7 @@ type factSpec struct {
 	Meaning string
 }
 
-// declaredFact is a factSpec with its slot in facts.values.
+// declaredFact is a factSpec with its slot among the facts of its kind.
 type declaredFact struct {
 	factSpec
 	slot int
@@ -66,15 +66,17 @@ var inputFacts = []factSpec{
 	{"max_steric_contact_kT", numberFact, "kT", "acceptance criterion: deepest van der Waals energy at steric contact"},
 }
 
-// factIndex holds every declared fact with its slot in facts.values;
-// topCauseScore takes the last slot.
+// factIndex holds every declared fact with its slot among the facts of its
+// kind; topCauseScore is the last number.
 var factIndex = func() map[string]declaredFact {
 	m := map[string]declaredFact{}
+	var count [3]int
 	add := func(f factSpec) {
 		if _, dup := m[f.Name]; dup {
 			panic("advisor: fact " + f.Name + " declared twice")
 		}
-		m[f.Name] = declaredFact{f, len(m)}
+		m[f.Name] = declaredFact{f, count[f.Kind]}
+		count[f.Kind]++
 	}
 	for _, f := range inputFacts {
 		add(f)
@@ -88,29 +90,33 @@ var factIndex = func() map[string]declaredFact {
 
 // factDefaults are the values of facts not set for a sample: NaN, "" and
 // false.
-var factDefaults = func() []factValue {
-	v := make([]factValue, len(factIndex))
-	for _, f := range factIndex {
-		if f.Kind == numberFact {
-			v[f.slot].num = math.NaN()
+var factDefaults = func() facts {
+	var f facts
+	for _, d := range factIndex {
+		switch d.Kind {
+		case numberFact:
+			f.num = append(f.num, math.NaN())
+		case textFact:
+			f.text = append(f.text, "")
+		case flagFact:
+			f.flag = append(f.flag, false)
 		}
 	}
-	return v
+	return f
 }()
 
 // facts is the environment of the rules for one sample: one value per
-// declared fact, in its slot. Numbers not computed for this sample are NaN,
-// so every comparison with them is false.
-type facts struct{ values []factValue }
-
-// factValue holds a fact of any kind; its spec says which field counts.
-type factValue struct {
-	num  float64
-	text string
-	flag bool
+// declared fact, in the slot of its kind. Numbers not computed for this
+// sample are NaN, so every comparison with them is false.
+type facts struct {
+	num  []float64
+	text []string
+	flag []bool
 }
 
-func newFacts() facts { return facts{values: slices.Clone(factDefaults)} }
+func newFacts() facts {
+	return facts{num: slices.Clone(factDefaults.num), text: slices.Clone(factDefaults.text), flag: slices.Clone(factDefaults.flag)}
+}
 
 // slot panics on an undeclared fact, a programming error.
 func slot(name string) int {
@@ -121,21 +127,20 @@ func slot(name string) int {
 	return f.slot
 }
 
-func (f facts) setNumber(name string, v float64) { f.values[slot(name)].num = v }
-func (f facts) setText(name, v string)           { f.values[slot(name)].text = v }
-func (f facts) setFlag(name string, v bool)      { f.values[slot(name)].flag = v }
-func (f facts) number(name string) float64       { return f.values[slot(name)].num }
+func (f facts) setNumber(name string, v float64) { f.num[slot(name)] = v }
+func (f facts) setText(name, v string)           { f.text[slot(name)] = v }
+func (f facts) setFlag(name string, v bool)      { f.flag[slot(name)] = v }
+func (f facts) number(name string) float64       { return f.num[slot(name)] }
 
 // value is a fact as the expression language sees it.
 func (f facts) value(spec declaredFact) any {
-	v := f.values[spec.slot]
 	switch spec.Kind {
 	case numberFact:
-		return v.num
+		return f.num[spec.slot]
 	case textFact:
-		return v.text
+		return f.text[spec.slot]
 	}
-	return v.flag
+	return f.flag[spec.slot]
 }
 
 // env is the facts as the expression machine's environment, for rules that
@@ -154,14 +159,13 @@ func (f facts) env(afterCauses bool) map[string]any {
 // appendFormat renders a fact for an explanation: three significant digits
 // and its unit.
 func (f facts) appendFormat(b []byte, spec declaredFact) []byte {
-	v := f.values[spec.slot]
 	switch spec.Kind {
 	case numberFact:
-		return appendQuantity(b, v.num, spec.Unit)
+		return appendQuantity(b, f.num[spec.slot], spec.Unit)
 	case flagFact:
-		return strconv.AppendBool(b, v.flag)
+		return strconv.AppendBool(b, f.flag[spec.slot])
 	}
-	return append(b, v.text...)
+	return append(b, f.text[spec.slot]...)
 }
 
 func formatQuantity(v float64, unit string) string {

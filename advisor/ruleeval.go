@@ -51,7 +51,7 @@ func boolTerm(n ast.Node) condition {
 	case *ast.IdentifierNode:
 		if f, ok := factIndex[n.Value]; ok && f.Kind == flagFact {
 			i := f.slot
-			return func(f facts) bool { return f.values[i].flag }
+			return func(f facts) bool { return f.flag[i] }
 		}
 	case *ast.UnaryNode:
 		if x := boolTerm(n.Node); x != nil && (n.Operator == "!" || n.Operator == "not") {
@@ -137,7 +137,7 @@ func numberTermOf(n ast.Node) numberTerm {
 	case *ast.IdentifierNode:
 		if f, ok := factIndex[n.Value]; ok && f.Kind == numberFact {
 			i := f.slot
-			return func(f facts) float64 { return f.values[i].num }
+			return func(f facts) float64 { return f.num[i] }
 		}
 	case *ast.UnaryNode:
 		x := numberTermOf(n.Node)
@@ -185,7 +185,7 @@ func textTermOf(n ast.Node) textTerm {
 	case *ast.IdentifierNode:
 		if f, ok := factIndex[n.Value]; ok && f.Kind == textFact {
 			i := f.slot
-			return func(f facts) string { return f.values[i].text }
+			return func(f facts) string { return f.text[i] }
 		}
 	}
 	return nil

@@ -35,17 +35,16 @@ func TestConditionsMatchMachine(t *testing.T) {
 		for range 1000 {
 			f := newFacts()
 			for _, spec := range factIndex {
-				v := &f.values[spec.slot]
 				switch spec.Kind {
 				case numberFact:
-					v.num = numbers[rng.IntN(len(numbers))]
+					f.num[spec.slot] = numbers[rng.IntN(len(numbers))]
 					if rng.IntN(4) == 0 {
-						v.num = rng.NormFloat64() * 20
+						f.num[spec.slot] = rng.NormFloat64() * 20
 					}
 				case textFact:
-					v.text = texts[rng.IntN(len(texts))]
+					f.text[spec.slot] = texts[rng.IntN(len(texts))]
 				case flagFact:
-					v.flag = rng.IntN(2) == 0
+					f.flag[spec.slot] = rng.IntN(2) == 0
 				}
 			}
 			want, err := runRule(&machine, r.program, f.env(r.AfterCauses))
