@@ -226,7 +226,7 @@ func sortedKeys(m map[string]bool) []string {
 	return out
 }
 
-func (s ruleSpec) appliesTo(symptom string) bool {
+func (s *ruleSpec) appliesTo(symptom string) bool {
 	for _, sym := range s.Symptoms {
 		if sym == symptom || sym == "any" {
 			return true
