@@ -92,15 +92,10 @@ func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
 	return ev, nil
 }
 
-type firing struct {
-	rule *rule
-	text string
-}
-
 type causeScore struct {
 	id    string
 	cf    float64
-	fired []firing
+	fired []*rule
 	order int
 }
 
@@ -138,7 +133,7 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 				scores[r.Cause] = cs
 			}
 			cs.cf = combineCertainty(cs.cf, r.Certainty)
-			cs.fired = append(cs.fired, firing{rule: r, text: r.explain(ev.f)})
+			cs.fired = append(cs.fired, r)
 		}
 	}
 	run(false)
@@ -170,33 +165,37 @@ func (e *Engine) rank(ev *evaluation) []Cause {
 
 func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 	entry, _ := find(e.rules.Catalog.Causes, cs.id)
-	evidence, remedies := 0, 0
-	for _, fr := range cs.fired {
-		evidence += len(fr.rule.Evidence)
-		remedies += len(fr.rule.Remedies)
+	evidence, remedies, text := 0, 0, 0
+	for _, r := range cs.fired {
+		evidence += len(r.Evidence)
+		remedies += len(r.Remedies)
+		text += len(r.Explain) + 17 // a placeholder's name is about as long as its value
 	}
 	c := Cause{ID: cs.id, Rank: rank, Score: math.Round(cs.cf*1000) / 1000, Title: entry.Title,
 		Evidence: make([]Evidence, 0, evidence), Remedies: make([]Remedy, 0, remedies)}
-	texts := make([]string, 0, len(cs.fired))
-	for _, fr := range cs.fired {
-		texts = append(texts, fr.text)
-		for _, name := range fr.rule.Evidence {
+	explanation := make([]byte, 0, text)
+	for i, r := range cs.fired {
+		if i > 0 {
+			explanation = append(explanation, ' ')
+		}
+		explanation = r.appendExplanation(explanation, ev.f)
+		for _, name := range r.Evidence {
 			v := ev.f.number(name)
 			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
 				continue
 			}
-			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: fr.rule.When})
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: r.When})
 		}
-		if fr.rule.Certainty < 0 {
+		if r.Certainty < 0 {
 			continue
 		}
-		for _, id := range fr.rule.Remedies {
+		for _, id := range r.Remedies {
 			if !hasRemedy(c.Remedies, id) {
 				c.Remedies = append(c.Remedies, e.remedy(ev, id))
 			}
 		}
 	}
-	c.Explanation = strings.Join(texts, " ")
+	c.Explanation = string(explanation)
 	return c
 }
 

@@ -235,12 +235,9 @@ func (s *ruleSpec) appliesTo(symptom string) bool {
 	return false
 }
 
-// explain fills the placeholders of a rule's text with the facts' values.
-func (r *rule) explain(f facts) string {
-	if len(r.text) == 1 {
-		return r.text[0].literal
-	}
-	b := make([]byte, 0, len(r.Explain)+16) // a placeholder's name is about as long as its value
+// appendExplanation appends the rule's text with its placeholders filled
+// by the facts' values.
+func (r *rule) appendExplanation(b []byte, f facts) []byte {
 	for _, part := range r.text {
 		if part.fact != nil {
 			b = f.appendFormat(b, *part.fact)
@@ -248,5 +245,5 @@ func (r *rule) explain(f facts) string {
 			b = append(b, part.literal...)
 		}
 	}
-	return string(b)
+	return b
 }
