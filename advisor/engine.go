@@ -173,12 +173,13 @@ func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 	}
 	c := Cause{ID: cs.id, Rank: rank, Score: math.Round(cs.cf*1000) / 1000, Title: entry.Title,
 		Evidence: make([]Evidence, 0, evidence), Remedies: make([]Remedy, 0, remedies)}
-	explanation := make([]byte, 0, text)
+	var explanation strings.Builder
+	explanation.Grow(text)
 	for i, r := range cs.fired {
 		if i > 0 {
-			explanation = append(explanation, ' ')
+			explanation.WriteByte(' ')
 		}
-		explanation = r.appendExplanation(explanation, ev.f)
+		r.writeExplanation(&explanation, ev.f)
 		for _, name := range r.Evidence {
 			v := ev.f.number(name)
 			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
@@ -195,7 +196,7 @@ func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 			}
 		}
 	}
-	c.Explanation = string(explanation)
+	c.Explanation = explanation.String()
 	return c
 }
 

@@ -10,6 +10,7 @@ import (
 	"path"
 	"regexp"
 	"sort"
+	"strings"
 
 	"github.com/expr-lang/expr"
 	"github.com/expr-lang/expr/file"
@@ -235,15 +236,15 @@ func (s *ruleSpec) appliesTo(symptom string) bool {
 	return false
 }
 
-// appendExplanation appends the rule's text with its placeholders filled
-// by the facts' values.
-func (r *rule) appendExplanation(b []byte, f facts) []byte {
+// writeExplanation writes the rule's text with its placeholders filled by
+// the facts' values.
+func (r *rule) writeExplanation(b *strings.Builder, f facts) {
+	var value [64]byte
 	for _, part := range r.text {
 		if part.fact != nil {
-			b = f.appendFormat(b, *part.fact)
+			b.Write(f.appendFormat(value[:0], *part.fact))
 		} else {
-			b = append(b, part.literal...)
+			b.WriteString(part.literal)
 		}
 	}
-	return b
 }
