@@ -91,29 +91,26 @@ func binaryCondition(n *ast.BinaryNode) condition {
 			return func(f facts) bool { return a(f) > b(f) }
 		case ">=":
 			return func(f facts) bool { return a(f) >= b(f) }
-		case "==":
-			return func(f facts) bool { return a(f) == b(f) }
-		case "!=":
-			return func(f facts) bool { return a(f) != b(f) }
 		}
-		return nil
+		return equality(n.Operator, a, b)
 	}
 	if a, b := textTermOf(n.Left), textTermOf(n.Right); a != nil && b != nil {
-		switch n.Operator {
-		case "==":
-			return func(f facts) bool { return a(f) == b(f) }
-		case "!=":
-			return func(f facts) bool { return a(f) != b(f) }
-		}
-		return nil
+		return equality(n.Operator, a, b)
 	}
 	if a, b := boolTerm(n.Left), boolTerm(n.Right); a != nil && b != nil {
-		switch n.Operator {
-		case "==":
-			return func(f facts) bool { return a(f) == b(f) }
-		case "!=":
-			return func(f facts) bool { return a(f) != b(f) }
-		}
+		return equality(n.Operator, a, b)
+	}
+	return nil
+}
+
+// equality compiles == and != between two terms of one type; nil for any
+// other operator.
+func equality[T comparable, Term ~func(facts) T](op string, a, b Term) condition {
+	switch op {
+	case "==":
+		return func(f facts) bool { return a(f) == b(f) }
+	case "!=":
+		return func(f facts) bool { return a(f) != b(f) }
 	}
 	return nil
 }

@@ -98,13 +98,7 @@ func (c *pairCurve) peakStabilityRatio(b Extremum, honig bool) (float64, bool) {
 	if !(width <= maxPeakWidth && sBarrier-sLo >= peakQuadratureClearance*width) {
 		return 0, false
 	}
-	step := math.Sqrt2 * width
-	sum := 0.0
-	for k, t := range gaussHermite7.x {
-		h := math.Exp(sBarrier + step*t)
-		sum += gaussHermite7.w[k] * math.Exp(t*t+(c.energy(h)-b.Energy)/c.kT) * stabilityWeight(h/c.radius, honig)
-	}
-	core := step * sum
+	core := c.peakIntegral(gaussHermite7, b, width, honig)
 	rest := math.Max(c.energy(lo), c.energy(math.Exp(sBarrier-peakTailWidths*width)))
 	rest = math.Max(rest, math.Max(c.energy(math.Exp(sBarrier+peakTailWidths*width)), 0))
 	span := math.Log(math.Max(hi, 2*c.radius)) - sLo
@@ -264,13 +258,20 @@ func Log10StabilityRatioPeak(p Pair, b Extremum, honig bool) float64 {
 	if !(width <= maxPeakWidth && sBarrier-math.Log(lo) >= peakClearance*width) {
 		return math.NaN()
 	}
-	step := math.Sqrt2 * width
+	return (b.Energy/c.kT + math.Log(2*c.peakIntegral(gaussHermite5, b, width, honig))) / math.Ln10
+}
+
+// peakIntegral is the integral in s = ln h of weight(u) exp((V - Vmax)/kT)
+// about the barrier b of the given width, by the Gauss–Hermite rule in
+// t = (s - s*)/(sqrt 2 width).
+func (c *pairCurve) peakIntegral(rule quadratureRule, b Extremum, width float64, honig bool) float64 {
+	sBarrier, step := math.Log(b.Separation), math.Sqrt2*width
 	sum := 0.0
-	for k, t := range gaussHermite5.x {
+	for k, t := range rule.x {
 		h := math.Exp(sBarrier + step*t)
-		sum += gaussHermite5.w[k] * math.Exp(t*t+(c.energy(h)-b.Energy)/c.kT) * stabilityWeight(h/c.radius, honig)
+		sum += rule.w[k] * math.Exp(t*t+(c.energy(h)-b.Energy)/c.kT) * stabilityWeight(h/c.radius, honig)
 	}
-	return (b.Energy/c.kT + math.Log(2*step*sum)) / math.Ln10
+	return step * sum
 }
 
 // maxPeakWidth and peakClearance bound where Log10StabilityRatioPeak
