@@ -59,12 +59,22 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 
 // roundSignificant keeps n significant digits so that reports do not pretend
 // a precision the models do not have, and stay byte-identical across runs.
-func roundSignificant(v float64, n int) float64 {
-	if v == 0 {
-		return 0
+func roundSignificant(v float64, n int) float64 { return roundDigits(v, n, math.Round) }
+
+// roundDigits keeps n significant digits of v, rounding the scaled value
+// with round (math.Round, Floor or Ceil). A value already at n digits but
+// for its last bit stays as it is; one that cannot be scaled is returned
+// unchanged.
+func roundDigits(v float64, n int, round func(float64) float64) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
 	}
 	p := math.Pow10(n - int(math.Ceil(math.Log10(math.Abs(v)))))
-	r := math.Round(v*p) / p
+	scaled := v * p
+	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Abs(scaled) {
+		scaled = nearest
+	}
+	r := round(scaled) / p
 	if math.IsInf(r, 0) || math.IsNaN(r) {
 		return v
 	}

@@ -36,27 +36,13 @@ func (e *Engine) remedy(ev *evaluation, id string) Remedy {
 // towards the side where the criterion holds (down for "<=", up for ">="),
 // so that the printed limit itself meets it.
 func roundTowardAcceptable(v float64, op string) float64 {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return v
-	}
-	p := math.Pow10(3 - int(math.Ceil(math.Log10(math.Abs(v)))))
-	scaled := v * p
-	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Abs(scaled) {
-		scaled = nearest // already 3 digits, but for the last bit
-	}
-	var r float64
 	switch op {
 	case "<=":
-		r = math.Floor(scaled) / p
+		return roundDigits(v, 3, math.Floor)
 	case ">=":
-		r = math.Ceil(scaled) / p
-	default:
-		r = math.Round(scaled) / p
+		return roundDigits(v, 3, math.Ceil)
 	}
-	if math.IsInf(r, 0) || math.IsNaN(r) {
-		return v
-	}
-	return r
+	return roundDigits(v, 3, math.Round)
 }
 
 // withTarget puts target in place of the {target} of an action (the
