@@ -159,7 +159,10 @@ func (c *pairCurve) maximumNear(hint float64) (v, h float64, ok bool) {
 	if !(s > sLo && s < sHi) {
 		return 0, 0, false
 	}
-	_, slope, _ := c.slopes(hint)
+	v, slope, curv := c.slopes(hint)
+	if step := -slope / curv; curv < 0 && math.Abs(step) < polishTol {
+		return v + slope*step/2, hint * math.Exp(step), true // the hint is the maximum (see polishTol)
+	}
 	dir := 1.0
 	if slope < 0 {
 		dir = -1
@@ -169,12 +172,13 @@ func (c *pairCurve) maximumNear(hint float64) (v, h float64, ok bool) {
 		if next <= sLo || next >= sHi {
 			return 0, 0, false
 		}
-		if _, nextSlope, _ := c.slopes(math.Exp(next)); dir*nextSlope <= 0 {
+		nv, nextSlope, nextCurv := c.slopes(math.Exp(next))
+		if dir*nextSlope <= 0 {
 			a, b := min(s, next), max(s, next)
-			x, e := c.polish(a, b, s, 1)
+			x, e := c.polishFrom(a, b, s, 1, v, slope, curv)
 			return e, math.Exp(x), true
 		}
-		s = next
+		s, v, slope, curv = next, nv, nextSlope, nextCurv
 	}
 	return 0, 0, false
 }

@@ -328,18 +328,30 @@ func (c *pairCurve) refine(hs, vs *[scanPoints]float64, i int, sign float64) Ext
 	return best
 }
 
+// polishTol is the Newton step in ln h at which polish stops. The iterates
+// converge quadratically, so that last step, not evaluated, and the
+// quadratic model's extremum place the extremum to about 1e-10 in ln h and
+// its energy to a few parts in 1e15.
+const polishTol = 1e-5
+
 // polish finds the extremum of sign*V(exp(s)) in [a, b] starting from s, by
 // Newton's method on V_s = 0 with the closed-form V_s and V_ss of slopes,
 // falling back to bisection of the bracket whenever a step leaves it or the
-// curvature has the wrong sign. It returns the best point it evaluated, ln h
-// and V there: a smooth extremum converges quadratically, in three or four
-// evaluations, to 1e-9 in ln h; at a kink (the edge of a depletion well) the
-// bracket closes on the kink from both sides, whose higher side is kept.
+// curvature has the wrong sign. It returns ln h and V of the extremum: a
+// smooth one converges quadratically, in two to four evaluations, and is
+// placed by the last Newton step (see polishTol); at a kink (the edge of a
+// depletion well) the bracket closes on the kink from both sides, and the
+// best point evaluated, on its higher side, is kept.
 func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
-	bestS, bestV := s, math.NaN()
-	for iter := 0; iter < 60; iter++ {
-		v, vs, vss := c.slopes(math.Exp(s))
-		if math.IsNaN(bestV) || sign*v > sign*bestV {
+	v, vs, vss := c.slopes(math.Exp(s))
+	return c.polishFrom(a, b, s, sign, v, vs, vss)
+}
+
+// polishFrom is polish given V, V_s and V_ss at the starting point.
+func (c *pairCurve) polishFrom(a, b, s, sign, v, vs, vss float64) (float64, float64) {
+	bestS, bestV := s, v
+	for iter := 0; ; iter++ {
+		if sign*v > sign*bestV {
 			bestS, bestV = s, v
 		}
 		slope, curv := sign*vs, sign*vss
@@ -349,17 +361,23 @@ func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
 			b = s
 		}
 		step := -slope / curv
-		if curv < 0 && math.Abs(step) < 1e-9 {
+		if curv < 0 && math.Abs(step) < polishTol {
+			// Converged: the last Newton step and the quadratic model's
+			// extremum, v + V_s step/2, are good to third order.
+			if top := v + vs*step/2; sign*top >= sign*bestV {
+				return s + step, top
+			}
+			break
+		}
+		if b-a < 1e-9 || iter == 59 {
 			break
 		}
 		next := s + step
 		if !(curv < 0) || !(next > a && next < b) {
 			next = (a + b) / 2
 		}
-		if b-a < 1e-9 {
-			break
-		}
 		s = next
+		v, vs, vss = c.slopes(math.Exp(s))
 	}
 	return bestS, bestV
 }
