@@ -20,6 +20,7 @@ type evaluation struct {
 	hasPair bool
 	vdwOnly physics.Pair // the same pair without double layer, for steric checks
 
+	hasBarrier  bool    // the pair as specified has an energy barrier
 	lastBarrier float64 // separation of the last barrier found while solving remedies, a warm start
 
 	stabilityText string // stabilityCriterion, written once per triage

@@ -53,7 +53,7 @@ func (ev *evaluation) computeInteraction() {
 	}
 	b, m := ev.pair.Extrema()
 	if b.Found {
-		ev.lastBarrier = b.Separation
+		ev.hasBarrier, ev.lastBarrier = true, b.Separation
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (logarithmic scan, Newton refinement)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
 	} else {

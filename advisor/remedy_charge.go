@@ -155,16 +155,18 @@ func ionicStrengthFloor(ev *evaluation) float64 {
 const ionicStrengthTol = 1e-3
 
 // largestAcceptableIonicStrength finds the largest ionic strength that meets
-// both criteria: first the barrier criterion, solved directly by
-// physics.CriticalIonicStrength; then, only if the half-life still falls
-// short there, the half-life margin below it.
+// both criteria, the barrier and the half-life, below the present one. The
+// margin is the smaller of the two; with no barrier at present, the search
+// starts at physics.CriticalIonicStrength's answer for the barrier
+// criterion.
 //
 // The half-life margin is searched on the peak estimate of log10 W
 // (physics.Log10StabilityRatioPeak: 5 energies about the barrier), offset
 // by its gap to the quadrature at the last exact point (none at first; the
 // gap is within 2e-4 decades for barriers of 15 kT and more, against the
-// margin's 0.004-decade window). The root of the estimated margin, aimed
-// half the tolerance into the acceptable side, is checked by the
+// margin's 0.004-decade window). Newton steps approach the root of the
+// estimated margin to between half and three quarters of the tolerance
+// into the acceptable side (approachRoot); the point is checked by the
 // quadrature: it is the answer when its exact margin is >= 0 and within the
 // tolerance of the root (by the local slope); otherwise the gap is renewed
 // there and the search repeated. A few rounds without an answer fall back
@@ -173,12 +175,17 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
 	floor := ionicStrengthFloor(ev)
 	kT := physics.Boltzmann * c.storageTempK
-	top, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT, ev.lastBarrier)
-	switch {
-	case !ok && top == 0:
-		return 0, false
-	case !ok || top > c.ionicStrength:
-		top = c.ionicStrength
+	top := c.ionicStrength
+	if !ev.hasBarrier {
+		// No barrier at the present ionic strength: the margin has no slope
+		// there, so the search starts where the barrier meets its criterion.
+		I, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT, ev.lastBarrier)
+		switch {
+		case !ok && I == 0:
+			return 0, false
+		case ok && I < top:
+			top = I
+		}
 	}
 	if top < floor {
 		return 0, false
@@ -188,13 +195,13 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	exact := func(logI float64) (float64, float64) { return a.exact(ev.withIonicStrength(math.Pow(10, logI))) }
 	aimed := func(logI float64) (float64, float64) {
 		m, slope := a.estimated(ev.withIonicStrength(math.Pow(10, logI)))
-		return m + slope*ionicStrengthTol/2, slope // slope < 0: aimed into the acceptable side
+		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
 	}
 	x := hi
 search:
 	for round := 0; round < 3; round++ {
-		next, fail, found := physics.FindRootNewton(secantRefined(aimed), x, lo, hi, -1, 1, ionicStrengthTol/4)
-		if !found && !(next == hi && math.IsNaN(fail)) {
+		next, found := approachRoot(secantRefined(aimed), x, lo, hi, ionicStrengthTol/8)
+		if !found {
 			break search // no estimated root, or no estimate: the exact search decides
 		}
 		x = next
@@ -218,8 +225,38 @@ search:
 	return 0, false
 }
 
+// approachRoot takes Newton steps, at most a decade each and kept within
+// [lo, hi], on a decreasing margin f from x. It returns the first point
+// whose Newton step to the root is shorter than tol, or hi when f >= 0
+// there. found is false at a NaN, a slope that is not negative,
+// a step stopped by lo, or after 12 steps: the caller's checked search then
+// decides. Unlike physics.FindRootNewton it does not close a bracket: the
+// point it returns is checked by the quadrature anyway.
+func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (root float64, found bool) {
+	for range 12 {
+		m, slope := f(x)
+		step := -m / slope
+		switch {
+		case math.IsNaN(m):
+			return x, false
+		case m >= 0 && x == hi:
+			return x, true
+		case !(slope < 0):
+			return x, false
+		case math.Abs(step) < tol:
+			return x, true
+		}
+		next := min(max(x+max(min(step, 1), -1), lo), hi)
+		if next == x {
+			return x, false
+		}
+		x = next
+	}
+	return x, false
+}
+
 // secantRefined wraps a margin and its envelope-theorem slope for
-// physics.FindRootNewton: from the second point on, the secant through the
+// approachRoot and physics.FindRootNewton: from the second point on, the secant through the
 // last two points, which also carries the prefactor of W, replaces the
 // slope when it has the expected (negative) sign.
 func secantRefined(f func(float64) (float64, float64)) func(float64) (float64, float64) {
