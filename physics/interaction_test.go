@@ -277,3 +277,25 @@ func TestBarrierNearAgreesWithBarrier(t *testing.T) {
 		}
 	}
 }
+
+// TestPolishPlacesExtrema checks the claim of polishTol: at every reference
+// barrier and secondary minimum, Pair.Extrema returns a point whose own
+// Newton step, from the closed-form slopes (verified against the energies
+// in slope_test.go), is below 1e-9 in ln h. A point placed only to
+// polishTol would show steps near 1e-5.
+func TestPolishPlacesExtrema(t *testing.T) {
+	t.Parallel()
+	for _, tt := range referencePairs {
+		c := tt.pair.curve()
+		b, m := tt.pair.Extrema()
+		for _, e := range []Extremum{b, m} {
+			if !e.Found || e.Separation <= MinimumSeparation {
+				continue
+			}
+			_, vs, vss := c.slopes(e.Separation)
+			if step := math.Abs(vs / vss); step > 1e-9 {
+				t.Errorf("%s: extremum at %g nm has a remaining Newton step of %g in ln h", tt.name, e.Separation*1e9, step)
+			}
+		}
+	}
+}
