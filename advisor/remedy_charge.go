@@ -256,9 +256,9 @@ func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (r
 }
 
 // secantRefined wraps a margin and its envelope-theorem slope for
-// approachRoot and physics.FindRootNewton: from the second point on, the secant through the
-// last two points, which also carries the prefactor of W, replaces the
-// slope when it has the expected (negative) sign.
+// approachRoot and physics.FindRootNewton: from the second point on, the
+// secant through the last two points, which also carries the prefactor of
+// W, replaces the slope when it has the expected (negative) sign.
 func secantRefined(f func(float64) (float64, float64)) func(float64) (float64, float64) {
 	lastX, lastF := math.NaN(), math.NaN()
 	return func(x float64) (float64, float64) {

@@ -184,3 +184,29 @@ func TestRemedyWithoutPeakEstimate(t *testing.T) {
 		t.Errorf("no remedy target: %+v", rep.Causes)
 	}
 }
+
+// TestApproachRoot checks approachRoot on f(x) = 2 - x^3 (root 2^(1/3), the
+// cube root of 2, 1.2599210498948732), its acceptance of the upper end, and
+// its refusals.
+func TestApproachRoot(t *testing.T) {
+	cube := func(x float64) (float64, float64) { return 2 - x*x*x, -3 * x * x }
+	root := math.Cbrt(2)
+	for _, x0 := range []float64{0.3, 1, 1.26, 2.5} {
+		x, ok := approachRoot(cube, x0, 0.1, 3, 1e-6)
+		if !ok || math.Abs(x-root) > 2e-6 {
+			t.Errorf("from %g: %g, %v; want %g within 2e-6", x0, x, ok, root)
+		}
+	}
+	if x, ok := approachRoot(cube, 1, 0.1, 1.1, 1e-6); !ok || x != 1.1 {
+		t.Errorf("acceptable at the upper end: %g, %v; want 1.1, true", x, ok)
+	}
+	if _, ok := approachRoot(cube, 2, 1.5, 3, 1e-6); ok {
+		t.Error("no acceptable point above the root: want found = false")
+	}
+	if _, ok := approachRoot(func(float64) (float64, float64) { return math.NaN(), -1 }, 1, 0, 2, 1e-6); ok {
+		t.Error("NaN margin: want found = false")
+	}
+	if _, ok := approachRoot(func(x float64) (float64, float64) { return x - 3, 1 }, 1, 0, 2, 1e-6); ok {
+		t.Error("rising margin: want found = false")
+	}
+}
