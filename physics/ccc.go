@@ -160,8 +160,8 @@ func (c *pairCurve) maximumNear(hint float64) (v, h float64, ok bool) {
 		return 0, 0, false
 	}
 	v, slope, curv := c.slopes(hint)
-	if step := -slope / curv; curv < 0 && math.Abs(step) < polishTol {
-		return v + slope*step/2, hint * math.Exp(step), true // the hint is the maximum (see polishTol)
+	if x, top, ok := newtonConverged(s, v, slope, curv, 1); ok {
+		return top, math.Exp(x), true // the hint is the maximum
 	}
 	dir := 1.0
 	if slope < 0 {

@@ -347,6 +347,18 @@ func (c *pairCurve) polish(a, b, s, sign float64) (float64, float64) {
 	return c.polishFrom(a, b, s, sign, v, vs, vss)
 }
 
+// newtonConverged reports whether the Newton step from ln h = s towards the
+// extremum of sign*V is below polishTol with the right curvature; then the
+// step places the extremum and the quadratic model, v + V_s step/2, gives
+// its energy, both good to third order.
+func newtonConverged(s, v, vs, vss, sign float64) (x, top float64, ok bool) {
+	step := -vs / vss
+	if !(sign*vss < 0 && math.Abs(step) < polishTol) {
+		return 0, 0, false
+	}
+	return s + step, v + vs*step/2, true
+}
+
 // polishFrom is polish given V, V_s and V_ss at the starting point.
 func (c *pairCurve) polishFrom(a, b, s, sign, v, vs, vss float64) (float64, float64) {
 	bestS, bestV := s, v
@@ -360,19 +372,16 @@ func (c *pairCurve) polishFrom(a, b, s, sign, v, vs, vss float64) (float64, floa
 		} else {
 			b = s
 		}
-		step := -slope / curv
-		if curv < 0 && math.Abs(step) < polishTol {
-			// Converged: the last Newton step and the quadratic model's
-			// extremum, v + V_s step/2, are good to third order.
-			if top := v + vs*step/2; sign*top >= sign*bestV {
-				return s + step, top
+		if x, top, ok := newtonConverged(s, v, vs, vss, sign); ok {
+			if sign*top >= sign*bestV {
+				return x, top
 			}
 			break
 		}
 		if b-a < 1e-9 || iter == 59 {
 			break
 		}
-		next := s + step
+		next := s - slope/curv
 		if !(curv < 0) || !(next > a && next < b) {
 			next = (a + b) / 2
 		}
