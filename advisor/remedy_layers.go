@@ -21,7 +21,7 @@ func stericCriterion(ev *evaluation) string {
 const thickestAdsorbedLayer = 50e-9
 
 func solveStericThickness(ev *evaluation) (Target, string, bool) {
-	d := physics.MinimumStericThickness(ev.vdwOnly.Energy, ev.c.storageTempK, ev.c.criteria.maxStericKT)
+	d := physics.MinimumStericThickness(ev.vdwOnly.EnergyCurve(), ev.c.storageTempK, ev.c.criteria.maxStericKT)
 	crit := stericCriterion(ev) + "; the layer must stay in good solvent"
 	if d > thickestAdsorbedLayer {
 		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", thickestAdsorbedLayer*1e9)

@@ -76,6 +76,13 @@ func (p Pair) Energy(h float64) float64 {
 	return c.energy(checkSeparation(h))
 }
 
+// EnergyCurve is Energy with the pair checked and its prefactors computed
+// once, for solvers that evaluate one pair at many separations.
+func (p Pair) EnergyCurve() func(h float64) float64 {
+	c := p.curve()
+	return func(h float64) float64 { return c.energy(checkSeparation(h)) }
+}
+
 // Parts returns the three contributions to Energy in J: van der Waals, double
 // layer and depletion, at surface separation h (m, >= 0).
 func (p Pair) Parts(h float64) (vdw, edl, depletion float64) {

@@ -107,6 +107,7 @@ func TestPairEnergyParts(t *testing.T) {
 			{"edl", edl, EDLLinearSuperposition(p.Radius, h, p.Potential, p.Kappa, p.EpsR, p.TempK, 1)},
 			{"depletion", dep, AsakuraOosawa(p.Radius, h, 10e-9, 1e22, p.TempK)},
 			{"total", p.Energy(h), vdw + edl + dep},
+			{"curve", p.EnergyCurve()(h), p.Energy(h)},
 		}
 		for _, c := range checks {
 			if interactionRelErr(c.got, c.want) > 1e-14 {
