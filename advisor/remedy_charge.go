@@ -104,8 +104,13 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 // by the envelope theorem the barrier moves by LogKappaSlope ln(10)/2 per
 // decade, and log10 W follows the barrier over kT ln 10, less half a decade
 // for the 1/(kappa a) of W ~ exp(Vmax/kT)/(2 kappa a) (Reerink & Overbeek,
-// Discuss. Faraday Soc. 18 (1954) 74). The margin is NaN where log10W is
-// (the peak estimate where it does not apply).
+// Discuss. Faraday Soc. 18 (1954) 74). The half-life margin is taken
+// wherever there is a barrier, also below the barrier criterion, so that a
+// search steps on the criterion that binds from its first point (the
+// half-life one, for most products, well before the barrier reaches its
+// minimum). The margin is NaN where log10W is (the peak estimate where it
+// does not apply) and the barrier criterion holds; where it fails, it is
+// the barrier margin.
 func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
 	c := ev.c
 	if shielded(p) {
@@ -120,11 +125,14 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 		ev.lastBarrier = b.Separation
 	}
 	byBarrier := barrier - c.criteria.minBarrierKT
-	if byBarrier < 0 {
+	if !b.Found {
 		return byBarrier, barrierSlope
 	}
 	w := log10W(p, b)
-	if math.IsNaN(w) {
+	switch {
+	case math.IsNaN(w) && byBarrier < 0:
+		return byBarrier, barrierSlope
+	case math.IsNaN(w):
 		return math.NaN(), barrierSlope // no estimate here: the search falls back to the quadrature
 	}
 	n0 := physics.NumberDensity(c.phi, c.radius)
@@ -227,12 +235,16 @@ search:
 
 // approachRoot takes Newton steps, at most a decade each and kept within
 // [lo, hi], on a decreasing margin f from x. It returns the first point
-// whose Newton step to the root is shorter than tol, or hi when f >= 0
-// there. found is false at a NaN, a slope that is not negative,
-// a step stopped by lo, or after 12 steps: the caller's checked search then
-// decides. Unlike physics.FindRootNewton it does not close a bracket: the
-// point it returns is checked by the quadrature anyway.
+// whose Newton step to the root is shorter than tol, or the point one step
+// on when the step after that, predicted from the contraction of the last
+// two (Newton's quadratic convergence: the next step is about
+// step^3/previous^2), is shorter than tol; or hi when f >= 0 there. found
+// is false at a NaN, a slope that is not negative, a step stopped by lo,
+// or after 12 steps: the caller's checked search then decides. Unlike
+// physics.FindRootNewton it does not close a bracket: the point it returns
+// is checked by the quadrature anyway.
 func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (root float64, found bool) {
+	previous := 0.0 // no step taken yet
 	for range 12 {
 		m, slope := f(x)
 		step := -m / slope
@@ -250,7 +262,10 @@ func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (r
 		if next == x {
 			return x, false
 		}
-		x = next
+		if a := math.Abs(step); previous != 0 && next == x+step && a < math.Abs(previous)/2 && a*a*a/(previous*previous) < tol {
+			return next, true
+		}
+		x, previous = next, step
 	}
 	return x, false
 }

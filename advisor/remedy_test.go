@@ -197,6 +197,14 @@ func TestApproachRoot(t *testing.T) {
 			t.Errorf("from %g: %g, %v; want %g within 2e-6", x0, x, ok, root)
 		}
 	}
+	// From 1 the Newton steps are 0.333, -0.0694, -0.00394, -1.2e-5: after
+	// the fourth the next is predicted at 3e-11, so the fifth point is
+	// returned without being evaluated.
+	evaluations := 0
+	counted := func(x float64) (float64, float64) { evaluations++; return cube(x) }
+	if x, _ := approachRoot(counted, 1, 0.1, 3, 1e-6); evaluations != 4 || math.Abs(x-root) > 1e-9 {
+		t.Errorf("from 1: %g after %d evaluations; want %g within 1e-9 after 4", x, evaluations, root)
+	}
 	if x, ok := approachRoot(cube, 1, 0.1, 1.1, 1e-6); !ok || x != 1.1 {
 		t.Errorf("acceptable at the upper end: %g, %v; want 1.1, true", x, ok)
 	}
