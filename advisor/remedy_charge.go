@@ -49,21 +49,34 @@ func exactLog10W(p physics.Pair, b physics.Extremum) float64 {
 type peakAnchor struct {
 	ev  *evaluation
 	gap float64
+	// last is the last exact point, whose gap is worked out only when an
+	// estimate follows it: a search that stops at its check never needs it.
+	last struct {
+		pair    physics.Pair
+		barrier physics.Extremum
+		log10W  float64
+		pending bool
+	}
 }
 
 func (a *peakAnchor) estimated(p physics.Pair) (margin, slope float64) {
+	if last := &a.last; last.pending {
+		if gap := last.log10W - physics.Log10StabilityRatioPeak(last.pair, last.barrier, true); !math.IsNaN(gap) {
+			a.gap = gap
+		}
+		last.pending = false
+	}
 	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
 		return physics.Log10StabilityRatioPeak(p, b, true) + a.gap
 	})
 }
 
-// exact is the margin on the quadrature; it renews the gap.
+// exact is the margin on the quadrature; it renews the gap for the
+// estimates that follow.
 func (a *peakAnchor) exact(p physics.Pair) (margin, slope float64) {
 	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
 		w := exactLog10W(p, b)
-		if gap := w - physics.Log10StabilityRatioPeak(p, b, true); !math.IsNaN(gap) {
-			a.gap = gap
-		}
+		a.last.pair, a.last.barrier, a.last.log10W, a.last.pending = p, b, w, true
 		return w
 	})
 }
