@@ -2,6 +2,7 @@ package advisor
 
 import (
 	"encoding/json"
+	"fmt"
 	"math"
 	"testing"
 
@@ -216,5 +217,55 @@ func TestApproachRoot(t *testing.T) {
 	}
 	if _, ok := approachRoot(func(x float64) (float64, float64) { return x - 3, 1 }, 1, 0, 2, 1e-6); ok {
 		t.Error("rising margin: want found = false")
+	}
+}
+
+// TestAnchoredSearchesSweep repeats TestAnchoredSearchesMatchExactRoots for
+// the ionic-strength and potential targets over 192 variants of the
+// salt-limited demo (diameter, zeta, salt and volume fraction), so that the
+// early stops of the searches are held to the exact roots away from the
+// demo too.
+func TestAnchoredSearchesSweep(t *testing.T) {
+	t.Parallel()
+	e := benchEngine(t)
+	var ionic, potential int
+	for _, d := range []float64{20, 60, 200, 800} {
+		for _, zeta := range []float64{15, 25, 45, 70} {
+			for _, salt := range []float64{1, 10, 60, 200} {
+				for _, phi := range []float64{0.001, 0.02, 0.2} {
+					s := benchSample(t, "electrostatic_screening.json")
+					s.Particles.DiameterNm, s.Particles.ZetaMV, s.Particles.VolumeFraction = &d, &zeta, &phi
+					s.Medium.Electrolytes[0].ConcentrationMM = &salt
+					ev, err := e.evaluate(s)
+					if err != nil {
+						t.Fatal(err)
+					}
+					name := fmt.Sprintf("d %g nm, zeta %g mV, %g mM, phi %g", d, zeta, salt, phi)
+					if I, ok := largestAcceptableIonicStrength(ev); ok && I < ev.c.ionicStrength {
+						ionic++
+						exact := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
+						root, found := physics.FindRoot(exact, math.Log10(ionicStrengthFloor(ev)), math.Log10(ev.c.ionicStrength), 1e-9)
+						if gap := math.Log10(I) - root; !found || gap > 0 || gap < -2*ionicStrengthTol {
+							t.Errorf("%s: ionic strength %g mM, exact root %g mM", name, I, math.Pow(10, root))
+						}
+					}
+					if psi, ok := smallestAcceptablePotential(ev); ok && psi > 0 {
+						potential++
+						exact := func(psi float64) float64 {
+							p := ev.pair
+							p.Potential = math.Copysign(psi, ev.pair.Potential)
+							return stabilityMargin(ev, p)
+						}
+						root, found := physics.FindRoot(exact, 0, 0.2, 1e-9)
+						if gap := psi - root; !found || gap < 0 || gap > 2*potentialTol {
+							t.Errorf("%s: potential %g mV, exact root %g mV", name, psi*1e3, root*1e3)
+						}
+					}
+				}
+			}
+		}
+	}
+	if ionic < 50 || potential < 150 {
+		t.Errorf("only %d ionic-strength and %d potential targets checked", ionic, potential)
 	}
 }
