@@ -31,7 +31,7 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 		}
 	}
 
-	mediumT := valueOr(m.TemperatureC, defaultTemperatureC, n, "medium.temperature_c", "degC")
+	mediumT := valueOr(m.TemperatureC, temperatureDefault, n)
 	storageT := mediumT
 	tempField := "/medium/temperature_c"
 	if s.Storage.TemperatureC != nil {
@@ -48,7 +48,7 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 		bad.add("/particles/density_kg_m3", "required unless particles.material names a library entry with a density",
 			"kg/m^3", "0 < value <= 25000")
 	}
-	c.phi = valueOr(p.VolumeFraction, defaultVolumeFraction, n, "particles.volume_fraction", "")
+	c.phi = valueOr(p.VolumeFraction, volumeFractionDefault, n)
 
 	resolveElectrolyte(m, c, bad, n)
 	c.iep = firstKnown(p.IsoelectricPH, mat.iep, "particles.isoelectric_ph", "pH", p.Material, n)
@@ -69,16 +69,43 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 	return c, nil
 }
 
-func valueOr(v *float64, def float64, n *notes, field, unit string) float64 {
+// fieldDefault is the value a request field takes when it is not given,
+// and the assumption note that records it, written once.
+type fieldDefault struct {
+	value float64
+	note  string
+}
+
+func newFieldDefault(field string, value float64, unit string) fieldDefault {
+	note := field + " not given: default " + shortest(value)
+	if unit != "" {
+		note += " " + unit
+	}
+	return fieldDefault{value, note}
+}
+
+// The defaults that valueOr fills in, in the request's units.
+var (
+	temperatureDefault     = newFieldDefault("medium.temperature_c", defaultTemperatureC, "degC")
+	volumeFractionDefault  = newFieldDefault("particles.volume_fraction", defaultVolumeFraction, "")
+	containerDefault       = newFieldDefault("storage.container_height_mm", defaultContainerMm, "mm")
+	shelfLifeDefault       = newFieldDefault("storage.shelf_life_days", defaultShelfLifeDays, "d")
+	minBarrierDefault      = newFieldDefault("criteria.min_barrier_kT", defaultMinBarrierKT, "kT")
+	halfLifeRatioDefault   = newFieldDefault("criteria.half_life_to_shelf_life", defaultHalfLifeRatio, "")
+	maxRelViscosityDefault = newFieldDefault("criteria.max_relative_viscosity", defaultMaxRelViscosity, "")
+	maxStericKTDefault     = newFieldDefault("criteria.max_steric_contact_kT", defaultMaxStericKT, "kT")
+	solubilityDefault      = newFieldDefault("particles.solubility_mol_m3", defaultSolubilityMolM3, "mol/m^3")
+	molarVolumeDefault     = newFieldDefault("particles.molar_volume_cm3_mol", defaultMolarVolumeM3*1e6, "cm^3/mol")
+	tensionDefault         = newFieldDefault("particles.interfacial_tension_mN_m", defaultTensionNm*1e3, "mN/m")
+)
+
+// valueOr is the request's value, or the default (noting the fill).
+func valueOr(v *float64, d fieldDefault, n *notes) float64 {
 	if v != nil {
 		return *v
 	}
-	text := field + " not given: default " + shortest(def)
-	if unit != "" {
-		text += " " + unit
-	}
-	n.text(text)
-	return def
+	n.text(d.note)
+	return d.value
 }
 
 // firstKnown takes the request's value, else the library's (noting the fill),
@@ -159,9 +186,9 @@ func pick(v *float64, lib float64) float64 {
 
 func resolveStorage(s *Sample, c *conditions, n *notes) {
 	st := &s.Storage
-	h := valueOr(st.ContainerHeightMm, defaultContainerMm, n, "storage.container_height_mm", "mm")
+	h := valueOr(st.ContainerHeightMm, containerDefault, n)
 	c.height = h * 1e-3
-	c.shelfLife = valueOr(st.ShelfLifeDays, defaultShelfLifeDays, n, "storage.shelf_life_days", "d") * day
+	c.shelfLife = valueOr(st.ShelfLifeDays, shelfLifeDefault, n) * day
 	if st.MaxClearLayerMm != nil {
 		c.maxClear = *st.MaxClearLayerMm * 1e-3
 	} else {
@@ -204,10 +231,10 @@ func resolveCriteria(k *Criteria, c *conditions, n *notes) {
 	if k == nil {
 		k = &Criteria{}
 	}
-	c.criteria.minBarrierKT = valueOr(k.MinBarrierKT, defaultMinBarrierKT, n, "criteria.min_barrier_kT", "kT")
-	c.criteria.halfLifeRatio = valueOr(k.HalfLifeToShelfLife, defaultHalfLifeRatio, n, "criteria.half_life_to_shelf_life", "")
-	c.criteria.maxRelViscosity = valueOr(k.MaxRelativeViscosity, defaultMaxRelViscosity, n, "criteria.max_relative_viscosity", "")
-	c.criteria.maxStericKT = valueOr(k.MaxStericContactKT, defaultMaxStericKT, n, "criteria.max_steric_contact_kT", "kT")
+	c.criteria.minBarrierKT = valueOr(k.MinBarrierKT, minBarrierDefault, n)
+	c.criteria.halfLifeRatio = valueOr(k.HalfLifeToShelfLife, halfLifeRatioDefault, n)
+	c.criteria.maxRelViscosity = valueOr(k.MaxRelativeViscosity, maxRelViscosityDefault, n)
+	c.criteria.maxStericKT = valueOr(k.MaxStericContactKT, maxStericKTDefault, n)
 }
 
 // day is the length of a day in seconds.

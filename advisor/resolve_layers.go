@@ -63,9 +63,9 @@ func resolveDroplet(p *Particles, c *conditions, n *notes) {
 	if c.phase != "liquid" {
 		return
 	}
-	c.droplet.solubility = valueOr(p.SolubilityMolM3, defaultSolubilityMolM3, n, "particles.solubility_mol_m3", "mol/m^3")
-	c.droplet.molarVolume = valueOr(p.MolarVolumeCm3Mol, defaultMolarVolumeM3*1e6, n, "particles.molar_volume_cm3_mol", "cm^3/mol") * 1e-6
-	c.droplet.tension = valueOr(p.TensionMNm, defaultTensionNm*1e3, n, "particles.interfacial_tension_mN_m", "mN/m") * 1e-3
+	c.droplet.solubility = valueOr(p.SolubilityMolM3, solubilityDefault, n)
+	c.droplet.molarVolume = valueOr(p.MolarVolumeCm3Mol, molarVolumeDefault, n) * 1e-6
+	c.droplet.tension = valueOr(p.TensionMNm, tensionDefault, n) * 1e-3
 	n.add("molecular diffusivity of the dispersed phase in the liquid: %g m^2/s (common practice for small molecules in water)", molecularDiffusivityM2S)
 }
 
