@@ -22,12 +22,10 @@ func stabilityCriterion(ev *evaluation) string {
 	return ev.stabilityText
 }
 
-// shieldedMargin is the margin of a sterically shielded pair: finite, so that
-// root finding across the onset of shielding stays well defined.
-const shieldedMargin = 1000.0
-
 // stabilityMargin is the smaller of the barrier margin (kT) and the
-// half-life margin (decades) of a pair; >= 0 means acceptable.
+// half-life margin (decades) of a pair, or for a pair with steric layers
+// the larger of that and the energy at layer contact (kT; see
+// stabilityMarginSlope); >= 0 means acceptable.
 func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
 	m, _ := stabilityMarginSlope(ev, p, exactLog10W)
 	return m
@@ -124,11 +122,32 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 // minimum). The margin is NaN where log10W is (the peak estimate where it
 // does not apply) and the barrier criterion holds; where it fails, it is
 // the barrier margin.
+//
+// A pair with steric layers is acceptable once they shield it (the energy
+// at layer contact is >= 0, see shielded); its margin is then that contact
+// energy in kT, and short of shielding it is the larger of the contact
+// energy and the DLVO margin. The margin is so continuous across the onset
+// of shielding, where a search would otherwise meet a step, and the
+// contact energy's slope is exact: LogKappaSlope at layer contact.
 func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
-	c := ev.c
-	if shielded(p) {
-		return shieldedMargin, 0
+	if p.StericThickness == 0 {
+		return dlvoMarginSlope(ev, p, log10W)
 	}
+	kT := physics.Boltzmann * ev.c.storageTempK
+	contact := 2 * p.StericThickness
+	byContact, contactSlope := p.Energy(contact)/kT, p.LogKappaSlope(contact)/kT*math.Ln10/2
+	if byContact >= 0 {
+		return byContact, contactSlope
+	}
+	if m, s := dlvoMarginSlope(ev, p, log10W); math.IsNaN(m) || m >= byContact {
+		return m, s
+	}
+	return byContact, contactSlope
+}
+
+// dlvoMarginSlope is stabilityMarginSlope without steric layers.
+func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
+	c := ev.c
 	kT := physics.Boltzmann * c.storageTempK
 	barrier, barrierSlope := 0.0, 0.0
 	b := p.BarrierNear(ev.lastBarrier)
@@ -179,7 +198,9 @@ const ionicStrengthTol = 1e-3
 // both criteria, the barrier and the half-life, below the present one. The
 // margin is the smaller of the two; with no barrier at present, the search
 // starts at physics.CriticalIonicStrength's answer for the barrier
-// criterion.
+// criterion, unless the pair has steric layers, whose contact energy gives
+// the margin a slope at the present ionic strength and may meet the
+// criterion above that answer.
 //
 // The half-life margin is searched on the peak estimate of log10 W
 // (physics.Log10StabilityRatioPeak: 5 energies about the barrier), offset
@@ -197,9 +218,11 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	floor := ionicStrengthFloor(ev)
 	kT := physics.Boltzmann * c.storageTempK
 	top := c.ionicStrength
-	if !ev.hasBarrier {
+	if !ev.hasBarrier && ev.pair.StericThickness == 0 {
 		// No barrier at the present ionic strength: the margin has no slope
 		// there, so the search starts where the barrier meets its criterion.
+		// With steric layers the margin is the contact energy there, which
+		// has a slope, and the layers may shield the pair above that point.
 		I, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT, ev.lastBarrier)
 		switch {
 		case !ok && I == 0:
@@ -465,8 +488,10 @@ const looseFlocBarrierKT = 5.0
 
 func solveControlledFlocculation(ev *evaluation) (Target, string, bool) {
 	kT := physics.Boltzmann * ev.c.storageTempK
+	near := ev.lastBarrier // each barrier is searched from the last one found
 	psi, ok := potentialWhere(ev, func(p physics.Pair) float64 {
-		if b := p.Barrier(); b.Found {
+		if b := p.BarrierNear(near); b.Found {
+			near = b.Separation
 			return b.Energy/kT - looseFlocBarrierKT
 		}
 		return -looseFlocBarrierKT

@@ -108,7 +108,7 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 	t.Parallel()
 	var checked [3]int
 	for _, name := range []string{"electrostatic_screening.json", "electrostatic_screening_2.json",
-		"low_surface_charge.json", "multivalent_ions.json", "multivalent_ions_2.json"} {
+		"low_surface_charge.json", "multivalent_ions.json", "multivalent_ions_2.json", "coalescence.json"} {
 		_, ev := evaluated(t, name)
 		c := ev.c
 		if checkIonicStrengthRoot(t, name, ev) {
@@ -172,6 +172,30 @@ func checkPotentialRoot(t *testing.T, name string, ev *evaluation) bool {
 		t.Errorf("%s: potential %g mV, exact root %g mV", name, psi*1e3, root*1e3)
 	}
 	return true
+}
+
+// TestShieldingMarginIsContinuous: for the emulsion of the coalescence
+// demo (2 nm steric layers, no barrier at -14 mV) the potential target is
+// where the layers start to shield the pair (energy at layer contact 0),
+// and the margin crosses zero there continuously, as the contact energy in
+// kT, instead of stepping from the barrier margin (-15) to a constant.
+func TestShieldingMarginIsContinuous(t *testing.T) {
+	t.Parallel()
+	_, ev := evaluated(t, "coalescence.json")
+	psi, ok := smallestAcceptablePotential(ev)
+	if !ok {
+		t.Fatal("no potential target")
+	}
+	kT := physics.Boltzmann * ev.c.storageTempK
+	for _, f := range []float64{0.999, 1.001} {
+		p := ev.pair
+		p.Potential = math.Copysign(f*psi, ev.pair.Potential)
+		m := stabilityMargin(ev, p)
+		contact := p.Energy(2*p.StericThickness) / kT
+		if m != contact || math.Abs(m) > 0.05 || (m >= 0) != (f > 1) {
+			t.Errorf("|psi| = %g mV: margin %g, contact energy %g kT; want the contact energy, near 0, >= 0 only above the target", f*psi*1e3, m, contact)
+		}
+	}
 }
 
 // TestRemedyWithoutPeakEstimate: FuzzTriage found a sample (a 12 nm median
