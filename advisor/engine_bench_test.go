@@ -3,6 +3,7 @@ package advisor
 import (
 	"encoding/json"
 	"os"
+	"strings"
 	"testing"
 
 	"colloidtriage/rules"
@@ -67,4 +68,23 @@ func BenchmarkTriageTwentyClasses(b *testing.B) {
 			SizeClass{DiameterNm: d50 * (0.3 + 1.4*f), VolumeFraction: 0.05})
 	}
 	benchTriage(b, s)
+}
+
+// BenchmarkTriageDemos triages each single-size demo scenario, one
+// sub-benchmark each: the spread of the single-size target over the
+// complaints the demos cover.
+func BenchmarkTriageDemos(b *testing.B) {
+	entries, err := os.ReadDir("../testdata/demo")
+	if err != nil {
+		b.Fatal(err)
+	}
+	for _, entry := range entries {
+		name, ok := strings.CutSuffix(entry.Name(), ".json")
+		if !ok {
+			continue
+		}
+		if s := benchSample(b, entry.Name()); len(s.Particles.SizeDistribution) == 0 {
+			b.Run(name, func(b *testing.B) { benchTriage(b, s) })
+		}
+	}
 }
