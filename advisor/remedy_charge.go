@@ -385,22 +385,31 @@ func potentialWhere(ev *evaluation, margin func(p physics.Pair) float64) (float6
 	const top, bottom = 0.2, 0.002
 	start := math.Min(math.Max(math.Abs(ev.pair.Potential), 2*bottom), top)
 	lo, hi := start, start
-	if at(start) >= 0 {
-		for lo = start / 1.5; lo > bottom && at(lo) >= 0; lo /= 1.5 {
-			hi = lo
-		}
-		if lo <= bottom {
-			lo = 0
+	mLo := at(start)
+	mHi := mLo
+	if mLo >= 0 {
+		for {
+			if lo /= 1.5; lo <= bottom {
+				lo, mLo = 0, at(0)
+				break
+			}
+			if mLo = at(lo); mLo < 0 {
+				break
+			}
+			hi, mHi = lo, mLo
 		}
 	} else {
-		for hi = math.Min(lo*1.5, top); at(hi) < 0; hi = math.Min(lo*1.5, top) {
-			if hi == top {
-				return 0, false
+		for {
+			if hi = math.Min(lo*1.5, top); hi == lo {
+				return 0, false // not reached at the top
 			}
-			lo = hi
+			if mHi = at(hi); mHi >= 0 {
+				break
+			}
+			lo, mLo = hi, mHi
 		}
 	}
-	return physics.FindRoot(at, lo, hi, potentialTol)
+	return physics.FindRootFrom(at, lo, hi, mLo, mHi, potentialTol)
 }
 
 // potentialTol is the accuracy of potential targets, V.
@@ -462,13 +471,15 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 	}
 	reached := true
 	solve := func(margin func(conc float64) float64) (float64, bool) {
-		if reached = margin(0) >= 0; !reached {
+		without := margin(0)
+		if reached = without >= 0; !reached {
 			return 0, false
 		}
-		if margin(conc) >= 0 {
+		present := margin(conc)
+		if present >= 0 {
 			return conc, true // the present concentration is acceptable
 		}
-		return physics.FindRoot(margin, 0, conc, multivalentTol*c.multivalentConc)
+		return physics.FindRootFrom(margin, 0, conc, without, present, multivalentTol*c.multivalentConc)
 	}
 	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.multivalentConc)
 	conc = math.Max(conc, 0) // a root within the tolerance of none at all

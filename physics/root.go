@@ -13,7 +13,14 @@ import "math"
 // Reference: Dowell & Jarratt, "A modified regula falsi method for
 // computing the root of an equation", BIT 11:168-174 (1971).
 func FindRoot(f func(float64) float64, lo, hi, tol float64) (x float64, ok bool) {
-	a, b, ok := FindRootBracket(f, lo, hi, tol)
+	return FindRootFrom(f, lo, hi, f(lo), f(hi), tol)
+}
+
+// FindRootFrom is FindRoot for a caller that has already evaluated f at the
+// ends, flo = f(lo) and fhi = f(hi), as a search that brackets the root
+// before iterating has: they are not evaluated again.
+func FindRootFrom(f func(float64) float64, lo, hi, flo, fhi, tol float64) (x float64, ok bool) {
+	a, b, ok := findRootBracket(f, lo, hi, flo, fhi, tol)
 	if !ok {
 		return 0, false
 	}
@@ -25,7 +32,10 @@ func FindRoot(f func(float64) float64, lo, hi, tol float64) (x float64, ok bool)
 // (or f vanishes at the point returned at both ends). Callers that need the
 // root on a given side of a criterion take that end.
 func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64, ok bool) {
-	flo, fhi := f(lo), f(hi)
+	return findRootBracket(f, lo, hi, f(lo), f(hi), tol)
+}
+
+func findRootBracket(f func(float64) float64, lo, hi, flo, fhi, tol float64) (a, b float64, ok bool) {
 	if math.IsNaN(flo) || math.IsNaN(fhi) || math.IsInf(flo, 0) || math.IsInf(fhi, 0) {
 		return 0, 0, false
 	}

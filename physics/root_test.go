@@ -25,6 +25,13 @@ func TestFindRoot(t *testing.T) {
 		if !ok || math.Abs(got-c.want) > 1e-10 {
 			t.Errorf("%s: got %v (ok %v), want %v", c.name, got, ok, c.want)
 		}
+		// FindRootFrom, given the ends' values, finds the same root
+		// without evaluating f at either end again.
+		atEnd := false
+		f := func(x float64) float64 { atEnd = atEnd || x == c.lo || x == c.hi; return c.f(x) }
+		if from, _ := FindRootFrom(f, c.lo, c.hi, c.f(c.lo), c.f(c.hi), 1e-12); from != got || atEnd {
+			t.Errorf("%s: FindRootFrom %v (evaluated at an end: %v), want %v", c.name, from, atEnd, got)
+		}
 	}
 	if _, ok := FindRoot(func(x float64) float64 { return x*x + 1 }, -1, 1, 1e-9); ok {
 		t.Error("no bracket must report ok = false")
