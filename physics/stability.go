@@ -125,7 +125,9 @@ func (c *pairCurve) compositeStabilityRatio(barrier Extremum, honig bool) float6
 	weight := func(u float64) float64 { return stabilityWeight(u, honig) }
 	// ref, the exponent factored out, is the highest energy the integral
 	// sees, so that every exponential stays finite even when no barrier was
-	// found in the search range. skipBelow is the exponent under which a
+	// found in the search range; a node above it (a peak narrower than the
+	// extremum scan's spacing, which the scan misses) raises it as the sum
+	// goes. skipBelow is the exponent under which a
 	// part of unit width is negligible against the barrier's contribution,
 	// about weight(u*) times the barrier width; without a barrier nothing is
 	// skipped.
@@ -201,7 +203,13 @@ func (c *pairCurve) compositeStabilityRatio(barrier Extremum, honig bool) float6
 		}
 		for k, x := range rule.x {
 			h := math.Exp(mid + half*x)
-			near += half * rule.w[k] * weight(h/c.radius) * math.Exp(c.energy(h)/c.kT-ref)
+			e := c.energy(h)/c.kT - ref
+			if e > 0 { // above every energy seen so far (a peak narrower than the scan): rescale
+				near *= math.Exp(-e)
+				ref += e
+				e = 0
+			}
+			near += half * rule.w[k] * weight(h/c.radius) * math.Exp(e)
 		}
 	}
 

@@ -143,3 +143,26 @@ func TestStabilityRatioPeakPath(t *testing.T) {
 	}
 	t.Logf("peak path for %d of %d pairs; worst difference %.2g decades", peak, all, worst)
 }
+
+// TestStabilityRatioFiniteAboveTheScan: FuzzPair found a pair (a 75 um
+// sphere at 297 mV in 2.5 M salt, retarded attraction, constant potential,
+// depletion) whose energy peaks at 5235 kT within the first interval of the
+// extremum scan (0.20-0.25 nm), where both scan points are deeply
+// negative: no barrier is found, and the quadrature's exponent, factored
+// out from the energies it knew, overflowed to +Inf. It is now finite, and
+// as large as the missed peak makes it.
+func TestStabilityRatioFiniteAboveTheScan(t *testing.T) {
+	t.Parallel()
+	p := Pair{Radius: 7.476743591872473e-05, Hamaker: 2.991071428571428e-19, Potential: 0.297, Kappa: 5.28e+09,
+		EpsR: 80.6, TempK: 354.9, Retarded: true, ConstantPotential: true,
+		DepletionRange: 5.714285714285712e-07, DepletionDensity: 873.4285714285713}
+	kT := Boltzmann * p.TempK
+	if peak := p.Energy(2.245e-10) / kT; !(peak > 5000) || p.Barrier().Found {
+		t.Fatalf("the case changed: %g kT at 0.2245 nm, barrier found %v", peak, p.Barrier().Found)
+	}
+	for _, honig := range []bool{false, true} {
+		if w := Log10StabilityRatio(p, honig); math.IsInf(w, 0) || math.IsNaN(w) || w < 1000 {
+			t.Errorf("honig=%v: log10 W = %g, want finite and above 1000 (the 5235 kT peak)", honig, w)
+		}
+	}
+}
