@@ -268,10 +268,11 @@ func TestApproachRoot(t *testing.T) {
 }
 
 // TestAnchoredSearchesSweep repeats TestAnchoredSearchesMatchExactRoots for
-// the ionic-strength and potential targets over 192 variants of the
-// salt-limited demo (diameter, zeta, salt and volume fraction), so that the
-// early stops of the searches are held to the exact roots away from the
-// demo too.
+// the ionic-strength and potential targets over 384 variants of the
+// salt-limited demo (diameter, zeta, salt, volume fraction, and no or 1 nm
+// steric layers), so that the early stops of the searches and the margin
+// at the onset of shielding are held to the exact roots away from the demos
+// too.
 func TestAnchoredSearchesSweep(t *testing.T) {
 	t.Parallel()
 	e := benchEngine(t)
@@ -280,25 +281,30 @@ func TestAnchoredSearchesSweep(t *testing.T) {
 		for _, zeta := range []float64{15, 25, 45, 70} {
 			for _, salt := range []float64{1, 10, 60, 200} {
 				for _, phi := range []float64{0.001, 0.02, 0.2} {
-					s := benchSample(t, "electrostatic_screening.json")
-					s.Particles.DiameterNm, s.Particles.ZetaMV, s.Particles.VolumeFraction = &d, &zeta, &phi
-					s.Medium.Electrolytes[0].ConcentrationMM = &salt
-					ev, err := e.evaluate(s)
-					if err != nil {
-						t.Fatal(err)
-					}
-					name := fmt.Sprintf("d %g nm, zeta %g mV, %g mM, phi %g", d, zeta, salt, phi)
-					if checkIonicStrengthRoot(t, name, ev) {
-						ionic++
-					}
-					if checkPotentialRoot(t, name, ev) {
-						potential++
+					for _, layer := range []float64{0, 1} {
+						s := benchSample(t, "electrostatic_screening.json")
+						s.Particles.DiameterNm, s.Particles.ZetaMV, s.Particles.VolumeFraction = &d, &zeta, &phi
+						s.Medium.Electrolytes[0].ConcentrationMM = &salt
+						if layer > 0 {
+							s.Stabilizer = &Stabilizer{LayerThicknessNm: &layer}
+						}
+						ev, err := e.evaluate(s)
+						if err != nil {
+							t.Fatal(err)
+						}
+						name := fmt.Sprintf("d %g nm, zeta %g mV, %g mM, phi %g, layers %g nm", d, zeta, salt, phi, layer)
+						if checkIonicStrengthRoot(t, name, ev) {
+							ionic++
+						}
+						if checkPotentialRoot(t, name, ev) {
+							potential++
+						}
 					}
 				}
 			}
 		}
 	}
-	if ionic < 50 || potential < 150 {
+	if ionic < 100 || potential < 300 {
 		t.Errorf("only %d ionic-strength and %d potential targets checked", ionic, potential)
 	}
 }
