@@ -124,11 +124,12 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 // the barrier margin.
 //
 // A pair with steric layers is acceptable once they shield it (the energy
-// at layer contact is >= 0, see shielded); its margin is then that contact
-// energy in kT, and short of shielding it is the larger of the contact
-// energy and the DLVO margin. The margin is so continuous across the onset
-// of shielding, where a search would otherwise meet a step, and the
-// contact energy's slope is exact: LogKappaSlope at layer contact.
+// at layer contact is >= 0, see shielded), so its margin is the larger of
+// that contact energy in kT and the DLVO margin, shielded or not (a NaN
+// DLVO estimate counts as lower when the pair is shielded). The margin is
+// so continuous across the onset of shielding, where a search would
+// otherwise meet a step, and the contact energy's slope is exact:
+// LogKappaSlope at layer contact.
 func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
 	if p.StericThickness == 0 {
 		return dlvoMarginSlope(ev, p, log10W)
@@ -136,13 +137,14 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 	kT := physics.Boltzmann * ev.c.storageTempK
 	contact := 2 * p.StericThickness
 	byContact, contactSlope := p.Energy(contact)/kT, p.LogKappaSlope(contact)/kT*math.Ln10/2
-	if byContact >= 0 {
+	m, s := dlvoMarginSlope(ev, p, log10W)
+	switch {
+	case m >= byContact:
+		return m, s
+	case byContact >= 0 || !math.IsNaN(m):
 		return byContact, contactSlope
 	}
-	if m, s := dlvoMarginSlope(ev, p, log10W); math.IsNaN(m) || m >= byContact {
-		return m, s
-	}
-	return byContact, contactSlope
+	return m, s // NaN short of shielding: the search falls back to the quadrature
 }
 
 // dlvoMarginSlope is stabilityMarginSlope without steric layers.
@@ -157,7 +159,7 @@ func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, s
 		ev.lastBarrier = b.Separation
 	}
 	byBarrier := barrier - c.criteria.minBarrierKT
-	if !b.Found {
+	if !b.Found && byBarrier < 0 {
 		return byBarrier, barrierSlope
 	}
 	w := log10W(p, b)
@@ -206,12 +208,12 @@ const ionicStrengthTol = 1e-3
 // (physics.Log10StabilityRatioPeak: 5 energies about the barrier), offset
 // by its gap to the quadrature at the last exact point (none at first; the
 // gap is within 2e-4 decades for barriers of 15 kT and more, against the
-// margin's 0.004-decade window). Newton steps approach the root of the
-// estimated margin to between half and three quarters of the tolerance
-// into the acceptable side (approachRoot); the point is checked by the
-// quadrature: it is the answer when its exact margin is >= 0 and within the
-// tolerance of the root (by the local slope); otherwise the gap is renewed
-// there and the search repeated. A few rounds without an answer fall back
+// margin's 0.004-decade window). Newton steps aim at the root of the
+// estimated margin shifted 5/8 of the tolerance into the acceptable side
+// (approachRoot, which stops within about 1/8 of the tolerance of that
+// aim); the point is checked by the quadrature: it is the answer when its
+// exact margin is >= 0 and within the tolerance of the root (by the local
+// slope); otherwise the gap is renewed there and the search repeated. A few rounds without an answer fall back
 // to Newton steps on the exact margin.
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
@@ -273,14 +275,15 @@ search:
 // [lo, hi], on a decreasing margin f from x. It returns the first point
 // whose Newton step to the root is shorter than tol, or the point one step
 // on when the step after that, predicted from the contraction of the last
-// two (Newton's quadratic convergence: the next step is about
-// step^3/previous^2), is shorter than tol; or hi when f >= 0 there. found
+// two full (unclamped) steps (Newton's quadratic convergence: the next step
+// is about step^3/previous^2; optimistic for secant slopes, which is why
+// the caller checks), is shorter than tol; or hi when f >= 0 there. found
 // is false at a NaN, a slope that is not negative, a step stopped by lo,
 // or after 12 steps: the caller's checked search then decides. Unlike
 // physics.FindRootNewton it does not close a bracket: the point it returns
 // is checked by the quadrature anyway.
 func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (root float64, found bool) {
-	previous := 0.0 // no step taken yet
+	previous := 0.0 // the last Newton step, when it was taken in full
 	for range 12 {
 		m, slope := f(x)
 		step := -m / slope
@@ -298,10 +301,15 @@ func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (r
 		if next == x {
 			return x, false
 		}
-		if a := math.Abs(step); previous != 0 && next == x+step && a < math.Abs(previous)/2 && a*a*a/(previous*previous) < tol {
+		unclamped := next == x+step
+		if a := math.Abs(step); unclamped && previous != 0 && a < math.Abs(previous)/2 && a*a*a/(previous*previous) < tol {
 			return next, true
 		}
-		x, previous = next, step
+		previous = 0 // a clamped step says nothing of the convergence
+		if unclamped {
+			previous = step
+		}
+		x = next
 	}
 	return x, false
 }
@@ -499,7 +507,10 @@ const looseFlocBarrierKT = 5.0
 
 func solveControlledFlocculation(ev *evaluation) (Target, string, bool) {
 	kT := physics.Boltzmann * ev.c.storageTempK
-	near := ev.lastBarrier // each barrier is searched from the last one found
+	// Each barrier is searched from the last one found (Pair.BarrierNear, as
+	// in stabilityMarginSlope): the maximum reached from there, which for a
+	// curve with two maxima need not be Pair.Barrier's highest.
+	near := ev.lastBarrier
 	psi, ok := potentialWhere(ev, func(p physics.Pair) float64 {
 		if b := p.BarrierNear(near); b.Found {
 			near = b.Separation

@@ -198,6 +198,35 @@ func TestShieldingMarginIsContinuous(t *testing.T) {
 	}
 }
 
+// TestZeroBarrierCriterionKeepsHalfLife: with criteria.min_barrier_kT = 0
+// a pair without a barrier still has to meet the half-life criterion, so
+// its margin is negative and the potential target lies above the present
+// zeta (the salt-limited demo at 20 mV: 61.2 mV before the margin's
+// rewrite, 0 mV while it counted "no barrier" as meeting a zero criterion).
+func TestZeroBarrierCriterionKeepsHalfLife(t *testing.T) {
+	t.Parallel()
+	e := benchEngine(t)
+	s := benchSample(t, "electrostatic_screening.json")
+	zeta, zero := 20.0, 0.0
+	s.Particles.ZetaMV = &zeta
+	s.Criteria = &Criteria{MinBarrierKT: &zero}
+	ev, err := e.evaluate(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if ev.hasBarrier {
+		t.Fatal("the case changed: the pair has a barrier")
+	}
+	if m := stabilityMargin(ev, ev.pair); !(m < 0) {
+		t.Errorf("margin without a barrier = %g, want < 0 (the half-life fails)", m)
+	}
+	if psi, ok := smallestAcceptablePotential(ev); !ok || math.Abs(psi*1e3-61.2) > 0.1 {
+		t.Errorf("potential target %g mV (%v), want 61.2 mV", psi*1e3, ok)
+	}
+	checkIonicStrengthRoot(t, "min_barrier_kT 0", ev)
+	checkPotentialRoot(t, "min_barrier_kT 0", ev)
+}
+
 // TestRemedyWithoutPeakEstimate: FuzzTriage found a sample (a 12 nm median
 // in 60 mM salt) where the peak estimate of W does not apply at some point
 // of a remedy search, whose NaN reached the half-life and panicked; the
@@ -252,6 +281,18 @@ func TestApproachRoot(t *testing.T) {
 	counted := func(x float64) (float64, float64) { evaluations++; return cube(x) }
 	if x, _ := approachRoot(counted, 1, 0.1, 3, 1e-6); evaluations != 4 || math.Abs(x-root) > 1e-9 {
 		t.Errorf("from 1: %g after %d evaluations; want %g within 1e-9 after 4", x, evaluations, root)
+	}
+	// A step clamped to a decade says nothing of the convergence: from 3
+	// on a margin nearly flat above 2, the first step is clamped and the
+	// second (-0.63) must not be taken for the last.
+	kinked := func(x float64) (float64, float64) {
+		if x > 2 {
+			return 1 - math.E - 1e-3*(x-2), -1e-3
+		}
+		return 1 - math.Exp(x-1), -math.Exp(x - 1)
+	}
+	if x, ok := approachRoot(kinked, 3, 0, 3, 1e-6); !ok || math.Abs(x-1) > 2e-6 {
+		t.Errorf("after a clamped step: %g, %v; want 1 within 2e-6", x, ok)
 	}
 	if x, ok := approachRoot(cube, 1, 0.1, 1.1, 1e-6); !ok || x != 1.1 {
 		t.Errorf("acceptable at the upper end: %g, %v; want 1.1, true", x, ok)

@@ -110,7 +110,9 @@ func FindRootNewton(f func(float64) (float64, float64), x0, lo, hi, slopeSign, m
 			dir = -slopeSign
 		}
 		step := maxStep
-		if newton := -fx / dfx; newton*dir > 0 && newton < math.Inf(1) && newton > math.Inf(-1) {
+		// At an exact root (fx = 0, a Newton step of -0) the other end lies
+		// a lengthened zero step away.
+		if newton := -fx / dfx; (newton*dir > 0 || fx == 0) && newton < math.Inf(1) && newton > math.Inf(-1) {
 			step = math.Min(overshoot(math.Abs(newton), tol), maxStep)
 		}
 		next := math.Min(math.Max(x+dir*step, lo), hi)

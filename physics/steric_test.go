@@ -188,6 +188,28 @@ func TestMinimumStericThicknessEdges(t *testing.T) {
 	physics.MinimumStericThickness(none, 298.15, 0)
 }
 
+// TestMinimumStericThicknessEvaluations: the search takes about 8 energies
+// over the grid of Hamaker constants, radii and allowances, also where an
+// iterate lands on the root exactly (a 10 um sphere, A = 3e-19 J, 3 kT,
+// retarded: FindRootNewton's zero step used to send it 2 units away and
+// cost 32 energies).
+func TestMinimumStericThicknessEvaluations(t *testing.T) {
+	t.Parallel()
+	for _, hamaker := range []float64{1e-20, 5e-20, 1e-19, 3e-19} {
+		for _, radius := range []float64{100e-9, 1e-6, 10e-6} {
+			for _, allowed := range []float64{0.5, 1, 3} {
+				p := physics.Pair{Radius: radius, Hamaker: hamaker, Retarded: true, TempK: 298.15, EpsR: 78.4}
+				energy, evaluations := p.EnergyCurve(), 0
+				counted := func(h float64) float64 { evaluations++; return energy(h) }
+				physics.MinimumStericThickness(counted, 298.15, allowed)
+				if evaluations > 12 {
+					t.Errorf("A = %g J, a = %g m, %g kT: %d energies, want at most 12", hamaker, radius, allowed, evaluations)
+				}
+			}
+		}
+	}
+}
+
 func BenchmarkMinimumStericThickness(b *testing.B) {
 	vdw := beyondHamakerSpheres(1e-20, 100e-9)
 	for b.Loop() {
