@@ -213,8 +213,8 @@ const ionicStrengthTol = 1e-3
 // (approachRoot, which stops within about 1/8 of the tolerance of that
 // aim); the point is checked by the quadrature: it is the answer when its
 // exact margin is >= 0 and within the tolerance of the root (by the local
-// slope); otherwise the gap is renewed there and the search repeated. A few rounds without an answer fall back
-// to Newton steps on the exact margin.
+// slope); otherwise the gap is renewed there and the search repeated. A few
+// rounds without an answer fall back to Newton steps on the exact margin.
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 	c := ev.c
 	floor := ionicStrengthFloor(ev)

@@ -27,14 +27,9 @@ func FindRootFrom(f func(float64) float64, lo, hi, flo, fhi, tol float64) (x flo
 	return (a + b) / 2, true
 }
 
-// FindRootBracket is FindRoot that returns the final bracket instead of one
-// point: f(a) has the sign of f(lo) and f(b) that of f(hi), |b - a| < tol
-// (or f vanishes at the point returned at both ends). Callers that need the
-// root on a given side of a criterion take that end.
-func FindRootBracket(f func(float64) float64, lo, hi, tol float64) (a, b float64, ok bool) {
-	return findRootBracket(f, lo, hi, f(lo), f(hi), tol)
-}
-
+// findRootBracket is the Illinois iteration of FindRootFrom, returning the
+// final bracket: f(a) has the sign of f(lo) and f(b) that of f(hi),
+// |b - a| < tol (or f vanishes at the point returned at both ends).
 func findRootBracket(f func(float64) float64, lo, hi, flo, fhi, tol float64) (a, b float64, ok bool) {
 	if math.IsNaN(flo) || math.IsNaN(fhi) || math.IsInf(flo, 0) || math.IsInf(fhi, 0) {
 		return 0, 0, false

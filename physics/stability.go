@@ -127,10 +127,9 @@ func (c *pairCurve) compositeStabilityRatio(barrier Extremum, honig bool) float6
 	// sees, so that every exponential stays finite even when no barrier was
 	// found in the search range; a node above it (a peak narrower than the
 	// extremum scan's spacing, which the scan misses) raises it as the sum
-	// goes. skipBelow is the exponent under which a
-	// part of unit width is negligible against the barrier's contribution,
-	// about weight(u*) times the barrier width; without a barrier nothing is
-	// skipped.
+	// goes. skipBelow is the exponent under which a part of unit width is
+	// negligible against the barrier's contribution, about weight(u*) times
+	// the barrier width; without a barrier nothing is skipped.
 	ref := math.Max(0, c.energy(lo)/c.kT)
 	skipBelow := math.Inf(-1)
 	var sBarrier, width float64
