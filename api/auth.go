@@ -85,5 +85,5 @@ func anyKeyMatches(presented []string, digests [][sha256.Size]byte) bool {
 // RFC 6750 error attribute for a key that was sent but is wrong.
 func unauthorized(c echo.Context, detail, errorParam string) error {
 	c.Response().Header().Set(echo.HeaderWWWAuthenticate, bearerChallenge+errorParam)
-	return newProblem(http.StatusUnauthorized, typeUnauthorized, "Missing or invalid API key", detail)
+	return fail(keyRejected, detail)
 }

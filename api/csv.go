@@ -19,8 +19,6 @@ import (
 	"colloidtriage/advisor"
 )
 
-const typeInvalidCSV = "/problems/invalid-csv"
-
 // csvDialect is a CSV file's field delimiter and decimal separator.
 type csvDialect struct {
 	delimiter, decimal rune
@@ -39,8 +37,7 @@ func (d csvDialect) delimiterName() string {
 // range) each missing one is taken from def.
 func csvDialectOf(params map[string]string, def *csvDialect) (csvDialect, error) {
 	bad := func(detail string) (csvDialect, error) {
-		return csvDialect{}, newProblem(http.StatusUnsupportedMediaType, typeInvalidCSV,
-			"The CSV media type is incomplete or invalid",
+		return csvDialect{}, fail(csvMediaType,
 			detail+`; declare it as text/csv; header=present; delimiter=";"; decimal=","`)
 	}
 	var d csvDialect
@@ -200,7 +197,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 	r.FieldsPerRecord = -1
 	header, err := r.Read()
 	if errors.Is(err, io.EOF) {
-		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV body is empty",
+		return nil, fail(csvEmpty,
 			"the first row must be the header naming the columns")
 	}
 	if err != nil {
@@ -230,7 +227,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 			}
 		}
 		if len(rec) != len(cols) {
-			e.err = newProblem(http.StatusBadRequest, typeInvalidCSV, "A row has the wrong number of fields",
+			e.err = fail(csvRowLength,
 				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
 				advisor.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
 		} else {
@@ -269,7 +266,7 @@ func csvHeader(header []string) ([]csvColumn, int, error) {
 		}
 	}
 	if len(problems) > 0 {
-		return nil, 0, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV header names unknown or repeated columns",
+		return nil, 0, fail(csvHeaderInvalid,
 			"no row was read; columns are the JSON fields of a sample as dotted paths (see /openapi.json)", problems...)
 	}
 	return cols, idCol, nil
@@ -292,7 +289,7 @@ func csvSyntaxProblem(err error) error {
 	if errors.As(err, &pe) {
 		detail = fmt.Sprintf("line %d, column %d: %v", pe.Line, pe.Column, pe.Err)
 	}
-	return newProblem(http.StatusBadRequest, typeInvalidCSV, "The body is not valid CSV", detail)
+	return fail(csvSyntax, detail)
 }
 
 func allEmpty(rec []string) bool {
@@ -322,7 +319,7 @@ func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 		setPath(root, cols[j].path, v)
 	}
 	if len(problems) > 0 {
-		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "A cell does not parse",
+		return nil, fail(csvCellInvalid,
 			fmt.Sprintf("%d cell(s) are not of their column's type", len(problems)), problems...)
 	}
 	return json.Marshal(root)

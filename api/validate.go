@@ -113,7 +113,7 @@ func (sv *sampleValidator) validate(s *advisor.Sample) error {
 		rule := sv.rules[index.ReplaceAllString("/"+strings.ReplaceAll(ns, ".", "/"), "/*")]
 		fields = append(fields, advisor.FieldProblem{Pointer: ptr, Reason: reason(fe), Unit: rule.unit, Valid: rule.valid})
 	}
-	return newProblem(422, typeInvalidSample, "The sample has invalid fields",
+	return fail(fieldsInvalid,
 		fmt.Sprintf("%d field(s) out of range or missing", len(fields)), fields...)
 }
 
