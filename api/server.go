@@ -43,7 +43,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 
 	// Authentication is route middleware, not group middleware: a group with
 	// middleware adds catch-all routes that would turn 405s into 404s.
-	auth := apiKeyAuth(cfg.APIKeys)
+	auth := keyAuthWithConfig(keyAuthConfig{Keys: cfg.APIKeys})
 	limit := middleware.BodyLimit(cfg.BodyLimit)
 	e.GET("/openapi.json", h.openAPI, auth)
 	v1 := e.Group("/v1")
