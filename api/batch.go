@@ -18,8 +18,8 @@ import (
 	"colloidtriage/advisor"
 )
 
-// batchBodyLimit is the body limit of the batch route: maxBatchSamples
-// samples of a few kilobytes each, with room to spare.
+// batchBodyLimit is the body limit of the batch route, 64,000,000 bytes:
+// maxBatchSamples samples of a few kilobytes each, with room to spare.
 const batchBodyLimit = "64M"
 
 // maxBatchSamples is the most samples one batch may hold, in any of its

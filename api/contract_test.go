@@ -25,6 +25,7 @@ import (
 	"github.com/getkin/kin-openapi/routers"
 	"github.com/getkin/kin-openapi/routers/gorillamux"
 	"github.com/labstack/echo/v4"
+	gommonbytes "github.com/labstack/gommon/bytes"
 	"gopkg.in/yaml.v3"
 
 	"colloidtriage/advisor"
@@ -1065,4 +1066,33 @@ func TestContractProblemTypes(t *testing.T) {
 		}
 	}
 	sameSet(t, "Problem.type", enumStrings(t, c.schema(t, "Problem").Properties["type"].Value), used)
+}
+
+// TestContractBodyLimits: each route's documented body limit is the byte
+// count the code sets, written out in full.
+func TestContractBodyLimits(t *testing.T) {
+	t.Parallel()
+	c := contractDoc(t)
+	written := func(limit string) string {
+		n, err := gommonbytes.Parse(limit)
+		if err != nil {
+			t.Fatal(err)
+		}
+		s := strconv.FormatInt(n, 10)
+		for i := len(s) - 3; i > 0; i -= 3 {
+			s = s[:i] + "," + s[i:]
+		}
+		return s + " bytes"
+	}
+	single, batch := written(DefaultConfig.BodyLimit), written(batchBodyLimit)
+	for path, want := range map[string]string{"/v1/triage": single, "/v1/scales": single,
+		"/v1/interaction-profile": single, "/v1/triage/batch": batch} {
+		if d := c.doc.Paths.Find(path).Post.Description; !strings.Contains(d, "Body limit "+want+".") {
+			t.Errorf("%s: the description does not state the body limit %s", path, want)
+		}
+	}
+	tooLarge := strings.Join(strings.Fields(*c.doc.Components.Responses["PayloadTooLarge"].Value.Description), " ")
+	if !strings.Contains(tooLarge, single) || !strings.Contains(tooLarge, batch) {
+		t.Errorf("PayloadTooLarge does not state the limits %s and %s: %q", single, batch, tooLarge)
+	}
 }
