@@ -50,12 +50,12 @@ func unmarshalStrict(body []byte, v any) error {
 	dec := json.NewDecoder(bytes.NewReader(body))
 	dec.DisallowUnknownFields()
 	if err := dec.Decode(v); err != nil {
-		return jsonProblem(err, body, reflect.TypeOf(v))
+		return jsonProblem(err, body, contractOf(reflect.TypeOf(v)))
 	}
 	if rest := bytes.TrimSpace(body[dec.InputOffset():]); len(rest) > 0 {
 		return fail(jsonInvalid, "unexpected data after the JSON value")
 	}
-	if p, bad := checkMembers(body, reflect.TypeOf(v)); bad {
+	if p, bad := checkMembers(body, contractOf(reflect.TypeOf(v))); bad {
 		return fail(memberOffContract, p.reason,
 			advisor.FieldProblem{Pointer: p.pointer, Reason: p.reason})
 	}
@@ -64,7 +64,7 @@ func unmarshalStrict(body []byte, v any) error {
 
 // jsonProblem explains a decoding error with the field as a JSON pointer,
 // found by walking the body against target when encoding/json does not say.
-func jsonProblem(err error, body []byte, target reflect.Type) error {
+func jsonProblem(err error, body []byte, target *node) error {
 	var syn *json.SyntaxError
 	var typ *json.UnmarshalTypeError
 	switch {
@@ -96,7 +96,7 @@ func jsonProblem(err error, body []byte, target reflect.Type) error {
 }
 
 // locateIn decodes body generically and locates its first misfit for target.
-func locateIn(body []byte, target reflect.Type) (pointer, expected string, ok bool) {
+func locateIn(body []byte, target *node) (pointer, expected string, ok bool) {
 	dec := json.NewDecoder(bytes.NewReader(body))
 	dec.UseNumber()
 	var v any
