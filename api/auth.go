@@ -16,16 +16,25 @@ const apiKeyHeader = "X-API-Key"
 // bearerChallenge is the WWW-Authenticate challenge of a 401 (RFC 6750 §3).
 const bearerChallenge = `Bearer realm="colloidtriage"`
 
-// apiKeyAuth admits a request that presents one of keys, as
-// "Authorization: Bearer <key>" or "X-API-Key: <key>". With no keys it is
-// off. Blank keys are ignored, so an empty line in a key file never admits
-// an empty credential.
+// keyAuthConfig configures API-key authentication.
+type keyAuthConfig struct {
+	// Keys are the admitted API keys. Blank keys are ignored, so an empty
+	// line in a key file never admits an empty credential; with no key the
+	// middleware admits every request.
+	Keys []string
+}
+
+// keyAuthWithConfig admits a request that presents one of cfg.Keys, as
+// "Authorization: Bearer <key>" or "X-API-Key: <key>", and answers any
+// other with a 401 problem and a Bearer challenge.
 //
 // Keys are compared as SHA-256 digests with crypto/subtle, against every
 // configured key without stopping at a match: the time taken tells neither
 // how much of a key was right, nor its length, nor which key matched.
-func apiKeyAuth(keys []string) echo.MiddlewareFunc {
-	digests := keyDigests(keys)
+// echo's KeyAuth stops at the first match and reads every Authorization
+// header, so it does not do this job.
+func keyAuthWithConfig(cfg keyAuthConfig) echo.MiddlewareFunc {
+	digests := keyDigests(cfg.Keys)
 	if len(digests) == 0 {
 		return func(next echo.HandlerFunc) echo.HandlerFunc { return next }
 	}
@@ -85,5 +94,5 @@ func anyKeyMatches(presented []string, digests [][sha256.Size]byte) bool {
 // RFC 6750 error attribute for a key that was sent but is wrong.
 func unauthorized(c echo.Context, detail, errorParam string) error {
 	c.Response().Header().Set(echo.HeaderWWWAuthenticate, bearerChallenge+errorParam)
-	return newProblem(http.StatusUnauthorized, typeUnauthorized, "Missing or invalid API key", detail)
+	return fail(keyRejected, detail)
 }

@@ -18,8 +18,8 @@ import (
 	"colloidtriage/advisor"
 )
 
-// batchBodyLimit is the body limit of the batch route: maxBatchSamples
-// samples of a few kilobytes each, with room to spare.
+// batchBodyLimit is the body limit of the batch route, 64,000,000 bytes:
+// maxBatchSamples samples of a few kilobytes each, with room to spare.
 const batchBodyLimit = "64M"
 
 // maxBatchSamples is the most samples one batch may hold, in any of its
@@ -31,12 +31,6 @@ const maxBatchSamples = 5000
 const (
 	mimeNDJSON = "application/x-ndjson"
 	mimeCSV    = "text/csv"
-)
-
-// Problem types of the batch route.
-const (
-	typeInvalidBatch  = "/problems/invalid-batch"
-	typeBatchTooLarge = "/problems/batch-too-large"
 )
 
 // statusClientClosedRequest records a batch abandoned because the client
@@ -91,7 +85,7 @@ type batchRequest struct {
 func (h *handlers) batch(c echo.Context) error {
 	mt, params, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
 	if err != nil || (mt != echo.MIMEApplicationJSON && mt != mimeNDJSON && mt != mimeCSV) {
-		return newProblem(http.StatusUnsupportedMediaType, "about:blank", "Unsupported media type",
+		return fail(mediaUnsupported,
 			"send the batch as application/json, application/x-ndjson or text/csv")
 	}
 	var inDialect *csvDialect
@@ -115,7 +109,7 @@ func (h *handlers) batch(c echo.Context) error {
 		return err
 	}
 	if len(entries) > maxBatchSamples {
-		return newProblem(http.StatusRequestEntityTooLarge, typeBatchTooLarge, "Too many samples in one batch",
+		return fail(batchTooLarge,
 			fmt.Sprintf("the batch holds more than %d samples; split it into several requests", maxBatchSamples))
 	}
 	ctx := c.Request().Context()
@@ -159,7 +153,7 @@ func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBas
 }
 
 func readBatchBody(c echo.Context) ([]byte, error) {
-	body, err := readBody(c, typeInvalidBatch)
+	body, err := readBody(c, batchUnreadable)
 	if err != nil {
 		return nil, err
 	}
@@ -178,7 +172,7 @@ func jsonEntries(body []byte) ([]batchEntry, error) {
 		return nil, err
 	}
 	if req.Samples == nil {
-		return nil, newProblem(http.StatusBadRequest, typeInvalidBatch, "The batch has no samples field",
+		return nil, fail(samplesMissing,
 			`send {"samples": [sample, ...]}`, advisor.FieldProblem{Pointer: "/samples", Reason: "required"})
 	}
 	entries := make([]batchEntry, len(*req.Samples))
@@ -280,7 +274,7 @@ func notAnObject(raw []byte) error {
 	if t := bytes.TrimSpace(raw); len(t) > 0 && t[0] == '{' {
 		return nil
 	}
-	return newProblem(http.StatusBadRequest, typeInvalidJSON, "A sample is not a JSON object",
+	return fail(sampleNotObject,
 		"each sample must be a JSON object", advisor.FieldProblem{Pointer: "", Reason: "wrong type: expected object"})
 }
 
@@ -360,14 +354,13 @@ func negotiateBatch(accept, inType string, inDialect *csvDialect) (batchOutput, 
 		}
 	}
 	if best == "" {
-		return batchOutput{}, newProblem(http.StatusNotAcceptable, "about:blank", "Not acceptable",
+		return batchOutput{}, fail(mediaNotAcceptable,
 			"the batch answers as application/json, application/x-ndjson or text/csv")
 	}
 	if best == mimeCSV {
 		d, err := csvDialectOf(bestParams, &dialect)
 		if err != nil {
-			return batchOutput{}, newProblem(http.StatusNotAcceptable, typeInvalidCSV, "Not acceptable",
-				problemFor(err).Detail)
+			return batchOutput{}, fail(csvNotAcceptable, problemFor(err).Detail)
 		}
 		dialect = d
 	}

@@ -6,9 +6,6 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
-	"go/ast"
-	"go/parser"
-	"go/token"
 	"io"
 	"maps"
 	"net/http"
@@ -28,6 +25,7 @@ import (
 	"github.com/getkin/kin-openapi/routers"
 	"github.com/getkin/kin-openapi/routers/gorillamux"
 	"github.com/labstack/echo/v4"
+	gommonbytes "github.com/labstack/gommon/bytes"
 	"gopkg.in/yaml.v3"
 
 	"colloidtriage/advisor"
@@ -708,195 +706,136 @@ func objectParts(s *openapi3.Schema) []*openapi3.Schema {
 	return out
 }
 
-// TestContractSampleFields: every field of advisor.Sample is in the
-// document with its type, its unit and exactly the range, enum, length,
-// item limits and requiredness of its validate tag, no other field is, and
-// every request object refuses unknown members as the decoder does.
+// TestContractSampleFields: every member of the sample's contract (read
+// from advisor.Sample's tags) is in the document with its type, unit,
+// range, enum, length, item limits and requiredness, no other member is,
+// and every request object refuses unknown members as the decoder does.
 func TestContractSampleFields(t *testing.T) {
 	t.Parallel()
-	c := contractDoc(t)
-	checkStruct(t, reflect.TypeOf(advisor.Sample{}), c.schema(t, "Sample"), "")
+	checkObject(t, contractOf(reflect.TypeOf(advisor.Sample{})), contractDoc(t).schema(t, "Sample"), "")
 }
 
-func checkStruct(t *testing.T, typ reflect.Type, s *openapi3.Schema, at string) {
+// fixed is what the contract fixes about one member, written alike for
+// the code and for the document so that the two compare as values.
+type fixed struct {
+	Type, Min, Max, Enum, Unit, MaxLength, MinItems, MaxItems, Alternative string
+	Required                                                               bool
+}
+
+func checkObject(t *testing.T, n *node, s *openapi3.Schema, at string) {
 	t.Helper()
 	props := map[string]*openapi3.Schema{}
 	required := map[string]bool{}
-	var alternatives [][]string
+	docAlt, codeAlt := map[string]string{}, map[string]string{}
 	for _, part := range objectParts(s) {
 		if len(part.Properties) > 0 && (part.AdditionalProperties.Has == nil || *part.AdditionalProperties.Has) {
-			t.Errorf("%s: additionalProperties must be false, the decoder refuses unknown members", at+"/")
+			t.Errorf("%s/: additionalProperties must be false, the decoder refuses unknown members", at)
 		}
-		for n, p := range part.Properties {
-			props[n] = p.Value
+		for name, p := range part.Properties {
+			props[name] = p.Value
 		}
 		for _, r := range part.Required {
 			required[r] = true
 		}
-		for _, alt := range part.AnyOf {
-			alternatives = append(alternatives, alt.Value.Required)
-		}
-	}
-	seen := map[string]bool{}
-	for i := range typ.NumField() {
-		f := typ.Field(i)
-		name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
-		seen[name] = true
-		p := props[name]
-		if p == nil {
-			t.Errorf("%s/%s: not in the document", at, name)
-			continue
-		}
-		tag := parseValidateTag(f.Tag.Get("validate"))
-		ft := f.Type
-		if ft.Kind() == reflect.Pointer {
-			ft = ft.Elem()
-		}
-		wantRequired := tag["required"] != "" || (f.Type.Kind() == reflect.Struct && needsMember(f.Type)) ||
-			zeroIsOutOfRange(f.Type, tag)
-		if required[name] != wantRequired {
-			t.Errorf("%s/%s: required %v in the document, %v in the code", at, name, required[name], wantRequired)
-		}
-		if other := tag["required_without"]; other != "" {
-			of, _ := typ.FieldByName(other)
-			otherName, _, _ := strings.Cut(of.Tag.Get("json"), ",")
-			if !slices.ContainsFunc(alternatives, func(r []string) bool { return slices.Equal(r, []string{name}) }) ||
-				!slices.ContainsFunc(alternatives, func(r []string) bool { return slices.Equal(r, []string{otherName}) }) {
-				t.Errorf("%s/%s: the document must require it or %s (anyOf)", at, name, otherName)
+		for _, a := range part.AnyOf {
+			for _, b := range part.AnyOf {
+				if a != b && len(a.Value.Required) == 1 && len(b.Value.Required) == 1 {
+					docAlt[a.Value.Required[0]] = b.Value.Required[0]
+				}
 			}
 		}
-		checkField(t, ft, p, tag, f.Tag.Get("unit"), at+"/"+name)
 	}
-	for n := range props {
-		if !seen[n] {
-			t.Errorf("%s/%s: in the document, not in the code", at, n)
+	for _, name := range n.names {
+		if alt := n.members[name].alternative; alt != "" {
+			codeAlt[name], codeAlt[alt] = alt, name
+		}
+	}
+	for _, name := range n.names {
+		m, p, where := n.members[name], props[name], at+"/"+name
+		if p == nil {
+			t.Errorf("%s: not in the document", where)
+			continue
+		}
+		if doc, code := documented(t, p, required[name], docAlt[name]), coded(m, codeAlt[name]); doc != code {
+			t.Errorf("%s:\n document %+v\n code     %+v", where, doc, code)
+		}
+		if (m.kind == reflect.Float64 || m.kind == reflect.Int) && m.unit == "" {
+			t.Errorf("%s: a number without a unit tag", where)
+		}
+		if m.unit != "" && !strings.Contains(p.Description, "Unit: "+m.unit) {
+			t.Errorf("%s: the description %q does not state the unit %s", where, p.Description, m.unit)
+		}
+		switch {
+		case m.kind == reflect.Struct:
+			checkObject(t, m, p, where)
+		case m.kind == reflect.Slice && m.elem.kind == reflect.Struct && p.Items != nil:
+			checkObject(t, m.elem, p.Items.Value, where+"/*")
+		}
+	}
+	for name := range props {
+		if n.members[name] == nil {
+			t.Errorf("%s/%s: in the document, not in the code", at, name)
 		}
 	}
 }
 
-// needsMember reports whether a struct has a field the validator requires,
-// which makes a non-pointer member of that type required in practice.
-func needsMember(typ reflect.Type) bool {
-	for i := range typ.NumField() {
-		if tag := parseValidateTag(typ.Field(i).Tag.Get("validate")); tag["required"] != "" || tag["required_without"] != "" {
-			return true
+// coded is what the tags behind n fix.
+func coded(n *node, alternative string) fixed {
+	f := fixed{Unit: n.unit, Required: n.required, Alternative: alternative,
+		Type: map[reflect.Kind]string{reflect.Float64: "number", reflect.Int: "integer", reflect.String: "string",
+			reflect.Bool: "boolean", reflect.Slice: "array", reflect.Struct: "object"}[n.kind]}
+	number := func(v string) string {
+		x, _ := strconv.ParseFloat(v, 64)
+		return strconv.FormatFloat(x, 'g', -1, 64)
+	}
+	for _, op := range []struct {
+		rule, sign string
+		to         *string
+	}{{"gt", ">", &f.Min}, {"gte", ">=", &f.Min}, {"lt", "<", &f.Max}, {"lte", "<=", &f.Max}} {
+		if v, ok := n.rules[op.rule]; ok {
+			*op.to = op.sign + number(v)
 		}
 	}
-	return false
-}
-
-// zeroIsOutOfRange reports whether a number that cannot be absent (not a
-// pointer, no omitempty) fails its own bounds at zero, as a size class's
-// diameter does: leaving it out is then an error, so it is required.
-func zeroIsOutOfRange(ft reflect.Type, tag map[string]string) bool {
-	if ft.Kind() != reflect.Float64 && ft.Kind() != reflect.Int || tag["omitempty"] != "" {
-		return false
-	}
-	num := func(k string) (float64, bool) {
-		v, ok := tag[k]
-		f, _ := strconv.ParseFloat(v, 64)
-		return f, ok
-	}
-	if v, ok := num("gt"); ok && v >= 0 {
-		return true
-	}
-	if v, ok := num("gte"); ok && v > 0 {
-		return true
-	}
-	if v, ok := num("lt"); ok && v <= 0 {
-		return true
-	}
-	v, ok := num("lte")
-	return ok && v < 0
-}
-
-func checkField(t *testing.T, ft reflect.Type, p *openapi3.Schema, tag map[string]string, unit, at string) {
-	t.Helper()
-	wantType := map[reflect.Kind]string{reflect.Float64: "number", reflect.Int: "integer", reflect.String: "string",
-		reflect.Bool: "boolean", reflect.Slice: "array", reflect.Struct: "object"}[ft.Kind()]
-	if !p.Type.Is(wantType) && !(wantType == "object" && len(objectParts(p)) > 1) {
-		t.Errorf("%s: type %v, want %s", at, p.Type, wantType)
-	}
-	bound := func(key string, got *float64, exclusive *bool, strict bool) {
-		v, ok := tag[key]
-		if !ok {
-			return
-		}
-		want, _ := strconv.ParseFloat(v, 64)
-		isExclusive := exclusive != nil && *exclusive
-		if got == nil || *got != want || isExclusive != strict {
-			t.Errorf("%s: the document's bound differs from validate %s=%s", at, key, v)
-		}
-	}
-	switch ft.Kind() {
-	case reflect.Float64, reflect.Int:
-		_, lo1 := tag["gt"]
-		_, lo2 := tag["gte"]
-		_, hi1 := tag["lt"]
-		_, hi2 := tag["lte"]
-		if (p.Min != nil) != (lo1 || lo2) || (p.Max != nil) != (hi1 || hi2) {
-			t.Errorf("%s: minimum/maximum in the document and bounds in the code differ", at)
-		}
-		bound("gt", p.Min, p.ExclusiveMin.Bool, true)
-		bound("gte", p.Min, p.ExclusiveMin.Bool, false)
-		bound("lt", p.Max, p.ExclusiveMax.Bool, true)
-		bound("lte", p.Max, p.ExclusiveMax.Bool, false)
-		if unit == "" {
-			t.Errorf("%s: a number without a unit tag", at)
-		}
+	switch n.kind {
 	case reflect.String:
-		wantMax := tag["max"]
-		if gotMax := p.MaxLength; (gotMax == nil) != (wantMax == "") || (gotMax != nil && strconv.FormatUint(*gotMax, 10) != wantMax) {
-			t.Errorf("%s: maxLength %v, validate max=%q", at, p.MaxLength, wantMax)
-		}
-		var want []string
-		if v := tag["oneof"]; v != "" {
-			want = strings.Fields(v)
-		}
-		if got := enumStrings(t, p); !slices.Equal(got, want) {
-			t.Errorf("%s: enum %q, validate oneof %q", at, got, want)
-		}
+		f.MaxLength, f.Enum = n.rules["max"], n.rules["oneof"]
 	case reflect.Slice:
-		if got, want := strconv.FormatUint(p.MinItems, 10), tag["min"]; want != "" && got != want || want == "" && p.MinItems != 0 {
-			t.Errorf("%s: minItems %s, validate min=%q", at, got, want)
-		}
-		if gotMax, wantMax := p.MaxItems, tag["max"]; (gotMax == nil) != (wantMax == "") ||
-			(gotMax != nil && strconv.FormatUint(*gotMax, 10) != wantMax) {
-			t.Errorf("%s: maxItems %v, validate max=%q", at, p.MaxItems, wantMax)
-		}
-		if ft.Elem().Kind() == reflect.Struct && p.Items != nil {
-			checkStruct(t, ft.Elem(), p.Items.Value, at+"/*")
-		}
-	case reflect.Struct:
-		checkStruct(t, ft, p, at)
+		f.MinItems, f.MaxItems = n.rules["min"], n.rules["max"]
 	}
-	gotUnit, _ := p.Extensions["x-unit"].(string)
-	if gotUnit != unit {
-		t.Errorf("%s: x-unit %q, unit tag %q", at, gotUnit, unit)
-	}
-	if unit != "" && !strings.Contains(p.Description, "Unit: "+unit) {
-		t.Errorf("%s: the description %q does not state the unit %s", at, p.Description, unit)
-	}
+	return f
 }
 
-// parseValidateTag splits a validate tag into its rules (rule -> parameter,
-// "-" for a rule without one). The rules after dive apply to elements,
-// which checkStruct reaches by their own tags.
-func parseValidateTag(tag string) map[string]string {
-	out := map[string]string{}
-	for _, part := range strings.Split(tag, ",") {
-		if part == "dive" {
-			break
-		}
-		k, v, ok := strings.Cut(part, "=")
-		if !ok {
-			v = "-"
-		}
-		if k != "" {
-			out[k] = v
-		}
+// documented is what the document says of the same member.
+func documented(t testing.TB, p *openapi3.Schema, required bool, alternative string) fixed {
+	f := fixed{Required: required, Alternative: alternative, Enum: strings.Join(enumStrings(t, p), " ")}
+	f.Unit, _ = p.Extensions["x-unit"].(string)
+	switch {
+	case p.Type != nil && len(*p.Type) > 0:
+		f.Type = (*p.Type)[0]
+	case len(p.AllOf) > 0:
+		f.Type = "object"
 	}
-	return out
+	bound := func(v *float64, exclusive *bool, strict, loose string) string {
+		if v == nil {
+			return ""
+		}
+		if exclusive != nil && *exclusive {
+			return strict + strconv.FormatFloat(*v, 'g', -1, 64)
+		}
+		return loose + strconv.FormatFloat(*v, 'g', -1, 64)
+	}
+	f.Min, f.Max = bound(p.Min, p.ExclusiveMin.Bool, ">", ">="), bound(p.Max, p.ExclusiveMax.Bool, "<", "<=")
+	count := func(v *uint64) string {
+		if v == nil {
+			return ""
+		}
+		return strconv.FormatUint(*v, 10)
+	}
+	f.MaxLength, f.MaxItems = count(p.MaxLength), count(p.MaxItems)
+	if p.MinItems != 0 {
+		f.MinItems = strconv.FormatUint(p.MinItems, 10)
+	}
+	return f
 }
 
 // defaultNote is an assumption that names a request field and the default
@@ -1053,34 +992,48 @@ func TestContractCSVDialects(t *testing.T) {
 }
 
 // TestContractProblemTypes: the document's enum of problem types is every
-// problem type the handlers can set (each "/problems/..." literal of the
-// package's code) and about:blank.
+// type of the problem table and about:blank, and every kind has its entry.
 func TestContractProblemTypes(t *testing.T) {
 	t.Parallel()
 	c := contractDoc(t)
-	files, err := filepath.Glob("*.go")
-	if err != nil {
-		t.Fatal(err)
-	}
-	used := []string{"about:blank"}
-	fset := token.NewFileSet()
-	for _, name := range files {
-		if strings.HasSuffix(name, "_test.go") {
-			continue
+	used := []string{typeBlank}
+	for k := kind(1); k < kindCount; k++ {
+		pc := problemKinds[k]
+		if pc.typ == "" || pc.title == "" || pc.status == 0 {
+			t.Errorf("kind %d has no entry in problemKinds", k)
 		}
-		f, err := parser.ParseFile(fset, name, nil, 0)
+		if !slices.Contains(used, pc.typ) {
+			used = append(used, pc.typ)
+		}
+	}
+	sameSet(t, "Problem.type", enumStrings(t, c.schema(t, "Problem").Properties["type"].Value), used)
+}
+
+// TestContractBodyLimits: each route's documented body limit is the byte
+// count the code sets, written out in full.
+func TestContractBodyLimits(t *testing.T) {
+	t.Parallel()
+	c := contractDoc(t)
+	written := func(limit string) string {
+		n, err := gommonbytes.Parse(limit)
 		if err != nil {
 			t.Fatal(err)
 		}
-		ast.Inspect(f, func(n ast.Node) bool {
-			if lit, ok := n.(*ast.BasicLit); ok && lit.Kind == token.STRING {
-				if v, err := strconv.Unquote(lit.Value); err == nil && strings.HasPrefix(v, "/problems/") &&
-					!slices.Contains(used, v) {
-					used = append(used, v)
-				}
-			}
-			return true
-		})
+		s := strconv.FormatInt(n, 10)
+		for i := len(s) - 3; i > 0; i -= 3 {
+			s = s[:i] + "," + s[i:]
+		}
+		return s + " bytes"
 	}
-	sameSet(t, "Problem.type", enumStrings(t, c.schema(t, "Problem").Properties["type"].Value), used)
+	single, batch := written(DefaultConfig.BodyLimit), written(batchBodyLimit)
+	for path, want := range map[string]string{"/v1/triage": single, "/v1/scales": single,
+		"/v1/interaction-profile": single, "/v1/triage/batch": batch} {
+		if d := c.doc.Paths.Find(path).Post.Description; !strings.Contains(d, "Body limit "+want+".") {
+			t.Errorf("%s: the description does not state the body limit %s", path, want)
+		}
+	}
+	tooLarge := strings.Join(strings.Fields(*c.doc.Components.Responses["PayloadTooLarge"].Value.Description), " ")
+	if !strings.Contains(tooLarge, single) || !strings.Contains(tooLarge, batch) {
+		t.Errorf("PayloadTooLarge does not state the limits %s and %s: %q", single, batch, tooLarge)
+	}
 }

@@ -19,8 +19,6 @@ import (
 	"colloidtriage/advisor"
 )
 
-const typeInvalidCSV = "/problems/invalid-csv"
-
 // csvDialect is a CSV file's field delimiter and decimal separator.
 type csvDialect struct {
 	delimiter, decimal rune
@@ -39,8 +37,7 @@ func (d csvDialect) delimiterName() string {
 // range) each missing one is taken from def.
 func csvDialectOf(params map[string]string, def *csvDialect) (csvDialect, error) {
 	bad := func(detail string) (csvDialect, error) {
-		return csvDialect{}, newProblem(http.StatusUnsupportedMediaType, typeInvalidCSV,
-			"The CSV media type is incomplete or invalid",
+		return csvDialect{}, fail(csvMediaType,
 			detail+`; declare it as text/csv; header=present; delimiter=";"; decimal=","`)
 	}
 	var d csvDialect
@@ -80,11 +77,11 @@ func csvDialectOf(params map[string]string, def *csvDialect) (csvDialect, error)
 }
 
 // csvColumn is one addressable leaf of the sample: its path from the root
-// of the JSON form, the Go kind its cells are read as, and its unit.
+// of the JSON form and its contract (the kind its cells are read as, and
+// its unit).
 type csvColumn struct {
 	path []pathStep
-	kind reflect.Kind
-	unit string
+	leaf *node
 }
 
 // pathStep is a member name, or an array index when isIndex.
@@ -94,19 +91,16 @@ type pathStep struct {
 	isIndex bool
 }
 
-// csvColumns maps every column name to its leaf, read once from the json,
-// unit and validate tags of advisor.Sample, so the CSV contract follows the
-// JSON one without a second list to keep in step.
+// csvColumns maps every column name to its leaf, read from the sample's
+// contract, so the CSV contract follows the JSON one without a second list
+// to keep in step.
 var csvColumns = sync.OnceValue(func() map[string]csvColumn {
 	out := map[string]csvColumn{}
-	addColumns(out, reflect.TypeOf(advisor.Sample{}), "", nil, "")
+	addColumns(out, contractOf(reflect.TypeOf(advisor.Sample{})), "", nil)
 	return out
 })
 
-func addColumns(out map[string]csvColumn, t reflect.Type, column string, path []pathStep, tag reflect.StructTag) {
-	if t.Kind() == reflect.Pointer {
-		t = t.Elem()
-	}
+func addColumns(out map[string]csvColumn, n *node, column string, path []pathStep) {
 	join := func(name string) string {
 		if column == "" {
 			return name
@@ -114,42 +108,23 @@ func addColumns(out map[string]csvColumn, t reflect.Type, column string, path []
 		return column + "." + name
 	}
 	step := func(s pathStep) []pathStep { return append(path[:len(path):len(path)], s) }
-	switch t.Kind() {
+	switch n.kind {
 	case reflect.Struct:
-		for i := range t.NumField() {
-			f := t.Field(i)
-			name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
-			if name != "" && name != "-" {
-				addColumns(out, f.Type, join(name), step(pathStep{name: name}), f.Tag)
-			}
+		for _, name := range n.names {
+			addColumns(out, n.members[name], join(name), step(pathStep{name: name}))
 		}
 	case reflect.Slice:
 		// Only arrays of objects with an item limit are addressable, so a
 		// header can never ask for an unbounded array.
-		elem := t.Elem()
-		if elem.Kind() == reflect.Pointer {
-			elem = elem.Elem()
-		}
-		if elem.Kind() != reflect.Struct {
+		if n.elem.kind != reflect.Struct {
 			return
 		}
-		for i := range maxItems(tag.Get("validate")) {
-			addColumns(out, elem, join(strconv.Itoa(i)), step(pathStep{index: i, isIndex: true}), "")
+		for i := range n.maxItems() {
+			addColumns(out, n.elem, join(strconv.Itoa(i)), step(pathStep{index: i, isIndex: true}))
 		}
 	case reflect.String, reflect.Float64, reflect.Int, reflect.Bool:
-		out[column] = csvColumn{path: path, kind: t.Kind(), unit: tag.Get("unit")}
+		out[column] = csvColumn{path: path, leaf: n}
 	}
-}
-
-// maxItems reads the max=N item limit of a slice's validate tag (0 if none).
-func maxItems(validate string) int {
-	for _, part := range strings.Split(validate, ",") {
-		if v, ok := strings.CutPrefix(part, "max="); ok {
-			n, _ := strconv.Atoi(v)
-			return n
-		}
-	}
-	return 0
 }
 
 // csvEntries reads a CSV batch into entries: the header is checked whole,
@@ -200,7 +175,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 	r.FieldsPerRecord = -1
 	header, err := r.Read()
 	if errors.Is(err, io.EOF) {
-		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV body is empty",
+		return nil, fail(csvEmpty,
 			"the first row must be the header naming the columns")
 	}
 	if err != nil {
@@ -230,7 +205,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 			}
 		}
 		if len(rec) != len(cols) {
-			e.err = newProblem(http.StatusBadRequest, typeInvalidCSV, "A row has the wrong number of fields",
+			e.err = fail(csvRowLength,
 				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
 				advisor.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
 		} else {
@@ -269,7 +244,7 @@ func csvHeader(header []string) ([]csvColumn, int, error) {
 		}
 	}
 	if len(problems) > 0 {
-		return nil, 0, newProblem(http.StatusBadRequest, typeInvalidCSV, "The CSV header names unknown or repeated columns",
+		return nil, 0, fail(csvHeaderInvalid,
 			"no row was read; columns are the JSON fields of a sample as dotted paths (see /openapi.json)", problems...)
 	}
 	return cols, idCol, nil
@@ -292,7 +267,7 @@ func csvSyntaxProblem(err error) error {
 	if errors.As(err, &pe) {
 		detail = fmt.Sprintf("line %d, column %d: %v", pe.Line, pe.Column, pe.Err)
 	}
-	return newProblem(http.StatusBadRequest, typeInvalidCSV, "The body is not valid CSV", detail)
+	return fail(csvSyntax, detail)
 }
 
 func allEmpty(rec []string) bool {
@@ -314,15 +289,15 @@ func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 		if cell == "" {
 			continue
 		}
-		v, reason := parseCell(cell, cols[j].kind, d)
+		v, reason := parseCell(cell, cols[j].leaf.kind, d)
 		if reason != "" {
-			problems = append(problems, advisor.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].unit})
+			problems = append(problems, advisor.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].leaf.unit})
 			continue
 		}
 		setPath(root, cols[j].path, v)
 	}
 	if len(problems) > 0 {
-		return nil, newProblem(http.StatusBadRequest, typeInvalidCSV, "A cell does not parse",
+		return nil, fail(csvCellInvalid,
 			fmt.Sprintf("%d cell(s) are not of their column's type", len(problems)), problems...)
 	}
 	return json.Marshal(root)

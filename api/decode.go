@@ -23,7 +23,7 @@ func decodeJSON(c echo.Context, v any) error {
 	if err := requireContentType(c, echo.MIMEApplicationJSON); err != nil {
 		return err
 	}
-	body, err := readBody(c, typeInvalidJSON)
+	body, err := readBody(c, bodyUnreadable)
 	if err != nil {
 		return err
 	}
@@ -33,7 +33,7 @@ func decodeJSON(c echo.Context, v any) error {
 // readBody reads the whole request body. A body over the route's limit is a
 // 413 whether the limit was met by a declared Content-Length or inside a
 // chunked body (echo's limit reader then fails with its own 413 error).
-func readBody(c echo.Context, problemType string) ([]byte, error) {
+func readBody(c echo.Context, unreadable kind) ([]byte, error) {
 	body, err := io.ReadAll(c.Request().Body)
 	if err == nil {
 		return body, nil
@@ -43,21 +43,20 @@ func readBody(c echo.Context, problemType string) ([]byte, error) {
 	if errors.As(err, &tooLarge) || (errors.As(err, &he) && he.Code == http.StatusRequestEntityTooLarge) {
 		return nil, echo.NewHTTPError(http.StatusRequestEntityTooLarge)
 	}
-	return nil, newProblem(http.StatusBadRequest, problemType, "The request body could not be read", "")
+	return nil, fail(unreadable, "")
 }
 
 func unmarshalStrict(body []byte, v any) error {
 	dec := json.NewDecoder(bytes.NewReader(body))
 	dec.DisallowUnknownFields()
 	if err := dec.Decode(v); err != nil {
-		return jsonProblem(err, body, reflect.TypeOf(v))
+		return jsonProblem(err, body, contractOf(reflect.TypeOf(v)))
 	}
 	if rest := bytes.TrimSpace(body[dec.InputOffset():]); len(rest) > 0 {
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
-			"unexpected data after the JSON value")
+		return fail(jsonInvalid, "unexpected data after the JSON value")
 	}
-	if p, bad := checkMembers(body, reflect.TypeOf(v)); bad {
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A member is not part of the contract", p.reason,
+	if p, bad := checkMembers(body, contractOf(reflect.TypeOf(v))); bad {
+		return fail(memberOffContract, p.reason,
 			advisor.FieldProblem{Pointer: p.pointer, Reason: p.reason})
 	}
 	return nil
@@ -65,39 +64,39 @@ func unmarshalStrict(body []byte, v any) error {
 
 // jsonProblem explains a decoding error with the field as a JSON pointer,
 // found by walking the body against target when encoding/json does not say.
-func jsonProblem(err error, body []byte, target reflect.Type) error {
+func jsonProblem(err error, body []byte, target *node) error {
 	var syn *json.SyntaxError
 	var typ *json.UnmarshalTypeError
 	switch {
 	case errors.As(err, &syn):
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON",
+		return fail(jsonInvalid,
 			fmt.Sprintf("syntax error at byte %d: %s", syn.Offset, syn.Error()))
 	case errors.As(err, &typ):
 		ptr, kind := "/"+strings.ReplaceAll(typ.Field, ".", "/"), jsonKind(typ.Type.String())
 		if p, k, ok := locateIn(body, target); ok && k != "" {
 			ptr, kind = p, k
 		}
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A field has the wrong type",
+		return fail(fieldWrongType,
 			fmt.Sprintf("expected %s, got JSON %s", kind, typ.Value),
 			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
 	case errors.Is(err, io.EOF) || len(bytes.TrimSpace(body)) == 0:
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is empty", "send a JSON object")
+		return fail(bodyEmpty, "send a JSON object")
 	case errors.Is(err, io.ErrUnexpectedEOF):
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "the JSON value is truncated")
+		return fail(jsonInvalid, "the JSON value is truncated")
 	case strings.HasPrefix(err.Error(), "json: unknown field "):
 		name := strings.Trim(strings.TrimPrefix(err.Error(), "json: unknown field "), `"`)
 		if p, k, ok := locateIn(body, target); ok && k == "" {
 			name = p
 		}
-		return newProblem(http.StatusBadRequest, typeInvalidJSON, "Unknown field",
+		return fail(fieldUnknown,
 			"the field "+name+" is not part of the contract (see /openapi.json); check its spelling and unit suffix",
 			advisor.FieldProblem{Pointer: name, Reason: "unknown field"})
 	}
-	return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "")
+	return fail(jsonInvalid, "")
 }
 
 // locateIn decodes body generically and locates its first misfit for target.
-func locateIn(body []byte, target reflect.Type) (pointer, expected string, ok bool) {
+func locateIn(body []byte, target *node) (pointer, expected string, ok bool) {
 	dec := json.NewDecoder(bytes.NewReader(body))
 	dec.UseNumber()
 	var v any
@@ -125,8 +124,7 @@ func jsonKind(goType string) string {
 func requireContentType(c echo.Context, want string) error {
 	mt, _, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
 	if err != nil || mt != want {
-		return newProblem(http.StatusUnsupportedMediaType, "about:blank", "Unsupported media type",
-			"send the body as "+want)
+		return fail(mediaUnsupported, "send the body as "+want)
 	}
 	return nil
 }

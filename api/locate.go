@@ -9,28 +9,20 @@ import (
 	"strings"
 )
 
-// locate walks a decoded JSON value against the Go type it was meant for
-// and returns the JSON pointer of the first member that the type does not
-// declare (unknown) or whose JSON kind does not fit (wrong type), with the
+// locate walks a decoded JSON value against the contract of the Go type
+// it was meant for and returns the JSON pointer of the first member that
+// the type does not declare (unknown) or whose JSON kind does not fit (wrong type), with the
 // expected JSON kind. encoding/json names neither with array indices, and
 // names unknown fields without their path.
-func locate(v any, t reflect.Type, at string) (pointer, expected string, found bool) {
-	for t.Kind() == reflect.Pointer {
-		t = t.Elem()
-	}
-	switch t.Kind() {
+func locate(v any, n *node, at string) (pointer, expected string, found bool) {
+	switch n.kind {
 	case reflect.Struct:
 		obj, ok := v.(map[string]any)
 		if !ok {
 			return at, "object", v != nil
 		}
-		fields := map[string]reflect.Type{}
-		for i := 0; i < t.NumField(); i++ {
-			name, _, _ := strings.Cut(t.Field(i).Tag.Get("json"), ",")
-			fields[name] = t.Field(i).Type
-		}
 		for _, key := range sortedMapKeys(obj) {
-			ft, ok := fields[key]
+			ft, ok := n.members[key]
 			if !ok {
 				return at + "/" + escapePointer(key), "", true
 			}
@@ -44,7 +36,7 @@ func locate(v any, t reflect.Type, at string) (pointer, expected string, found b
 			return at, "array", v != nil
 		}
 		for i, item := range arr {
-			if p, e, bad := locate(item, t.Elem(), at+"/"+strconv.Itoa(i)); bad {
+			if p, e, bad := locate(item, n.elem, at+"/"+strconv.Itoa(i)); bad {
 				return p, e, true
 			}
 		}
@@ -57,12 +49,12 @@ func locate(v any, t reflect.Type, at string) (pointer, expected string, found b
 			return at, "boolean", true
 		}
 	case reflect.Float64, reflect.Int:
-		n, ok := v.(json.Number)
+		num, ok := v.(json.Number)
 		if !ok && v != nil {
 			return at, "number", true
 		}
-		if ok && t.Kind() == reflect.Int {
-			if _, err := n.Int64(); err != nil {
+		if ok && n.kind == reflect.Int {
+			if _, err := num.Int64(); err != nil {
 				return at, "integer", true
 			}
 		}

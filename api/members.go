@@ -7,7 +7,6 @@ import (
 	"slices"
 	"strconv"
 	"strings"
-	"sync"
 )
 
 // memberProblem is a member that encoding/json would accept but the
@@ -22,7 +21,7 @@ type memberProblem struct {
 // returns its first member problem, if any. The body is known to be valid
 // JSON, so a plain byte scanner suffices; it reads each member name once and
 // allocates only for the pointers of objects it descends into.
-func checkMembers(body []byte, target reflect.Type) (memberProblem, bool) {
+func checkMembers(body []byte, target *node) (memberProblem, bool) {
 	s := memberScanner{b: body}
 	return s.value(target, "")
 }
@@ -45,20 +44,18 @@ func (s *memberScanner) peek() byte {
 	return 0
 }
 
-// value scans one value of type t (nil: not checked by name) at pointer at.
-func (s *memberScanner) value(t reflect.Type, at string) (memberProblem, bool) {
-	for t != nil && t.Kind() == reflect.Pointer {
-		t = t.Elem()
-	}
+// value scans one value of contract n (nil: not checked by name) at
+// pointer at.
+func (s *memberScanner) value(n *node, at string) (memberProblem, bool) {
 	switch s.peek() {
 	case '{':
 		s.i++
-		return s.object(t, at)
+		return s.object(n, at)
 	case '[':
 		s.i++
-		var elem reflect.Type
-		if t != nil && t.Kind() == reflect.Slice {
-			elem = t.Elem()
+		var elem *node
+		if n != nil && n.kind == reflect.Slice {
+			elem = n.elem
 		}
 		for n := 0; s.peek() != ']' && s.i < len(s.b); n++ {
 			if p, bad := s.value(elem, at+"/"+strconv.Itoa(n)); bad {
@@ -79,9 +76,13 @@ func (s *memberScanner) value(t reflect.Type, at string) (memberProblem, bool) {
 	return memberProblem{}, false
 }
 
-// object scans the members of an object after its '{'.
-func (s *memberScanner) object(t reflect.Type, at string) (memberProblem, bool) {
-	fields := structFields(t)
+// object scans the members of an object after its '{'. Only the members
+// of a struct are checked by name.
+func (s *memberScanner) object(n *node, at string) (memberProblem, bool) {
+	var fields map[string]*node
+	if n != nil && n.kind == reflect.Struct {
+		fields = n.members
+	}
 	var seen []string
 	for s.peek() == '"' {
 		key := s.str()
@@ -90,7 +91,7 @@ func (s *memberScanner) object(t reflect.Type, at string) (memberProblem, bool) 
 			return memberProblem{ptr, "member given twice"}, true
 		}
 		seen = append(seen, key)
-		var ft reflect.Type
+		var ft *node
 		if fields != nil {
 			var ok bool
 			if ft, ok = fields[key]; !ok {
@@ -135,29 +136,7 @@ func (s *memberScanner) str() string {
 	return text
 }
 
-// structFields maps the exact JSON names of a struct type to their types;
-// nil for any other type, whose members are not checked by name. The map
-// is built once per type (it depends on the type's declaration only) and
-// shared read-only.
-func structFields(t reflect.Type) map[string]reflect.Type {
-	if t == nil || t.Kind() != reflect.Struct {
-		return nil
-	}
-	if m, ok := fieldsByType.Load(t); ok {
-		return m.(map[string]reflect.Type)
-	}
-	m := make(map[string]reflect.Type, t.NumField())
-	for i := 0; i < t.NumField(); i++ {
-		name, _, _ := strings.Cut(t.Field(i).Tag.Get("json"), ",")
-		m[name] = t.Field(i).Type
-	}
-	fieldsByType.Store(t, m)
-	return m
-}
-
-var fieldsByType sync.Map // reflect.Type -> map[string]reflect.Type
-
-func closestField(fields map[string]reflect.Type, key string) string {
+func closestField(fields map[string]*node, key string) string {
 	for name := range fields {
 		if strings.EqualFold(name, key) {
 			return "did you mean " + name + "?"

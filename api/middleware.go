@@ -3,52 +3,52 @@ package api
 import (
 	"fmt"
 	"net/http"
-	"time"
 
 	"github.com/labstack/echo/v4"
+	"github.com/labstack/echo/v4/middleware"
 	"github.com/rs/zerolog"
 )
 
-// accessLog writes one zerolog JSON line per request: method, route, status,
-// size, latency and request id. Bodies are never logged; errors of status
-// 500 and above are logged with their internal detail, which clients never see.
+// accessLog is echo's request logger writing one zerolog JSON line per
+// request: request id, method, route, status, size and latency. Bodies are
+// never logged; errors of status 500 and above are logged with their
+// internal detail, which clients never see. The error is rendered (by the
+// error handler) before the line is written, so the line has the status
+// the client got.
 func accessLog(log zerolog.Logger) echo.MiddlewareFunc {
-	return func(next echo.HandlerFunc) echo.HandlerFunc {
-		return func(c echo.Context) error {
-			start := time.Now()
-			err := next(c)
-			if err != nil {
-				c.Error(err)
-			}
-			res := c.Response()
+	return middleware.RequestLoggerWithConfig(middleware.RequestLoggerConfig{
+		HandleError:     true,
+		LogError:        true,
+		LogStatus:       true,
+		LogMethod:       true,
+		LogRoutePath:    true,
+		LogResponseSize: true,
+		LogLatency:      true,
+		LogValuesFunc: func(c echo.Context, v middleware.RequestLoggerValues) error {
 			ev := log.Info()
-			if res.Status >= http.StatusInternalServerError {
-				ev = log.Error().AnErr("internal_error", err)
+			if v.Status >= http.StatusInternalServerError {
+				ev = log.Error().AnErr("internal_error", v.Error)
 			}
-			ev.Str("request_id", res.Header().Get(echo.HeaderXRequestID)).
-				Str("method", c.Request().Method).
-				Str("route", c.Path()).
-				Int("status", res.Status).
-				Int64("bytes", res.Size).
-				Dur("latency", time.Since(start)).
+			ev.Str("request_id", c.Response().Header().Get(echo.HeaderXRequestID)).
+				Str("method", v.Method).
+				Str("route", v.RoutePath).
+				Int("status", v.Status).
+				Int64("bytes", v.ResponseSize).
+				Dur("latency", v.Latency).
 				Msg("request")
 			return nil
-		}
-	}
+		},
+	})
 }
 
-// recoverPanic turns a panic in a handler into a 500 problem detail, so that
-// a programming error never drops the connection or leaks a stack trace.
-func recoverPanic(next echo.HandlerFunc) echo.HandlerFunc {
-	return func(c echo.Context) (err error) {
-		defer func() {
-			if r := recover(); r != nil {
-				if r == http.ErrAbortHandler {
-					panic(r)
-				}
-				err = fmt.Errorf("panic: %v", r)
-			}
-		}()
-		return next(c)
-	}
-}
+// recoverPanic is echo's recovery turning a panic in a handler into an
+// error, rendered as a 500 problem detail, so that a programming error
+// never drops the connection or leaks a stack trace; the access log records
+// the panic's value. http.ErrAbortHandler is passed on, as net/http expects.
+var recoverPanic = middleware.RecoverWithConfig(middleware.RecoverConfig{
+	DisablePrintStack:   true,
+	DisableErrorHandler: true,
+	LogErrorFunc: func(_ echo.Context, err error, _ []byte) error {
+		return fmt.Errorf("panic: %w", err)
+	},
+})

@@ -25,46 +25,129 @@ type Problem struct {
 const (
 	typeInvalidJSON   = "/problems/invalid-json"
 	typeInvalidSample = "/problems/invalid-sample"
+	typeInvalidBatch  = "/problems/invalid-batch"
+	typeBatchTooLarge = "/problems/batch-too-large"
+	typeInvalidCSV    = "/problems/invalid-csv"
+	typeInvalidQuery  = "/problems/invalid-query"
 	typeUnauthorized  = "/problems/unauthorized"
 	typeInternal      = "/problems/internal"
+	typeBlank         = "about:blank"
 )
 
 const problemContentType = "application/problem+json"
 
-// problemError is an error that renders as a problem detail.
-type problemError struct{ p Problem }
+// kind is a failure the API reports; problemKinds maps it to the problem's
+// type, title and HTTP status.
+type kind int
 
-func (e *problemError) Error() string { return e.p.Title + ": " + e.p.Detail }
+const (
+	bodyUnreadable kind = iota + 1
+	jsonInvalid
+	bodyEmpty
+	fieldWrongType
+	fieldUnknown
+	memberOffContract
+	sampleNotObject
+	batchUnreadable
+	samplesMissing
+	batchTooLarge
+	csvMediaType
+	csvNotAcceptable
+	csvEmpty
+	csvSyntax
+	csvHeaderInvalid
+	csvRowLength
+	csvCellInvalid
+	queryInvalid
+	fieldsInvalid
+	sampleInconsistent
+	keyRejected
+	mediaUnsupported
+	mediaNotAcceptable
+	internalError
+	kindCount
+)
 
-func newProblem(status int, typ, title, detail string, fields ...advisor.FieldProblem) *problemError {
-	return &problemError{Problem{Type: typ, Title: title, Status: status, Detail: detail, Errors: fields}}
+// problemClass is what every problem of one kind has in common.
+type problemClass struct {
+	typ, title string
+	status     int
+}
+
+// problemKinds is the one place where a failure becomes a problem type,
+// a title and an HTTP status.
+var problemKinds = [kindCount]problemClass{
+	bodyUnreadable:     {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
+	jsonInvalid:        {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
+	bodyEmpty:          {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
+	fieldWrongType:     {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
+	fieldUnknown:       {typeInvalidJSON, "Unknown field", http.StatusBadRequest},
+	memberOffContract:  {typeInvalidJSON, "A member is not part of the contract", http.StatusBadRequest},
+	sampleNotObject:    {typeInvalidJSON, "A sample is not a JSON object", http.StatusBadRequest},
+	batchUnreadable:    {typeInvalidBatch, "The request body could not be read", http.StatusBadRequest},
+	samplesMissing:     {typeInvalidBatch, "The batch has no samples field", http.StatusBadRequest},
+	batchTooLarge:      {typeBatchTooLarge, "Too many samples in one batch", http.StatusRequestEntityTooLarge},
+	csvMediaType:       {typeInvalidCSV, "The CSV media type is incomplete or invalid", http.StatusUnsupportedMediaType},
+	csvNotAcceptable:   {typeInvalidCSV, "Not acceptable", http.StatusNotAcceptable},
+	csvEmpty:           {typeInvalidCSV, "The CSV body is empty", http.StatusBadRequest},
+	csvSyntax:          {typeInvalidCSV, "The body is not valid CSV", http.StatusBadRequest},
+	csvHeaderInvalid:   {typeInvalidCSV, "The CSV header names unknown or repeated columns", http.StatusBadRequest},
+	csvRowLength:       {typeInvalidCSV, "A row has the wrong number of fields", http.StatusBadRequest},
+	csvCellInvalid:     {typeInvalidCSV, "A cell does not parse", http.StatusBadRequest},
+	queryInvalid:       {typeInvalidQuery, "A query parameter is invalid", http.StatusBadRequest},
+	fieldsInvalid:      {typeInvalidSample, "The sample has invalid fields", http.StatusUnprocessableEntity},
+	sampleInconsistent: {typeInvalidSample, "The sample is physically invalid or inconsistent", http.StatusUnprocessableEntity},
+	keyRejected:        {typeUnauthorized, "Missing or invalid API key", http.StatusUnauthorized},
+	mediaUnsupported:   {typeBlank, "Unsupported media type", http.StatusUnsupportedMediaType},
+	mediaNotAcceptable: {typeBlank, "Not acceptable", http.StatusNotAcceptable},
+	internalError:      {typeInternal, "Internal error", http.StatusInternalServerError},
+}
+
+// problemError is a failure of a known kind, with what the client needs to
+// fix it.
+type problemError struct {
+	kind   kind
+	detail string
+	fields []advisor.FieldProblem
+}
+
+func (e *problemError) Error() string { return problemKinds[e.kind].title + ": " + e.detail }
+
+// fail reports a failure of kind k.
+func fail(k kind, detail string, fields ...advisor.FieldProblem) error {
+	return &problemError{kind: k, detail: detail, fields: fields}
+}
+
+func (e *problemError) problem() Problem {
+	c := problemKinds[e.kind]
+	return Problem{Type: c.typ, Title: c.title, Status: c.status, Detail: e.detail, Errors: e.fields}
 }
 
 // problemFor maps any handler error to a problem detail; internal detail is
-// never serialised.
+// never serialised. An echo.HTTPError (no route, wrong method, body over
+// the limit) is a plain HTTP status, of type about:blank.
 func problemFor(err error) Problem {
 	var pe *problemError
 	var ie *advisor.InputError
 	var he *echo.HTTPError
 	switch {
 	case errors.As(err, &pe):
-		return pe.p
+		return pe.problem()
 	case errors.As(err, &ie):
-		return Problem{Type: typeInvalidSample, Title: "The sample is physically invalid or inconsistent",
-			Status: http.StatusUnprocessableEntity, Errors: ie.Problems}
+		return (&problemError{kind: sampleInconsistent, fields: ie.Problems}).problem()
 	case errors.As(err, &he):
 		title := http.StatusText(he.Code)
 		if title == "" {
 			title = "Error"
 		}
-		p := Problem{Type: "about:blank", Title: title, Status: he.Code}
+		p := Problem{Type: typeBlank, Title: title, Status: he.Code}
 		if he.Code == http.StatusRequestEntityTooLarge {
 			p.Detail = "the request body exceeds the limit of this route"
 		}
 		return p
 	}
-	return Problem{Type: typeInternal, Title: "Internal error", Status: http.StatusInternalServerError,
-		Detail: "the server could not complete the request; the request id identifies it in the logs"}
+	return (&problemError{kind: internalError,
+		detail: "the server could not complete the request; the request id identifies it in the logs"}).problem()
 }
 
 // errorHandler renders every error as application/problem+json.
@@ -75,9 +158,6 @@ func errorHandler(err error, c echo.Context) {
 	p := problemFor(err)
 	p.Instance = c.Request().URL.Path
 	p.RequestID = c.Response().Header().Get(echo.HeaderXRequestID)
-	body, mErr := marshalPlain(p)
-	if mErr != nil {
-		body = []byte(`{"type":"/problems/internal","title":"Internal error","status":500}`)
-	}
+	body, _ := marshalPlain(p) // a Problem holds only strings and numbers, which always encode
 	_ = c.Blob(p.Status, problemContentType, body)
 }

@@ -14,9 +14,6 @@ import (
 // svgContentType is the media type of the interaction-profile chart.
 const svgContentType = "image/svg+xml"
 
-// typeInvalidQuery is the problem type of a bad query parameter.
-const typeInvalidQuery = "/problems/invalid-query"
-
 type profileResponse struct {
 	*advisor.Profile
 	RequestID string `json:"request_id"`
@@ -69,7 +66,7 @@ func profilePoints(c echo.Context) (int, error) {
 	n, err := strconv.Atoi(q.Get("points"))
 	if err != nil || n < advisor.ProfilePointsMin || n > advisor.ProfilePointsMax {
 		valid := strconv.Itoa(advisor.ProfilePointsMin) + " <= value <= " + strconv.Itoa(advisor.ProfilePointsMax) + ", an integer"
-		return 0, newProblem(http.StatusBadRequest, typeInvalidQuery, "A query parameter is invalid",
+		return 0, fail(queryInvalid,
 			"the query parameter points must be an integer from "+strconv.Itoa(advisor.ProfilePointsMin)+
 				" to "+strconv.Itoa(advisor.ProfilePointsMax),
 			advisor.FieldProblem{Pointer: "?points", Reason: "not an integer in range", Unit: "1", Valid: valid})
@@ -110,7 +107,7 @@ func prefersSVG(accept string) (bool, error) {
 	case json.q > 0:
 		return false, nil
 	}
-	return false, newProblem(http.StatusNotAcceptable, "about:blank", "Not acceptable",
+	return false, fail(mediaNotAcceptable,
 		"this route answers application/json or "+svgContentType)
 }
 

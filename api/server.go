@@ -13,7 +13,7 @@ import (
 // Config holds what the transport needs besides the engine.
 type Config struct {
 	Logger    zerolog.Logger
-	BodyLimit string   // body limit of the single-sample routes, e.g. "256K"
+	BodyLimit string   // body limit of the single-sample routes in echo's notation; "256K" is 256,000 bytes
 	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
 	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
 }
@@ -43,7 +43,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 
 	// Authentication is route middleware, not group middleware: a group with
 	// middleware adds catch-all routes that would turn 405s into 404s.
-	auth := apiKeyAuth(cfg.APIKeys)
+	auth := keyAuthWithConfig(keyAuthConfig{Keys: cfg.APIKeys})
 	limit := middleware.BodyLimit(cfg.BodyLimit)
 	e.GET("/openapi.json", h.openAPI, auth)
 	v1 := e.Group("/v1")

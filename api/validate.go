@@ -12,17 +12,11 @@ import (
 	"colloidtriage/advisor"
 )
 
-// fieldRule is what the contract says about one request field: its unit and
-// its valid range, read once from the `unit` and `validate` tags.
-type fieldRule struct {
-	unit, valid string
-}
-
-// sampleValidator validates samples with JSON field names and knows, for each
-// JSON pointer (array indices as *), the field's unit and valid range.
+// sampleValidator validates samples with JSON field names; the sample's
+// contract gives each offending field its unit and valid range.
 type sampleValidator struct {
-	v     *validator.Validate
-	rules map[string]fieldRule
+	v        *validator.Validate
+	contract *node
 }
 
 func newSampleValidator() *sampleValidator {
@@ -34,62 +28,7 @@ func newSampleValidator() *sampleValidator {
 		}
 		return name
 	})
-	sv := &sampleValidator{v: v, rules: map[string]fieldRule{}}
-	sv.collect(reflect.TypeOf(advisor.Sample{}), "")
-	return sv
-}
-
-func (sv *sampleValidator) collect(t reflect.Type, prefix string) {
-	for t.Kind() == reflect.Pointer || t.Kind() == reflect.Slice {
-		if t.Kind() == reflect.Slice {
-			prefix += "/*"
-		}
-		t = t.Elem()
-	}
-	if t.Kind() != reflect.Struct {
-		return
-	}
-	for i := 0; i < t.NumField(); i++ {
-		f := t.Field(i)
-		name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
-		ptr := prefix + "/" + name
-		sv.rules[ptr] = fieldRule{unit: f.Tag.Get("unit"), valid: describeTag(f.Tag.Get("validate"))}
-		sv.collect(f.Type, ptr)
-	}
-}
-
-// describeTag turns validator tags into a range a person can read.
-func describeTag(tag string) string {
-	var lo, hi string
-	var parts []string
-	for _, t := range strings.Split(tag, ",") {
-		k, v, _ := strings.Cut(t, "=")
-		switch k {
-		case "gt":
-			lo = v + " < value"
-		case "gte":
-			lo = v + " <= value"
-		case "lt":
-			hi = "value < " + v
-		case "lte":
-			hi = "value <= " + v
-		case "oneof":
-			parts = append(parts, "one of: "+strings.ReplaceAll(v, " ", ", "))
-		case "max":
-			parts = append(parts, "at most "+v+" items or characters")
-		case "min":
-			parts = append(parts, "at least "+v+" items")
-		}
-	}
-	switch {
-	case lo != "" && hi != "":
-		parts = append([]string{lo + strings.TrimPrefix(hi, "value")}, parts...)
-	case lo != "":
-		parts = append([]string{lo}, parts...)
-	case hi != "":
-		parts = append([]string{hi}, parts...)
-	}
-	return strings.Join(parts, "; ")
+	return &sampleValidator{v: v, contract: contractOf(reflect.TypeOf(advisor.Sample{}))}
 }
 
 var index = regexp.MustCompile(`\[(\d+)\]`)
@@ -110,19 +49,24 @@ func (sv *sampleValidator) validate(s *advisor.Sample) error {
 		ns := fe.Namespace()
 		_, ns, _ = strings.Cut(ns, ".") // drop the root type name
 		ptr := "/" + strings.ReplaceAll(index.ReplaceAllString(ns, ".$1"), ".", "/")
-		rule := sv.rules[index.ReplaceAllString("/"+strings.ReplaceAll(ns, ".", "/"), "/*")]
-		fields = append(fields, advisor.FieldProblem{Pointer: ptr, Reason: reason(fe), Unit: rule.unit, Valid: rule.valid})
+		var unit, valid, alternative string
+		if n := sv.contract.at(ptr); n != nil {
+			unit, valid, alternative = n.unit, n.valid, n.alternative
+		}
+		fields = append(fields, advisor.FieldProblem{Pointer: ptr, Reason: reason(fe, alternative), Unit: unit, Valid: valid})
 	}
-	return newProblem(422, typeInvalidSample, "The sample has invalid fields",
+	return fail(fieldsInvalid,
 		fmt.Sprintf("%d field(s) out of range or missing", len(fields)), fields...)
 }
 
-func reason(fe validator.FieldError) string {
+// reason says why a field failed; alternative is the member that may stand
+// in for a missing one.
+func reason(fe validator.FieldError, alternative string) string {
 	switch fe.Tag() {
 	case "required":
 		return "required"
 	case "required_without":
-		return "required unless " + snake(fe.Param()) + " is given"
+		return "required unless " + alternative + " is given"
 	case "oneof":
 		return "not one of the allowed values"
 	case "gt", "gte", "lt", "lte":
@@ -131,20 +75,4 @@ func reason(fe validator.FieldError) string {
 		return "wrong number of items or characters"
 	}
 	return "invalid (" + fe.Tag() + ")"
-}
-
-// snake turns a Go field name into its JSON spelling (SizeDistribution ->
-// size_distribution).
-func snake(goName string) string {
-	var b strings.Builder
-	for i, r := range goName {
-		if r >= 'A' && r <= 'Z' {
-			if i > 0 {
-				b.WriteByte('_')
-			}
-			r += 'a' - 'A'
-		}
-		b.WriteRune(r)
-	}
-	return b.String()
 }
