@@ -151,85 +151,6 @@ func TestNormaliseClasses(t *testing.T) {
 	}
 }
 
-func TestSedimentedFraction(t *testing.T) {
-	t.Parallel()
-	// Uniform start: class i settled fraction min(1, v t/H) (Allen 1997);
-	// hand values with speeds proportional to d^2 (Stokes).
-	classes := []physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}
-	speed := func(d float64) float64 { return 1e-6 * (d / 1e-6) * (d / 1e-6) } // 1, 4, 16 um/s
-	cases := []struct {
-		duration, height, want float64
-	}{
-		{0, 0.1, 0},
-		{1000, 0.1, 0.5*0.01 + 0.3*0.04 + 0.2*0.16},
-		{10000, 0.1, 0.5*0.1 + 0.3*0.4 + 0.2*1},
-		{1e6, 0.1, 1},
-	}
-	for _, c := range cases {
-		got := physics.SedimentedFraction(classes, speed, c.duration, c.height)
-		if math.Abs(got-c.want) > 1e-12 {
-			t.Errorf("SedimentedFraction(t=%v, H=%v) = %.6f, want %.6f", c.duration, c.height, got, c.want)
-		}
-	}
-	cream := func(d float64) float64 { return -speed(d) }
-	if a, b := physics.SedimentedFraction(classes, cream, 1000, 0.1), physics.SedimentedFraction(classes, speed, 1000, 0.1); a != b {
-		t.Errorf("creaming %v differs from settling %v at equal speeds", a, b)
-	}
-	if got := physics.SedimentedFraction(nil, speed, 1000, 0.1); got != 0 {
-		t.Errorf("no classes: %v, want 0", got)
-	}
-}
-
-func TestMaxPackingPolydisperse(t *testing.T) {
-	t.Parallel()
-	// Ouchiyama & Tanaka (1981) written out independently in
-	// testdata/reference/beyond_dlvo.py [calc]; a single size must give
-	// phi0 = RandomClosePacking exactly (the model's own limit [pub]).
-	logNormal := func(span float64) []physics.SizeClass {
-		c, err := physics.LogNormalFromSpan(1e-6, span, 25)
-		if err != nil {
-			t.Fatal(err)
-		}
-		return c
-	}
-	cases := []struct {
-		name    string
-		classes []physics.SizeClass
-		want    float64
-		tol     float64
-	}{
-		{"single size", []physics.SizeClass{{1e-6, 1}}, physics.RandomClosePacking, 1e-15},
-		{"two equal sizes", []physics.SizeClass{{1e-6, 0.4}, {1e-6, 0.6}}, physics.RandomClosePacking, 1e-15},
-		{"log-normal span 0.5", logNormal(0.5), 0.64351956, 1e-7},
-		{"log-normal span 1", logNormal(1), 0.66039356, 1e-7},
-		{"log-normal span 1.5", logNormal(1.5), 0.69352133, 1e-7},
-		{"log-normal span 2", logNormal(2), 0.73562226, 1e-7},
-		{"binary 2:1, 30 % small", []physics.SizeClass{{1e-6, 0.3}, {2e-6, 0.7}}, 0.65495004, 1e-7},
-		{"binary 5:1, 30 % small", []physics.SizeClass{{1e-6, 0.3}, {5e-6, 0.7}}, 0.73857431, 1e-7},
-		// The model gives 0.898 here, above Furnas's 1 - 0.36^2 bound: capped.
-		{"binary 1000:1, 20 % small", []physics.SizeClass{{1e-9, 0.2}, {1e-6, 0.8}}, physics.MaxPackingCap, 1e-15},
-	}
-	for _, c := range cases {
-		got := physics.MaxPackingPolydisperse(c.classes)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("%s: %.8f, want %.8f", c.name, got, c.want)
-		}
-	}
-	if math.Abs(physics.MaxPackingCap-0.8704) > 1e-12 {
-		t.Errorf("MaxPackingCap = %v, want 0.8704", physics.MaxPackingCap)
-	}
-	// Wider distributions pack more densely, and never reach 1.
-	prev := 0.0
-	for _, span := range []float64{0, 0.25, 0.5, 1, 1.5, 2, 3, 5, 10} {
-		c, _ := physics.LogNormalFromSpan(1e-6, span, 25)
-		got := physics.MaxPackingPolydisperse(c)
-		if got < prev || got >= 1 {
-			t.Errorf("span %v: max packing %.5f after %.5f", span, got, prev)
-		}
-		prev = got
-	}
-}
-
 func ExampleLogNormalFromSpan() {
 	classes, err := physics.LogNormalFromSpan(1e-6, 1.0, 5)
 	if err != nil {
@@ -246,11 +167,4 @@ func ExampleLogNormalFromSpan() {
 	// 1.569 um  0.2383
 	// 2.463 um  0.0359
 	// max packing 0.663
-}
-
-func BenchmarkLogNormalMaxPacking(b *testing.B) {
-	for b.Loop() {
-		c, _ := physics.LogNormalFromSpan(1e-6, 1, physics.DefaultLogNormalClasses)
-		physics.MaxPackingPolydisperse(c)
-	}
 }

@@ -106,21 +106,6 @@ func (p Pair) Barrier() Extremum {
 	return b
 }
 
-// BarrierNear is Barrier for a pair whose barrier is expected near
-// separation h (m), as along a sequence of slowly changing pairs in a root
-// search: it climbs from h to the maximum, and falls back to Barrier's full
-// scan when it finds none there or h is not positive.
-func (p Pair) BarrierNear(h float64) Extremum {
-	c := p.curve()
-	if h > 0 {
-		if v, at, ok := c.maximumNear(h); ok && v > 0 {
-			return Extremum{Energy: v, Separation: at, Found: true}
-		}
-	}
-	b, _ := c.extrema(false)
-	return b
-}
-
 // SecondaryMinimum returns the secondary minimum: the lowest energy beyond
 // the barrier, counted only when it is below 0 J, lies inside the search
 // range and a barrier exists. Method as Barrier.

@@ -190,3 +190,36 @@ func ClearLayer(speed, duration, height float64) float64 {
 	}
 	return math.Min(math.Abs(speed)*duration, height)
 }
+
+// SedimentedFraction returns the fraction of the solids volume that has
+// reached the end of its travel (the bottom when settling, the top when
+// creaming) after duration (s) in a column of height (m) in which every
+// class started uniformly spread: class i contributes its volume fraction
+// times min(1, |v_i| t / H), with v_i = speedOf(diameter) in m/s. classes
+// should be normalised; no classes give 0. It panics unless height is
+// positive and finite and duration >= 0, and if speedOf returns NaN.
+//
+// Reference: Allen, Particle Size Measurement, 5th ed. (1997)
+// (cumulative sedimentation from a homogeneous start).
+func SedimentedFraction(classes []SizeClass, speedOf func(diameter float64) float64, duration, height float64) float64 {
+	if !(height > 0) || math.IsInf(height, 1) || !(duration >= 0) {
+		panic("physics: SedimentedFraction needs finite height > 0 and duration >= 0")
+	}
+	settled := 0.0
+	for _, c := range classes {
+		v := speedOf(c.Diameter)
+		if math.IsNaN(v) {
+			panic("physics: SedimentedFraction: speedOf returned NaN")
+		}
+		travel := 0.0 // a class at rest stays put even after an infinite time
+		if v != 0 {
+			travel = math.Abs(v) * duration
+		}
+		if travel >= height {
+			settled += c.VolumeFraction
+		} else {
+			settled += c.VolumeFraction * travel / height
+		}
+	}
+	return settled
+}

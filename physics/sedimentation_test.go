@@ -246,3 +246,32 @@ func ExampleStokesVelocity() {
 	fmt.Printf("%.3g µm/s, %.1f mm/day\n", v*1e6, v*86400e3)
 	// Output: 0.612 µm/s, 52.9 mm/day
 }
+
+func TestSedimentedFraction(t *testing.T) {
+	t.Parallel()
+	// Uniform start: class i settled fraction min(1, v t/H) (Allen 1997);
+	// hand values with speeds proportional to d^2 (Stokes).
+	classes := []physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}
+	speed := func(d float64) float64 { return 1e-6 * (d / 1e-6) * (d / 1e-6) } // 1, 4, 16 um/s
+	cases := []struct {
+		duration, height, want float64
+	}{
+		{0, 0.1, 0},
+		{1000, 0.1, 0.5*0.01 + 0.3*0.04 + 0.2*0.16},
+		{10000, 0.1, 0.5*0.1 + 0.3*0.4 + 0.2*1},
+		{1e6, 0.1, 1},
+	}
+	for _, c := range cases {
+		got := physics.SedimentedFraction(classes, speed, c.duration, c.height)
+		if math.Abs(got-c.want) > 1e-12 {
+			t.Errorf("SedimentedFraction(t=%v, H=%v) = %.6f, want %.6f", c.duration, c.height, got, c.want)
+		}
+	}
+	cream := func(d float64) float64 { return -speed(d) }
+	if a, b := physics.SedimentedFraction(classes, cream, 1000, 0.1), physics.SedimentedFraction(classes, speed, 1000, 0.1); a != b {
+		t.Errorf("creaming %v differs from settling %v at equal speeds", a, b)
+	}
+	if got := physics.SedimentedFraction(nil, speed, 1000, 0.1); got != 0 {
+		t.Errorf("no classes: %v, want 0", got)
+	}
+}

@@ -1,10 +1,6 @@
 package physics
 
-import (
-	"math"
-
-	"gonum.org/v1/gonum/integrate/quad"
-)
+import "math"
 
 // Log10StabilityRatio returns log10 W, the Fuchs stability ratio of the pair:
 // the factor by which the interaction slows Brownian aggregation relative to
@@ -310,30 +306,6 @@ func (c *pairCurve) barrierWidth(s float64) float64 {
 	slope /= c.kT
 	curvature /= c.kT
 	return 1 / math.Sqrt(math.Abs(curvature)+slope*slope+1e-300)
-}
-
-// quadratureRule holds the nodes and weights of a fixed rule: Gauss–Legendre
-// on [-1, 1], or Gauss–Hermite for the weight exp(-t^2) on the whole line.
-type quadratureRule struct{ x, w []float64 }
-
-var (
-	gaussLegendre4 = newGaussLegendre(4)
-	gaussLegendre6 = newGaussLegendre(6)
-	gaussLegendre8 = newGaussLegendre(8)
-	gaussHermite5  = newGaussHermite(5)
-	gaussHermite7  = newGaussHermite(7)
-)
-
-func newGaussHermite(n int) quadratureRule {
-	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
-	quad.Hermite{}.FixedLocations(r.x, r.w, math.Inf(-1), math.Inf(1))
-	return r
-}
-
-func newGaussLegendre(n int) quadratureRule {
-	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
-	quad.Legendre{}.FixedLocations(r.x, r.w, -1, 1)
-	return r
 }
 
 // sortSmall is an insertion sort for the few panel edges.

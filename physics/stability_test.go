@@ -87,20 +87,6 @@ func TestLog10StabilityRatioPeak(t *testing.T) {
 	}
 }
 
-func TestGaussHermiteNodes(t *testing.T) {
-	t.Parallel()
-	// M. Abramowitz & I. A. Stegun, Handbook of Mathematical Functions
-	// (1964), table 25.10, n = 5: nodes 0, 0.958572464614, 2.020182870456;
-	// weights 0.945308720483, 0.393619323152, 0.019953242059.
-	want := []struct{ x, w float64 }{{-2.020182870456, 0.019953242059}, {-0.958572464614, 0.393619323152},
-		{0, 0.945308720483}, {0.958572464614, 0.393619323152}, {2.020182870456, 0.019953242059}}
-	for i, w := range want {
-		if math.Abs(gaussHermite5.x[i]-w.x) > 1e-11 || math.Abs(gaussHermite5.w[i]-w.w) > 1e-11 {
-			t.Errorf("node %d: (%.12f, %.12f), want (%.12f, %.12f)", i, gaussHermite5.x[i], gaussHermite5.w[i], w.x, w.w)
-		}
-	}
-}
-
 func TestStabilityRatioPeakPath(t *testing.T) {
 	t.Parallel()
 	// A sharp barrier of 15 kT or more, well clear of the closest approach,
