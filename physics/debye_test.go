@@ -111,3 +111,30 @@ func ExampleDebyeLength() {
 	fmt.Printf("%.3g nm\n", l*1e9)
 	// Output: 3.04 nm
 }
+
+func TestDoubleLayerRange(t *testing.T) {
+	t.Parallel()
+	// Israelachvili (2011), eq. 14.37: the Debye length of a 1:1 salt at
+	// 25 °C is 0.304/sqrt(I [M]) nm, 9.61 nm at 1 mM [pub]; capped at the
+	// radius, and the radius without ions [practice].
+	kappa := 1 / 9.61e-9
+	cases := []struct {
+		name                string
+		kappa, radius, want float64
+	}{
+		{"1 mM, a = 100 nm", kappa, 100e-9, 9.61e-9},
+		{"1 mM, a = 5 nm", kappa, 5e-9, 5e-9},
+		{"no ions", 0, 50e-9, 50e-9},
+	}
+	for _, c := range cases {
+		if got := physics.DoubleLayerRange(c.kappa, c.radius); math.Abs(got-c.want) > 1e-12*c.want {
+			t.Errorf("%s: DoubleLayerRange = %.4e m, want %.4e", c.name, got, c.want)
+		}
+	}
+	defer func() {
+		if recover() == nil {
+			t.Error("zero radius: no panic")
+		}
+	}()
+	physics.DoubleLayerRange(kappa, 0)
+}

@@ -174,6 +174,22 @@ func SizeSpan(classes []SizeClass) float64 {
 	return (DiameterAtCumulative(classes, 0.9) - DiameterAtCumulative(classes, 0.1)) / D50(classes)
 }
 
+// LargestDiameter returns the largest class diameter (m) of classes: the
+// upper end of the distribution, where the sizes most exposed to gravity sit.
+// It panics on no classes.
+//
+// Reference: ISO 9276-1:1998 (the upper size of a histogram).
+func LargestDiameter(classes []SizeClass) float64 {
+	if len(classes) == 0 {
+		panic("physics: LargestDiameter needs at least one class")
+	}
+	largest := classes[0].Diameter
+	for _, c := range classes[1:] {
+		largest = math.Max(largest, c.Diameter)
+	}
+	return largest
+}
+
 // GeometricSpread returns the volume-weighted geometric standard deviation
 // exp(sd of ln d) of normalised classes (dimensionless, 1 for a single
 // size); for a log-normal it is exp(sigma). It panics on no classes.

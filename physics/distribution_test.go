@@ -151,6 +151,37 @@ func TestNormaliseClasses(t *testing.T) {
 	}
 }
 
+func TestLargestDiameter(t *testing.T) {
+	t.Parallel()
+	// The upper class of a histogram (ISO 9276-1) [practice], in any order.
+	cases := []struct {
+		classes []physics.SizeClass
+		want    float64
+	}{
+		{[]physics.SizeClass{{1e-6, 1}}, 1e-6},
+		{[]physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}, 4e-6},
+		{[]physics.SizeClass{{4e-6, 0.2}, {1e-6, 0.5}, {2e-6, 0.3}}, 4e-6},
+	}
+	for _, c := range cases {
+		if got := physics.LargestDiameter(c.classes); got != c.want {
+			t.Errorf("LargestDiameter(%v) = %g, want %g", c.classes, got, c.want)
+		}
+	}
+	classes, err := physics.LogNormalFromSpan(1e-6, 1, physics.DefaultLogNormalClasses)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, want := physics.LargestDiameter(classes), classes[len(classes)-1].Diameter; got != want {
+		t.Errorf("log-normal: %g, want the last class %g", got, want)
+	}
+	defer func() {
+		if recover() == nil {
+			t.Error("no classes: no panic")
+		}
+	}()
+	physics.LargestDiameter(nil)
+}
+
 func ExampleLogNormalFromSpan() {
 	classes, err := physics.LogNormalFromSpan(1e-6, 1.0, 5)
 	if err != nil {

@@ -84,6 +84,26 @@ func OrthoPerikineticRatio(shearRate, diameter, viscosity, tempK float64) float6
 	return shearRate * diameter * diameter * diameter * viscosity / (2 * Boltzmann * tempK)
 }
 
+// OrthoPerikineticShearRate inverts OrthoPerikineticRatio for the shear
+// rate: the rate G (1/s) at which the orthokinetic kernel of equal spheres
+// of diameter d (m) is ratio (>= 0) times the perikinetic one, in a liquid
+// of viscosity eta (Pa s) at tempK (K),
+//
+//	G = 2 kT ratio / (eta d^3).
+//
+// Below it Brownian collisions weigh more than ratio allows. It panics
+// unless ratio >= 0, diameter > 0, viscosity > 0 and tempK > 0, all finite.
+//
+// Reference: as OrthoPerikineticRatio (Smoluchowski 1917), solved for G.
+func OrthoPerikineticShearRate(ratio, diameter, viscosity, tempK float64) float64 {
+	checkKineticsArgs(viscosity, tempK)
+	if !(ratio >= 0 && ratio <= math.MaxFloat64) || !(diameter > 0 && diameter <= math.MaxFloat64) {
+		panic("physics: OrthoPerikineticShearRate needs a finite ratio >= 0 and diameter > 0")
+	}
+	kT := Boltzmann * tempK
+	return ratio * 2 * kT / (viscosity * diameter * diameter * diameter)
+}
+
 func checkKineticsArgs(viscosity, tempK float64) {
 	if !(viscosity > 0 && viscosity <= math.MaxFloat64) || !(tempK > 0 && tempK <= math.MaxFloat64) {
 		panic("physics: aggregation kinetics needs finite viscosity > 0 and tempK > 0")

@@ -41,6 +41,33 @@ func TestAggregationKinetics(t *testing.T) {
 	}
 }
 
+func TestOrthoPerikineticShearRate(t *testing.T) {
+	t.Parallel()
+	// Smoluchowski's ratio G d^3 eta/(2 kT) solved for G: ratio 1 at
+	// d = 1 um in 1 mPa s at 25 °C, testdata/reference/inverses.py [calc];
+	// J. Gregory, Particles in Water (2006), ch. 6: for 1 um particles in
+	// water the two rates are equal near G = 10 1/s [memory].
+	tests := []struct {
+		name                            string
+		ratio, diameter, eta, want, tol float64
+	}{
+		{"inverses.py", 1, 1e-6, 1e-3, 8.232810, 1e-6},
+		{"Gregory", 1, 1e-6, 1e-3, 10, 0.3},
+		{"ratio 0", 0, 1e-6, 1e-3, 0, 0},
+		// The ratio of TestAggregationKinetics [calc], read backwards.
+		{"interaction.py backwards", 10.810404, 1e-6, 0.89e-3, 100, 1e-6},
+	}
+	for _, tt := range tests {
+		if got := OrthoPerikineticShearRate(tt.ratio, tt.diameter, tt.eta, 298.15); interactionRelErr(got, tt.want) > tt.tol {
+			t.Errorf("%s: %.7g 1/s, want %.7g", tt.name, got, tt.want)
+		}
+	}
+	g := OrthoPerikineticShearRate(2.5, 0.7e-6, 3e-3, 310)
+	if got := OrthoPerikineticRatio(g, 0.7e-6, 3e-3, 310); interactionRelErr(got, 2.5) > 1e-14 {
+		t.Errorf("round trip: %.17g, want 2.5", got)
+	}
+}
+
 func TestKineticsPanics(t *testing.T) {
 	t.Parallel()
 	for name, f := range map[string]func(){
@@ -49,6 +76,7 @@ func TestKineticsPanics(t *testing.T) {
 		"NaN log10W":       func() { Log10HalfLife(1e-3, 298, 1e18, math.NaN()) },
 		"phi above 1":      func() { NumberDensity(1.5, 1e-6) },
 		"negative shear":   func() { OrthoPerikineticRatio(-1, 1e-6, 1e-3, 298) },
+		"negative ratio":   func() { OrthoPerikineticShearRate(-1, 1e-6, 1e-3, 298) },
 	} {
 		func() {
 			defer func() {

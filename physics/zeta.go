@@ -2,6 +2,20 @@ package physics
 
 import "math"
 
+// Limits of Henry's function f(kappa a) for a non-conducting sphere, the
+// factor of ZetaHenry: HenryHuckel for a double layer much thicker than the
+// particle (kappa a -> 0), HenrySmoluchowski for one much thinner
+// (kappa a -> Inf).
+//
+// References: E. Hückel, Phys. Z. 25 (1924) 204; M. von Smoluchowski, Bull.
+// Int. Acad. Sci. Cracovie (1903) 184; D. C. Henry, Proc. R. Soc. Lond. A 133
+// (1931) 106, who joins the two; R. J. Hunter, Zeta Potential in Colloid
+// Science (Academic Press, 1981), ch. 3.
+const (
+	HenryHuckel       = 1.0
+	HenrySmoluchowski = 1.5
+)
+
 // ZetaSmoluchowski returns the zeta potential in V of a particle of
 // electrophoretic mobility mobility (m^2/(V s), signed) in a liquid of
 // viscosity viscosity (Pa s) and relative permittivity epsR:
@@ -16,7 +30,7 @@ import "math"
 // Cracovie (1903) 184; R. J. Hunter, Zeta Potential in Colloid Science
 // (Academic Press, 1981), ch. 3.
 func ZetaSmoluchowski(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, 1.5)
+	return ZetaHenry(mobility, viscosity, epsR, HenrySmoluchowski)
 }
 
 // ZetaHuckel returns the zeta potential in V in the thick-double-layer limit
@@ -29,7 +43,7 @@ func ZetaSmoluchowski(mobility, viscosity, epsR float64) float64 {
 // Reference: E. Hückel, "Die Kataphorese der Kugel", Phys. Z. 25 (1924) 204;
 // Hunter (1981), ch. 3.
 func ZetaHuckel(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, 1)
+	return ZetaHenry(mobility, viscosity, epsR, HenryHuckel)
 }
 
 // ZetaHenry returns the zeta potential in V from the mobility (m^2/(V s)),
@@ -67,7 +81,7 @@ func HenryOhshima(kappaA float64) float64 {
 		panic("physics: HenryOhshima needs kappaA >= 0")
 	}
 	if kappaA == 0 {
-		return 1
+		return HenryHuckel
 	}
 	delta := 2.5 / (1 + 2*math.Exp(-kappaA))
 	c := 1 + delta/kappaA
@@ -92,9 +106,9 @@ func HenrySwanFurst(kappaA float64) float64 {
 		panic("physics: HenrySwanFurst needs kappaA >= 0")
 	}
 	if math.IsInf(kappaA, 1) {
-		return 1.5
+		return HenrySmoluchowski
 	}
-	return 1.5 - 1.5*(5*scaledExpIntegral(7, kappaA)-2*scaledExpIntegral(5, kappaA))
+	return HenrySmoluchowski - HenrySmoluchowski*(5*scaledExpIntegral(7, kappaA)-2*scaledExpIntegral(5, kappaA))
 }
 
 // scaledExpIntegral returns exp(x) E_n(x) for n >= 2 and x >= 0, where

@@ -70,6 +70,21 @@ func TestHenryFunction(t *testing.T) {
 	}
 }
 
+func TestHenryLimits(t *testing.T) {
+	t.Parallel()
+	// Hückel (1924) f = 1 and Smoluchowski (1903) f = 3/2 [pub], the ends of
+	// Henry's function (Henry 1931), which both forms reach.
+	if HenryHuckel != 1 || HenrySmoluchowski != 1.5 {
+		t.Errorf("limits %g and %g, want 1 and 1.5", HenryHuckel, HenrySmoluchowski)
+	}
+	if HenrySwanFurst(0) != HenryHuckel || HenryOhshima(0) != HenryHuckel {
+		t.Errorf("f(0) = %g (Swan & Furst), %g (Ohshima), want %g", HenrySwanFurst(0), HenryOhshima(0), HenryHuckel)
+	}
+	if math.Abs(HenrySwanFurst(1e6)-HenrySmoluchowski) > 1e-5 || math.Abs(HenryOhshima(1e6)-HenrySmoluchowski) > 1e-5 {
+		t.Errorf("f(1e6) = %g, %g, want about %g", HenrySwanFurst(1e6), HenryOhshima(1e6), HenrySmoluchowski)
+	}
+}
+
 func TestHenryOhshima(t *testing.T) {
 	t.Parallel()
 	// [pub] Ohshima 1994 claims a maximum relative error of about 1 %.
