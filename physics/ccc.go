@@ -22,7 +22,7 @@ import "math"
 // References: B. Derjaguin & L. Landau, Acta Physicochim. URSS 14 (1941) 633;
 // E. J. W. Verwey & J. Th. G. Overbeek, Theory of the Stability of Lyophobic
 // Colloids (1948), ch. X; with the linear superposition repulsion of
-// EDLLinearSuperposition.
+// Pair (Bell, Levine & McCartney 1970; Gregory 1975).
 func CCCHighPotential(hamaker, gamma, epsR, tempK float64, z int) float64 {
 	const maxF = math.MaxFloat64
 	if !(hamaker >= 0 && hamaker <= maxF) || !(math.Abs(gamma) <= 1) || !(epsR > 0 && epsR <= maxF) ||

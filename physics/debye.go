@@ -21,11 +21,6 @@ func DebyeKappa(ionicStrength, epsR, tempK float64) float64 {
 		(VacuumPermittivity * epsR * Boltzmann * tempK))
 }
 
-// DebyeLength returns 1/kappa in m (see DebyeKappa); +Inf without ions.
-func DebyeLength(ionicStrength, epsR, tempK float64) float64 {
-	return 1 / DebyeKappa(ionicStrength, epsR, tempK)
-}
-
 // ionicStrengthOfKappa inverts DebyeKappa: I = eps0 epsR kB T kappa^2 /
 // (2 NA e^2), in mol/m^3 (Debye & Hückel 1923, solved for I).
 func ionicStrengthOfKappa(kappa, epsR, tempK float64) float64 {

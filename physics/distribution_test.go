@@ -9,25 +9,6 @@ import (
 	"colloidtriage/physics"
 )
 
-func TestLogNormalSigmaFromSpan(t *testing.T) {
-	t.Parallel()
-	// sigma = asinh(span/2)/z90 with z90 = norm.ppf(0.9) = 1.2815515655
-	// (scipy.stats, testdata/reference/beyond_dlvo.py) [calc].
-	cases := []struct{ span, want, tol float64 }{
-		{0.5, 0.19309911, 1e-7},
-		{1.0, 0.37549158, 1e-7},
-		{1.5, 0.54086562, 1e-7},
-		{2.0, 0.68773946, 1e-7},
-		{0, 0, 0},
-	}
-	for _, c := range cases {
-		got := physics.LogNormalSigmaFromSpan(c.span)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("LogNormalSigmaFromSpan(%v) = %.8f, want %.8f", c.span, got, c.want)
-		}
-	}
-}
-
 func TestLogNormalFromSpanClasses(t *testing.T) {
 	t.Parallel()
 	// Five classes over +-3 sigma with the tails folded into the end
@@ -50,50 +31,6 @@ func TestLogNormalFromSpanClasses(t *testing.T) {
 		}
 		if e := math.Abs(got[i].VolumeFraction - want[i].VolumeFraction); e > 1e-8 {
 			t.Errorf("class %d fraction %.8f, want %.8f", i, got[i].VolumeFraction, want[i].VolumeFraction)
-		}
-	}
-}
-
-func TestLogNormalFromSpanRecovers(t *testing.T) {
-	t.Parallel()
-	// The span, median and geometric spread read back from the classes
-	// must match the requested log-normal (ISO 9276-5: geometric standard
-	// deviation exp(sigma)); tolerances are the discretisation error of n
-	// classes read as point masses (DiameterAtCumulative).
-	cases := []struct {
-		span      float64
-		n         int
-		spanTol   float64
-		spreadTol float64
-	}{
-		{0.5, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.0, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.5, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{2.0, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.0, 12, 0.04, 0.005},
-		{2.0, 60, 0.001, 0.002},
-	}
-	for _, c := range cases {
-		classes, err := physics.LogNormalFromSpan(2e-6, c.span, c.n)
-		if err != nil {
-			t.Fatal(err)
-		}
-		sum := 0.0
-		for _, k := range classes {
-			sum += k.VolumeFraction
-		}
-		if math.Abs(sum-1) > 1e-12 {
-			t.Errorf("span %v n %d: fractions sum to %v", c.span, c.n, sum)
-		}
-		if d := physics.D50(classes); beyondRelErr(d, 2e-6) > 1e-12 {
-			t.Errorf("span %v n %d: D50 %.6e, want 2e-6", c.span, c.n, d)
-		}
-		if s := physics.SizeSpan(classes); beyondRelErr(s, c.span) > c.spanTol {
-			t.Errorf("span %v n %d: recovered span %.5f (rel err %.1e > %.0e)", c.span, c.n, s, beyondRelErr(s, c.span), c.spanTol)
-		}
-		wantSpread := math.Exp(physics.LogNormalSigmaFromSpan(c.span))
-		if g := physics.GeometricSpread(classes); beyondRelErr(g, wantSpread) > c.spreadTol {
-			t.Errorf("span %v n %d: geometric spread %.5f, want %.5f", c.span, c.n, g, wantSpread)
 		}
 	}
 }

@@ -48,23 +48,6 @@ func HydrodynamicShearRate(energy, viscosity, radius, barrierWidth float64) floa
 	return energy / (6 * math.Pi * viscosity * radius * radius * barrierWidth)
 }
 
-// ShearPeclet returns the shear Péclet number Pe = 6 pi eta a^3 G/(kB T),
-// the ratio of the shear rate G (1/s) to the rotary-diffusion rate of a
-// sphere of radius a (m) in a liquid of viscosity eta (Pa s) at tempK (K):
-// Pe >> 1 means shear, not Brownian motion, brings particles together
-// (orthokinetic aggregation). It panics on negative, infinite or NaN
-// arguments and non-positive tempK.
-//
-// Reference: Russel, Saville & Schowalter, Colloidal Dispersions (1989)
-// (Péclet number of sheared suspensions).
-func ShearPeclet(viscosity, shearRate, radius, tempK float64) float64 {
-	checkShearArgs(viscosity, shearRate, radius)
-	if !(tempK > 0) {
-		panic("physics: ShearPeclet needs tempK > 0")
-	}
-	return 6 * math.Pi * viscosity * radius * radius * radius * shearRate / (Boltzmann * tempK)
-}
-
 func checkShearArgs(viscosity, shearRate, radius float64) {
 	if !(viscosity >= 0) || !(shearRate >= 0) || !(radius >= 0) ||
 		math.IsInf(viscosity, 1) || math.IsInf(shearRate, 1) || math.IsInf(radius, 1) {

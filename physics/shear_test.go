@@ -7,32 +7,6 @@ import (
 	"colloidtriage/physics"
 )
 
-func TestShearPeclet(t *testing.T) {
-	t.Parallel()
-	// 6 pi eta a^3 G/(kT) (Russel, Saville & Schowalter 1989) from
-	// testdata/reference/beyond_dlvo.py [calc], water 0.89 mPa s, 25 C.
-	cases := []struct {
-		radius, rate, want, tol float64
-	}{
-		{0.5e-6, 100, 50.942828, 1e-6},
-		{1e-6, 100, 407.542620, 1e-6},
-		{1e-6, 0, 0, 0},
-	}
-	for _, c := range cases {
-		got := physics.ShearPeclet(0.89e-3, c.rate, c.radius, 298.15)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("ShearPeclet(a=%v, G=%v) = %.6f, want %.6f", c.radius, c.rate, got, c.want)
-		}
-	}
-	// Independent check against Smoluchowski's orthokinetic/perikinetic
-	// ratio G d^3 eta/(2 kT) = (4/(6 pi)) Pe: d = 1 um, G = 100 1/s gives
-	// 10.8 (REFERENCES.md [calc], formula [memory]).
-	ratio := physics.ShearPeclet(0.89e-3, 100, 0.5e-6, 298.15) * 4 / (6 * math.Pi)
-	if math.Abs(ratio-10.8) > 0.05 {
-		t.Errorf("orthokinetic ratio from Pe = %.3f, want 10.8", ratio)
-	}
-}
-
 func TestHydrodynamicShearForceEnergy(t *testing.T) {
 	t.Parallel()
 	// Hand calculation of 6 pi eta a^2 G w (van de Ven & Mason 1977 order

@@ -16,36 +16,6 @@ const (
 	HenrySmoluchowski = 1.5
 )
 
-// ZetaSmoluchowski returns the zeta potential in V of a particle of
-// electrophoretic mobility mobility (m^2/(V s), signed) in a liquid of
-// viscosity viscosity (Pa s) and relative permittivity epsR:
-//
-//	zeta = eta mu / (eps0 epsR)
-//
-// It is the thin-double-layer limit (kappa a >> 1, Henry f = 3/2). It panics
-// unless viscosity > 0 and epsR > 0.
-//
-// Reference: M. von Smoluchowski, "Contribution à la théorie de l'endosmose
-// électrique et de quelques phénomènes corrélatifs", Bull. Int. Acad. Sci.
-// Cracovie (1903) 184; R. J. Hunter, Zeta Potential in Colloid Science
-// (Academic Press, 1981), ch. 3.
-func ZetaSmoluchowski(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, HenrySmoluchowski)
-}
-
-// ZetaHuckel returns the zeta potential in V in the thick-double-layer limit
-// (kappa a << 1, Henry f = 1):
-//
-//	zeta = 3 eta mu / (2 eps0 epsR)
-//
-// Units and panics as ZetaSmoluchowski.
-//
-// Reference: E. Hückel, "Die Kataphorese der Kugel", Phys. Z. 25 (1924) 204;
-// Hunter (1981), ch. 3.
-func ZetaHuckel(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, HenryHuckel)
-}
-
 // ZetaHenry returns the zeta potential in V from the mobility (m^2/(V s)),
 // viscosity (Pa s), relative permittivity and Henry's function value f
 // (1 <= f <= 3/2, from HenrySwanFurst or HenryOhshima), inverting

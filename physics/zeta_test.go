@@ -23,10 +23,10 @@ func TestZetaFromMobility(t *testing.T) {
 		got, want float64
 		tol       float64
 	}{
-		{"Smoluchowski", ZetaSmoluchowski(mu, eta, epsR), 25.60953e-3, 1e-6},
-		{"Hückel", ZetaHuckel(mu, eta, epsR), 38.41430e-3, 1e-6},
+		{"Smoluchowski", ZetaHenry(mu, eta, epsR, HenrySmoluchowski), 25.60953e-3, 1e-6},
+		{"Hückel", ZetaHenry(mu, eta, epsR, HenryHuckel), 38.41430e-3, 1e-6},
 		{"Henry ka=10", ZetaHenry(mu, eta, epsR, HenrySwanFurst(10)), 30.66343e-3, 1e-6},
-		{"sign follows mobility", ZetaSmoluchowski(-mu, eta, epsR), -25.60953e-3, 1e-6},
+		{"sign follows mobility", ZetaHenry(-mu, eta, epsR, HenrySmoluchowski), -25.60953e-3, 1e-6},
 	}
 	for _, tt := range tests {
 		if e := interactionRelErr(tt.got, tt.want); e > tt.tol {
@@ -113,8 +113,8 @@ func TestHenryOhshima(t *testing.T) {
 func TestZetaPanics(t *testing.T) {
 	t.Parallel()
 	for name, f := range map[string]func(){
-		"zero viscosity": func() { ZetaSmoluchowski(1e-8, 0, 78) },
-		"zero epsR":      func() { ZetaHuckel(1e-8, 1e-3, 0) },
+		"zero viscosity": func() { ZetaHenry(1e-8, 0, 78, HenrySmoluchowski) },
+		"zero epsR":      func() { ZetaHenry(1e-8, 1e-3, 0, HenryHuckel) },
 		"zero f":         func() { ZetaHenry(1e-8, 1e-3, 78, 0) },
 		"negative ka":    func() { HenrySwanFurst(-1) },
 		"NaN ka":         func() { HenryOhshima(math.NaN()) },
