@@ -15,21 +15,6 @@ const (
 	BridgingMaxCoverage  = 0.9
 )
 
-// LaMerBridgingFactor returns theta (1 - theta), the fraction of collisions
-// in which a chain adsorbed on one particle meets bare surface on the
-// other, for a fractional surface coverage theta in [0, 1]: it is 0 on bare
-// and on saturated surfaces and peaks at 1/4 at half coverage. It panics
-// outside [0, 1] or on NaN.
-//
-// Reference: La Mer & Healy, Rev. Pure Appl. Chem. 13, 112 (1963); Healy &
-// La Mer, J. Colloid Sci. 19, 323 (1964).
-func LaMerBridgingFactor(coverage float64) float64 {
-	if !(coverage >= 0 && coverage <= 1) {
-		panic("physics: LaMerBridgingFactor needs 0 <= coverage <= 1")
-	}
-	return coverage * (1 - coverage)
-}
-
 // BridgingLikely applies the rules of thumb for bridging flocculation by an
 // adsorbing polymer and says which one decided. All must hold:
 //

@@ -73,18 +73,6 @@ func TestPolymerNumberDensity(t *testing.T) {
 	}
 }
 
-func TestLaMerBridgingFactor(t *testing.T) {
-	t.Parallel()
-	// La Mer & Healy (1963): efficiency theta (1 - theta), optimum 1/4 at
-	// half coverage, zero on bare and saturated surfaces [pub].
-	cases := []struct{ theta, want float64 }{{0, 0}, {0.5, 0.25}, {1, 0}, {0.1, 0.09}, {0.9, 0.09}}
-	for _, c := range cases {
-		if got := physics.LaMerBridgingFactor(c.theta); math.Abs(got-c.want) > 1e-15 {
-			t.Errorf("LaMerBridgingFactor(%v) = %v, want %v", c.theta, got, c.want)
-		}
-	}
-}
-
 func TestBridgingLikely(t *testing.T) {
 	t.Parallel()
 	// Rules of thumb documented on BridgingLikely: La Mer & Healy (1963)

@@ -21,7 +21,27 @@ func DebyeKappa(ionicStrength, epsR, tempK float64) float64 {
 		(VacuumPermittivity * epsR * Boltzmann * tempK))
 }
 
-// DebyeLength returns 1/kappa in m (see DebyeKappa); +Inf without ions.
-func DebyeLength(ionicStrength, epsR, tempK float64) float64 {
-	return 1 / DebyeKappa(ionicStrength, epsR, tempK)
+// ionicStrengthOfKappa inverts DebyeKappa: I = eps0 epsR kB T kappa^2 /
+// (2 NA e^2), in mol/m^3 (Debye & Hückel 1923, solved for I).
+func ionicStrengthOfKappa(kappa, epsR, tempK float64) float64 {
+	return kappa * kappa * VacuumPermittivity * epsR * Boltzmann * tempK /
+		(2 * Avogadro * ElementaryCharge * ElementaryCharge)
+}
+
+// DoubleLayerRange returns the range, in m, over which the double-layer
+// repulsion between spheres of radius (m, > 0) acts: the Debye length
+// 1/kappa (kappa in 1/m, >= 0), at most the radius. The repulsion decays as
+// exp(-kappa h); where the Debye length exceeds the radius (kappa a < 1) the
+// particle's own size bounds the range instead. kappa = 0 (no ions) gives
+// the radius. It panics on a negative or non-finite kappa or a non-positive
+// or non-finite radius.
+//
+// References: E. J. W. Verwey & J. Th. G. Overbeek, Theory of the Stability
+// of Lyophobic Colloids (1948), ch. IV (decay length 1/kappa); the cap at
+// the radius is common practice.
+func DoubleLayerRange(kappa, radius float64) float64 {
+	if !(kappa >= 0 && kappa <= math.MaxFloat64) || !(radius > 0 && radius <= math.MaxFloat64) {
+		panic("physics: DoubleLayerRange needs finite kappa >= 0 and radius > 0")
+	}
+	return 1 / math.Max(kappa, 1/radius)
 }

@@ -18,7 +18,7 @@ func debyeLengthOfSalt(t *testing.T, formula string, mM, celsius float64) float6
 	}
 	ions := s.Ions(mM)
 	tk := physics.Kelvin(celsius)
-	return physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk) * 1e9
+	return 1e9 / physics.DebyeKappa(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
 }
 
 func TestDebyeLengthSalts(t *testing.T) {
@@ -63,12 +63,12 @@ func TestDebyeLengthPureWater(t *testing.T) {
 	// REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc].
 	ions := physics.IonsFromPH(7)
 	tk := physics.Kelvin(25)
-	got := physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk) * 1e9
+	got := 1e9 / physics.DebyeKappa(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
 	if e := basicsRelErr(got, 961); e > 1e-3 {
 		t.Errorf("Debye length of pure water = %.2f nm, want 961 (rel err %.1e)", got, e)
 	}
-	if got := physics.DebyeLength(0, 2, 298.15); !math.IsInf(got, 1) {
-		t.Errorf("DebyeLength without ions = %v, want +Inf", got)
+	if got := physics.DebyeKappa(0, 2, 298.15); got != 0 {
+		t.Errorf("DebyeKappa without ions = %v, want 0", got)
 	}
 }
 
@@ -100,14 +100,41 @@ func TestDebyePrefactorTemperature(t *testing.T) {
 }
 
 // The screening length of 10 mM NaCl in water at 25 °C.
-func ExampleDebyeLength() {
+func ExampleDebyeKappa() {
 	salt, err := physics.ParseSalt("NaCl")
 	if err != nil {
 		panic(err)
 	}
 	ions := salt.Ions(10) // 10 mM = 10 mol/m^3
 	tk := physics.Kelvin(25)
-	l := physics.DebyeLength(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
-	fmt.Printf("%.3g nm\n", l*1e9)
-	// Output: 3.04 nm
+	kappa := physics.DebyeKappa(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
+	fmt.Printf("Debye length %.3g nm\n", 1e9/kappa)
+	// Output: Debye length 3.04 nm
+}
+
+func TestDoubleLayerRange(t *testing.T) {
+	t.Parallel()
+	// Israelachvili (2011), eq. 14.37: the Debye length of a 1:1 salt at
+	// 25 °C is 0.304/sqrt(I [M]) nm, 9.61 nm at 1 mM [pub]; capped at the
+	// radius, and the radius without ions [practice].
+	kappa := 1 / 9.61e-9
+	cases := []struct {
+		name                string
+		kappa, radius, want float64
+	}{
+		{"1 mM, a = 100 nm", kappa, 100e-9, 9.61e-9},
+		{"1 mM, a = 5 nm", kappa, 5e-9, 5e-9},
+		{"no ions", 0, 50e-9, 50e-9},
+	}
+	for _, c := range cases {
+		if got := physics.DoubleLayerRange(c.kappa, c.radius); math.Abs(got-c.want) > 1e-12*c.want {
+			t.Errorf("%s: DoubleLayerRange = %.4e m, want %.4e", c.name, got, c.want)
+		}
+	}
+	defer func() {
+		if recover() == nil {
+			t.Error("zero radius: no panic")
+		}
+	}()
+	physics.DoubleLayerRange(kappa, 0)
 }

@@ -20,7 +20,7 @@ var ErrInvalidDistribution = errors.New("physics: invalid size distribution")
 // z90 is the 90 % quantile of the standard normal distribution.
 const z90 = 1.2815515655446004
 
-// LogNormalSigmaFromSpan returns the standard deviation sigma of ln d of a
+// logNormalSigmaFromSpan returns the standard deviation sigma of ln d of a
 // log-normal distribution with span (d90 - d10)/d50 >= 0: from
 // span = exp(z90 sigma) - exp(-z90 sigma) = 2 sinh(z90 sigma),
 // sigma = asinh(span/2)/z90 with z90 = 1.28155. It panics on a negative
@@ -28,22 +28,23 @@ const z90 = 1.2815515655446004
 //
 // References: ISO 9276-5:2005 (log-normal size distributions); Allen,
 // Particle Size Measurement, 5th ed. (1997).
-func LogNormalSigmaFromSpan(span float64) float64 {
+func logNormalSigmaFromSpan(span float64) float64 {
 	if !(span >= 0) {
-		panic("physics: LogNormalSigmaFromSpan needs span >= 0")
+		panic("physics: logNormalSigmaFromSpan needs span >= 0")
 	}
 	return math.Asinh(span/2) / z90
 }
 
 // DefaultLogNormalClasses is a number of classes for LogNormalFromSpan that
-// reproduces the requested span within 0.5 % and the geometric spread
-// within 0.2 % when read back with SizeSpan and GeometricSpread.
+// reproduces the requested span (d90 - d10)/d50 within 0.5 % and the
+// geometric spread exp(sd of ln d) within 0.2 % when read back from the
+// classes.
 const DefaultLogNormalClasses = 25
 
 // LogNormalFromSpan returns n size classes of a volume-weighted log-normal
 // distribution with median diameter d50 (m) and span (d90 - d10)/d50: n
-// bins of equal width in ln d cover ln d50 +- 3 sigma (sigma from
-// LogNormalSigmaFromSpan), each class sits at its bin's centre and holds
+// bins of equal width in ln d cover ln d50 +- 3 sigma (sigma =
+// asinh(span/2)/z90, z90 = 1.28155), each class sits at its bin's centre and holds
 // the normal probability of its bin, the 0.13 % tails beyond +-3 sigma
 // going to the end classes so that the fractions sum to 1. A span of 0 or
 // n = 1 gives the single class {d50, 1}. It returns an error wrapping
@@ -61,7 +62,7 @@ func LogNormalFromSpan(d50, span float64, n int) ([]SizeClass, error) {
 	case n < 1:
 		return nil, fmt.Errorf("%w: %d classes requested, need at least 1", ErrInvalidDistribution, n)
 	}
-	sigma := LogNormalSigmaFromSpan(span)
+	sigma := logNormalSigmaFromSpan(span)
 	if sigma == 0 || n == 1 {
 		return []SizeClass{{Diameter: d50, VolumeFraction: 1}}, nil
 	}
@@ -121,7 +122,7 @@ func NormaliseClasses(classes []SizeClass) ([]SizeClass, error) {
 	return out, nil
 }
 
-// DiameterAtCumulative returns the diameter (m) below which the fraction
+// diameterAtCumulative returns the diameter (m) below which the fraction
 // p (0..1) of the solids volume lies. The classes are read as a histogram:
 // each class spans from the geometric mean of its diameter and its lower
 // neighbour's to that of its diameter and its upper neighbour's (the outer
@@ -131,12 +132,12 @@ func NormaliseClasses(classes []SizeClass) ([]SizeClass, error) {
 // p outside [0, 1].
 //
 // Reference: ISO 9276-1:1998 (histogram and cumulative distribution Q3).
-func DiameterAtCumulative(classes []SizeClass, p float64) float64 {
+func diameterAtCumulative(classes []SizeClass, p float64) float64 {
 	if len(classes) == 0 {
-		panic("physics: DiameterAtCumulative needs at least one class")
+		panic("physics: diameterAtCumulative needs at least one class")
 	}
 	if !(p >= 0 && p <= 1) {
-		panic("physics: DiameterAtCumulative needs 0 <= p <= 1")
+		panic("physics: diameterAtCumulative needs 0 <= p <= 1")
 	}
 	n := len(classes)
 	if n == 1 {
@@ -162,131 +163,25 @@ func DiameterAtCumulative(classes []SizeClass, p float64) float64 {
 	return math.Exp(lower)
 }
 
-// D50 returns the volume median diameter (m) of normalised, sorted classes
-// (see DiameterAtCumulative).
-func D50(classes []SizeClass) float64 { return DiameterAtCumulative(classes, 0.5) }
-
-// SizeSpan returns the span (d90 - d10)/d50 of normalised, sorted classes
-// (see DiameterAtCumulative).
+// D50 returns the volume median diameter (m) of normalised, sorted classes,
+// read from the histogram with the cumulative volume linear in ln d inside
+// a class. A single class gives its diameter. It panics on no classes.
 //
-// Reference: Allen, Particle Size Measurement, 5th ed. (1997).
-func SizeSpan(classes []SizeClass) float64 {
-	return (DiameterAtCumulative(classes, 0.9) - DiameterAtCumulative(classes, 0.1)) / D50(classes)
-}
+// Reference: ISO 9276-1:1998 (histogram and cumulative distribution Q3).
+func D50(classes []SizeClass) float64 { return diameterAtCumulative(classes, 0.5) }
 
-// GeometricSpread returns the volume-weighted geometric standard deviation
-// exp(sd of ln d) of normalised classes (dimensionless, 1 for a single
-// size); for a log-normal it is exp(sigma). It panics on no classes.
+// LargestDiameter returns the largest class diameter (m) of classes: the
+// upper end of the distribution, where the sizes most exposed to gravity sit.
+// It panics on no classes.
 //
-// Reference: ISO 9276-5:2005.
-func GeometricSpread(classes []SizeClass) float64 {
+// Reference: ISO 9276-1:1998 (the upper size of a histogram).
+func LargestDiameter(classes []SizeClass) float64 {
 	if len(classes) == 0 {
-		panic("physics: GeometricSpread needs at least one class")
+		panic("physics: LargestDiameter needs at least one class")
 	}
-	mean := 0.0
-	for _, c := range classes {
-		mean += c.VolumeFraction * math.Log(c.Diameter)
+	largest := classes[0].Diameter
+	for _, c := range classes[1:] {
+		largest = math.Max(largest, c.Diameter)
 	}
-	v := 0.0
-	for _, c := range classes {
-		d := math.Log(c.Diameter) - mean
-		v += c.VolumeFraction * d * d
-	}
-	return math.Exp(math.Sqrt(v))
-}
-
-// SedimentedFraction returns the fraction of the solids volume that has
-// reached the end of its travel (the bottom when settling, the top when
-// creaming) after duration (s) in a column of height (m) in which every
-// class started uniformly spread: class i contributes its volume fraction
-// times min(1, |v_i| t / H), with v_i = speedOf(diameter) in m/s. classes
-// should be normalised; no classes give 0. It panics unless height is
-// positive and finite and duration >= 0, and if speedOf returns NaN.
-//
-// Reference: Allen, Particle Size Measurement, 5th ed. (1997)
-// (cumulative sedimentation from a homogeneous start).
-func SedimentedFraction(classes []SizeClass, speedOf func(diameter float64) float64, duration, height float64) float64 {
-	if !(height > 0) || math.IsInf(height, 1) || !(duration >= 0) {
-		panic("physics: SedimentedFraction needs finite height > 0 and duration >= 0")
-	}
-	settled := 0.0
-	for _, c := range classes {
-		v := speedOf(c.Diameter)
-		if math.IsNaN(v) {
-			panic("physics: SedimentedFraction: speedOf returned NaN")
-		}
-		travel := 0.0 // a class at rest stays put even after an infinite time
-		if v != 0 {
-			travel = math.Abs(v) * duration
-		}
-		if travel >= height {
-			settled += c.VolumeFraction
-		} else {
-			settled += c.VolumeFraction * travel / height
-		}
-	}
-	return settled
-}
-
-// MaxPackingCap is the largest maximum packing fraction
-// MaxPackingPolydisperse returns: 1 - (1 - 0.64)^2 = 0.8704, the densest
-// random packing of two widely separated sizes (Furnas, Ind. Eng. Chem. 23,
-// 1052 (1931)). The Ouchiyama–Tanaka expression overshoots this bound for
-// widely separated binary mixtures, so nothing above it is trusted.
-const MaxPackingCap = 1 - (1-RandomClosePacking)*(1-RandomClosePacking)
-
-// MaxPackingPolydisperse returns the random close packing fraction of
-// spheres with the size distribution of classes (normalised), from the
-// model of Ouchiyama & Tanaka with the monodisperse packing
-// RandomClosePacking:
-//
-//	phi = sum f D^3 / ( sum f (D-Db)^3 H(D-Db)
-//	                   + (1/beta) sum f [(D+Db)^3 - (D-Db)^3 H(D-Db)] )
-//	beta = 1 + (4/13)(8 phi0 - 1) Db sum f (D+Db)^2 (1 - 3 Db/(8 (D+Db)))
-//	                              / sum f [D^3 - (D-Db)^3 H(D-Db)]
-//
-// with f the number fractions (volume fraction / D^3, normalised), Db the
-// number-mean diameter and H the unit step. A single size gives exactly
-// RandomClosePacking; wider distributions pack more densely; the result
-// is capped at MaxPackingCap. It panics on no classes.
-//
-// Reference: Ouchiyama & Tanaka, "Porosity of a mass of solid particles
-// having a range of sizes", Ind. Eng. Chem. Fundam. 20, 66 (1981).
-func MaxPackingPolydisperse(classes []SizeClass) float64 {
-	if len(classes) == 0 {
-		panic("physics: MaxPackingPolydisperse needs at least one class")
-	}
-	// Diameters relative to the largest keep every power of D near 1.
-	dRef := 0.0
-	for _, c := range classes {
-		dRef = math.Max(dRef, c.Diameter)
-	}
-	count, mean := 0.0, 0.0
-	for _, c := range classes {
-		x := c.Diameter / dRef
-		n := c.VolumeFraction / (x * x * x)
-		count += n
-		mean += n * x
-	}
-	if count == 0 {
-		return RandomClosePacking
-	}
-	mean /= count
-	var solid, large, betaNum, betaDen, shell float64
-	for _, c := range classes {
-		x := c.Diameter / dRef
-		f := c.VolumeFraction / (x * x * x) / count
-		over := 0.0
-		if x > mean {
-			over = (x - mean) * (x - mean) * (x - mean)
-		}
-		sum := x + mean
-		solid += f * x * x * x
-		large += f * over
-		betaNum += f * sum * sum * (1 - 3*mean/(8*sum))
-		betaDen += f * (x*x*x - over)
-		shell += f * (sum*sum*sum - over)
-	}
-	beta := 1 + 4.0/13*(8*RandomClosePacking-1)*mean*betaNum/betaDen
-	return math.Min(solid/(large+shell/beta), MaxPackingCap)
+	return largest
 }

@@ -9,25 +9,6 @@ import (
 	"colloidtriage/physics"
 )
 
-func TestLogNormalSigmaFromSpan(t *testing.T) {
-	t.Parallel()
-	// sigma = asinh(span/2)/z90 with z90 = norm.ppf(0.9) = 1.2815515655
-	// (scipy.stats, testdata/reference/beyond_dlvo.py) [calc].
-	cases := []struct{ span, want, tol float64 }{
-		{0.5, 0.19309911, 1e-7},
-		{1.0, 0.37549158, 1e-7},
-		{1.5, 0.54086562, 1e-7},
-		{2.0, 0.68773946, 1e-7},
-		{0, 0, 0},
-	}
-	for _, c := range cases {
-		got := physics.LogNormalSigmaFromSpan(c.span)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("LogNormalSigmaFromSpan(%v) = %.8f, want %.8f", c.span, got, c.want)
-		}
-	}
-}
-
 func TestLogNormalFromSpanClasses(t *testing.T) {
 	t.Parallel()
 	// Five classes over +-3 sigma with the tails folded into the end
@@ -50,50 +31,6 @@ func TestLogNormalFromSpanClasses(t *testing.T) {
 		}
 		if e := math.Abs(got[i].VolumeFraction - want[i].VolumeFraction); e > 1e-8 {
 			t.Errorf("class %d fraction %.8f, want %.8f", i, got[i].VolumeFraction, want[i].VolumeFraction)
-		}
-	}
-}
-
-func TestLogNormalFromSpanRecovers(t *testing.T) {
-	t.Parallel()
-	// The span, median and geometric spread read back from the classes
-	// must match the requested log-normal (ISO 9276-5: geometric standard
-	// deviation exp(sigma)); tolerances are the discretisation error of n
-	// classes read as point masses (DiameterAtCumulative).
-	cases := []struct {
-		span      float64
-		n         int
-		spanTol   float64
-		spreadTol float64
-	}{
-		{0.5, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.0, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.5, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{2.0, physics.DefaultLogNormalClasses, 0.005, 0.002},
-		{1.0, 12, 0.04, 0.005},
-		{2.0, 60, 0.001, 0.002},
-	}
-	for _, c := range cases {
-		classes, err := physics.LogNormalFromSpan(2e-6, c.span, c.n)
-		if err != nil {
-			t.Fatal(err)
-		}
-		sum := 0.0
-		for _, k := range classes {
-			sum += k.VolumeFraction
-		}
-		if math.Abs(sum-1) > 1e-12 {
-			t.Errorf("span %v n %d: fractions sum to %v", c.span, c.n, sum)
-		}
-		if d := physics.D50(classes); beyondRelErr(d, 2e-6) > 1e-12 {
-			t.Errorf("span %v n %d: D50 %.6e, want 2e-6", c.span, c.n, d)
-		}
-		if s := physics.SizeSpan(classes); beyondRelErr(s, c.span) > c.spanTol {
-			t.Errorf("span %v n %d: recovered span %.5f (rel err %.1e > %.0e)", c.span, c.n, s, beyondRelErr(s, c.span), c.spanTol)
-		}
-		wantSpread := math.Exp(physics.LogNormalSigmaFromSpan(c.span))
-		if g := physics.GeometricSpread(classes); beyondRelErr(g, wantSpread) > c.spreadTol {
-			t.Errorf("span %v n %d: geometric spread %.5f, want %.5f", c.span, c.n, g, wantSpread)
 		}
 	}
 }
@@ -151,83 +88,35 @@ func TestNormaliseClasses(t *testing.T) {
 	}
 }
 
-func TestSedimentedFraction(t *testing.T) {
+func TestLargestDiameter(t *testing.T) {
 	t.Parallel()
-	// Uniform start: class i settled fraction min(1, v t/H) (Allen 1997);
-	// hand values with speeds proportional to d^2 (Stokes).
-	classes := []physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}
-	speed := func(d float64) float64 { return 1e-6 * (d / 1e-6) * (d / 1e-6) } // 1, 4, 16 um/s
+	// The upper class of a histogram (ISO 9276-1) [practice], in any order.
 	cases := []struct {
-		duration, height, want float64
-	}{
-		{0, 0.1, 0},
-		{1000, 0.1, 0.5*0.01 + 0.3*0.04 + 0.2*0.16},
-		{10000, 0.1, 0.5*0.1 + 0.3*0.4 + 0.2*1},
-		{1e6, 0.1, 1},
-	}
-	for _, c := range cases {
-		got := physics.SedimentedFraction(classes, speed, c.duration, c.height)
-		if math.Abs(got-c.want) > 1e-12 {
-			t.Errorf("SedimentedFraction(t=%v, H=%v) = %.6f, want %.6f", c.duration, c.height, got, c.want)
-		}
-	}
-	cream := func(d float64) float64 { return -speed(d) }
-	if a, b := physics.SedimentedFraction(classes, cream, 1000, 0.1), physics.SedimentedFraction(classes, speed, 1000, 0.1); a != b {
-		t.Errorf("creaming %v differs from settling %v at equal speeds", a, b)
-	}
-	if got := physics.SedimentedFraction(nil, speed, 1000, 0.1); got != 0 {
-		t.Errorf("no classes: %v, want 0", got)
-	}
-}
-
-func TestMaxPackingPolydisperse(t *testing.T) {
-	t.Parallel()
-	// Ouchiyama & Tanaka (1981) written out independently in
-	// testdata/reference/beyond_dlvo.py [calc]; a single size must give
-	// phi0 = RandomClosePacking exactly (the model's own limit [pub]).
-	logNormal := func(span float64) []physics.SizeClass {
-		c, err := physics.LogNormalFromSpan(1e-6, span, 25)
-		if err != nil {
-			t.Fatal(err)
-		}
-		return c
-	}
-	cases := []struct {
-		name    string
 		classes []physics.SizeClass
 		want    float64
-		tol     float64
 	}{
-		{"single size", []physics.SizeClass{{1e-6, 1}}, physics.RandomClosePacking, 1e-15},
-		{"two equal sizes", []physics.SizeClass{{1e-6, 0.4}, {1e-6, 0.6}}, physics.RandomClosePacking, 1e-15},
-		{"log-normal span 0.5", logNormal(0.5), 0.64351956, 1e-7},
-		{"log-normal span 1", logNormal(1), 0.66039356, 1e-7},
-		{"log-normal span 1.5", logNormal(1.5), 0.69352133, 1e-7},
-		{"log-normal span 2", logNormal(2), 0.73562226, 1e-7},
-		{"binary 2:1, 30 % small", []physics.SizeClass{{1e-6, 0.3}, {2e-6, 0.7}}, 0.65495004, 1e-7},
-		{"binary 5:1, 30 % small", []physics.SizeClass{{1e-6, 0.3}, {5e-6, 0.7}}, 0.73857431, 1e-7},
-		// The model gives 0.898 here, above Furnas's 1 - 0.36^2 bound: capped.
-		{"binary 1000:1, 20 % small", []physics.SizeClass{{1e-9, 0.2}, {1e-6, 0.8}}, physics.MaxPackingCap, 1e-15},
+		{[]physics.SizeClass{{1e-6, 1}}, 1e-6},
+		{[]physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}, 4e-6},
+		{[]physics.SizeClass{{4e-6, 0.2}, {1e-6, 0.5}, {2e-6, 0.3}}, 4e-6},
 	}
 	for _, c := range cases {
-		got := physics.MaxPackingPolydisperse(c.classes)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("%s: %.8f, want %.8f", c.name, got, c.want)
+		if got := physics.LargestDiameter(c.classes); got != c.want {
+			t.Errorf("LargestDiameter(%v) = %g, want %g", c.classes, got, c.want)
 		}
 	}
-	if math.Abs(physics.MaxPackingCap-0.8704) > 1e-12 {
-		t.Errorf("MaxPackingCap = %v, want 0.8704", physics.MaxPackingCap)
+	classes, err := physics.LogNormalFromSpan(1e-6, 1, physics.DefaultLogNormalClasses)
+	if err != nil {
+		t.Fatal(err)
 	}
-	// Wider distributions pack more densely, and never reach 1.
-	prev := 0.0
-	for _, span := range []float64{0, 0.25, 0.5, 1, 1.5, 2, 3, 5, 10} {
-		c, _ := physics.LogNormalFromSpan(1e-6, span, 25)
-		got := physics.MaxPackingPolydisperse(c)
-		if got < prev || got >= 1 {
-			t.Errorf("span %v: max packing %.5f after %.5f", span, got, prev)
+	if got, want := physics.LargestDiameter(classes), classes[len(classes)-1].Diameter; got != want {
+		t.Errorf("log-normal: %g, want the last class %g", got, want)
+	}
+	defer func() {
+		if recover() == nil {
+			t.Error("no classes: no panic")
 		}
-		prev = got
-	}
+	}()
+	physics.LargestDiameter(nil)
 }
 
 func ExampleLogNormalFromSpan() {
@@ -246,11 +135,4 @@ func ExampleLogNormalFromSpan() {
 	// 1.569 um  0.2383
 	// 2.463 um  0.0359
 	// max packing 0.663
-}
-
-func BenchmarkLogNormalMaxPacking(b *testing.B) {
-	for b.Loop() {
-		c, _ := physics.LogNormalFromSpan(1e-6, 1, physics.DefaultLogNormalClasses)
-		physics.MaxPackingPolydisperse(c)
-	}
 }

@@ -11,5 +11,10 @@
 // length at exact density match, a Debye length without ions); callers turn
 // such values into statements, never into numbers of a report.
 //
+// A formula solved for another of its variables (StokesRadius for
+// StokesVelocity, PerrinRadius for GravitationalLength) lives beside the
+// formula, with its own source and test, so that no caller solves one by
+// hand.
+//
 // The package imports only the standard library and gonum.
 package physics

@@ -132,8 +132,8 @@ func FuzzPair(f *testing.F) {
 		}
 
 		for _, honig := range []bool{false, true} {
-			if w := physics.Log10StabilityRatio(p, honig); !fuzzFinite(w) {
-				t.Fatalf("Log10StabilityRatio(honig=%v) = %g for %+v", honig, w, p)
+			if w := physics.Log10StabilityRatioWith(p, p.Barrier(), honig); !fuzzFinite(w) {
+				t.Fatalf("Log10StabilityRatioWith(honig=%v) = %g for %+v", honig, w, p)
 			}
 			// The peak estimate: NaN without a barrier (or where it does
 			// not apply), never infinite.
@@ -165,7 +165,7 @@ func TestFuzzFindings(t *testing.T) {
 		ConstantPotential: true}
 	for name, pair := range map[string]physics.Pair{"10 mm at 429 K": p, "0.1 mm in water": q} {
 		t.Run(name, func(t *testing.T) {
-			if w := physics.Log10StabilityRatio(pair, true); !fuzzFinite(w) {
+			if w := physics.Log10StabilityRatioWith(pair, pair.Barrier(), true); !fuzzFinite(w) {
 				t.Errorf("Log10StabilityRatio = %g for %+v", w, pair)
 			}
 			b := pair.Barrier()
@@ -181,7 +181,7 @@ func TestFuzzFindings(t *testing.T) {
 	r := physics.Pair{Radius: 8.298273063100851e-09, Hamaker: 7.777777777777786e-19, Potential: -0.3, Kappa: 1e4,
 		EpsR: 78.4, TempK: 222.15, Retarded: true, ConstantPotential: true}
 	t.Run("8.3 nm, Debye length 100 um", func(t *testing.T) {
-		if w := physics.Log10StabilityRatio(r, true); !fuzzFinite(w) {
+		if w := physics.Log10StabilityRatioWith(r, r.Barrier(), true); !fuzzFinite(w) {
 			t.Errorf("Log10StabilityRatio = %g for %+v", w, r)
 		}
 	})
@@ -293,12 +293,7 @@ func FuzzMinimumStericThickness(f *testing.F) {
 		hamaker = fuzzWithin(hamaker, 0, 1e-18)
 		tempK = fuzzWithin(tempK, 213.15, 573.15)
 		allowedKT = fuzzLogWithin(allowedKT, 1e-3, 100)
-		vdw := func(h float64) float64 {
-			if retarded {
-				return physics.VdWRetardedGregory(radius, h, hamaker, physics.GregoryLambda)
-			}
-			return physics.VdWHamaker(radius, h, hamaker)
-		}
+		vdw := physics.Pair{Radius: radius, Hamaker: hamaker, EpsR: 78.4, TempK: tempK, Retarded: retarded}.EnergyCurve()
 		delta := physics.MinimumStericThickness(vdw, tempK, allowedKT)
 		limit := allowedKT * physics.Boltzmann * tempK
 		switch {

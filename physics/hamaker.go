@@ -25,10 +25,10 @@ const UVAbsorptionFrequency = 3.0e15
 // 435; J. N. Israelachvili, Intermolecular and Surface Forces, 3rd ed. (2011),
 // eq. 13.16.
 func HamakerTaborWinterton(eps1, n1, eps3, n3, tempK float64) float64 {
-	return HamakerAsymmetricTaborWinterton(eps1, n1, eps1, n1, eps3, n3, tempK)
+	return hamakerAsymmetricTaborWinterton(eps1, n1, eps1, n1, eps3, n3, tempK)
 }
 
-// HamakerAsymmetricTaborWinterton returns the non-retarded Hamaker constant
+// hamakerAsymmetricTaborWinterton returns the non-retarded Hamaker constant
 // A132 in J of medium 1 interacting with medium 2 across medium 3:
 //
 //	A132 = 3/4 kT (e1-e3)/(e1+e3) (e2-e3)/(e2+e3)
@@ -40,7 +40,7 @@ func HamakerTaborWinterton(eps1, n1, eps3, n3, tempK float64) float64 {
 //
 // Reference: J. N. Israelachvili, Intermolecular and Surface Forces, 3rd ed.
 // (2011), eq. 13.15.
-func HamakerAsymmetricTaborWinterton(eps1, n1, eps2, n2, eps3, n3, tempK float64) float64 {
+func hamakerAsymmetricTaborWinterton(eps1, n1, eps2, n2, eps3, n3, tempK float64) float64 {
 	for _, v := range [...]float64{eps1, n1, eps2, n2, eps3, n3, tempK} {
 		if !(v > 0 && v <= math.MaxFloat64) {
 			panic("physics: Tabor–Winterton Hamaker constant needs finite permittivities, indices and tempK > 0")
@@ -52,35 +52,4 @@ func HamakerAsymmetricTaborWinterton(eps1, n1, eps2, n2, eps3, n3, tempK float64
 	dispersion := 3 * Planck * UVAbsorptionFrequency / (8 * math.Sqrt2) *
 		(n1*n1 - n3*n3) * (n2*n2 - n3*n3) / (s1 * s2 * (s1 + s2))
 	return zeroFrequency + dispersion
-}
-
-// CombineHamaker131 returns A131 in J, the Hamaker constant of material 1
-// across medium 3, from the in-vacuum constants a11 and a33 (J) by the
-// combining relation
-//
-//	A131 = (sqrt A11 - sqrt A33)^2
-//
-// which neglects the zero-frequency term and is good to a factor of about
-// two. It panics if a11 or a33 is negative or not finite.
-//
-// References: H. C. Hamaker, Physica 4 (1937) 1058; J. N. Israelachvili,
-// Intermolecular and Surface Forces, 3rd ed. (2011), ch. 13 (combining
-// relations); D. J. Shaw, Introduction to Colloid and Surface Chemistry,
-// 4th ed. (1992), ch. 8.
-func CombineHamaker131(a11, a33 float64) float64 {
-	return CombineHamaker132(a11, a11, a33)
-}
-
-// CombineHamaker132 returns A132 in J, materials 1 and 2 across medium 3,
-// from the in-vacuum constants (J):
-//
-//	A132 = (sqrt A11 - sqrt A33)(sqrt A22 - sqrt A33)
-//
-// Sources, accuracy and panics as CombineHamaker131.
-func CombineHamaker132(a11, a22, a33 float64) float64 {
-	const maxF = math.MaxFloat64
-	if !(a11 >= 0 && a11 <= maxF) || !(a22 >= 0 && a22 <= maxF) || !(a33 >= 0 && a33 <= maxF) {
-		panic("physics: CombineHamaker needs finite non-negative in-vacuum Hamaker constants")
-	}
-	return (math.Sqrt(a11) - math.Sqrt(a33)) * (math.Sqrt(a22) - math.Sqrt(a33))
 }

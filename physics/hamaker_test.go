@@ -44,36 +44,14 @@ func TestHamakerAsymmetric(t *testing.T) {
 	const tempK = 298.15
 	// [calc] testdata/reference/interaction.py, Israelachvili eq. 13.15:
 	// polystyrene / water / hexadecane.
-	if got := HamakerAsymmetricTaborWinterton(2.55, 1.59, 2.05, 1.434, 80, 1.333, tempK); interactionRelErr(got, 9.506733e-21) > 1e-6 {
+	if got := hamakerAsymmetricTaborWinterton(2.55, 1.59, 2.05, 1.434, 80, 1.333, tempK); interactionRelErr(got, 9.506733e-21) > 1e-6 {
 		t.Errorf("A132 PS/water/hexadecane = %g, want 9.506733e-21", got)
 	}
 	// Medium 3 between 1 and 2 in both permittivity and index gives
 	// repulsion (Israelachvili ch. 13): silica-like (3.8, 1.45) and air (1, 1)
 	// across a hydrocarbon (2.0, 1.40).
-	if got := HamakerAsymmetricTaborWinterton(3.8, 1.45, 1, 1, 2.0, 1.40, tempK); !(got < 0) {
+	if got := hamakerAsymmetricTaborWinterton(3.8, 1.45, 1, 1, 2.0, 1.40, tempK); !(got < 0) {
 		t.Errorf("A132 with the medium in between = %g, want < 0", got)
-	}
-}
-
-func TestCombineHamaker(t *testing.T) {
-	t.Parallel()
-	// [calc] testdata/reference/interaction.py: (sqrt 65 - sqrt 37)^2 zJ from
-	// Walstra's in-vacuum values for polystyrene and water.
-	tests := []struct {
-		name      string
-		got, want float64
-	}{
-		{"131", CombineHamaker131(65e-21, 37e-21), 3.918401e-21},
-		{"132 = 131 for equal bodies", CombineHamaker132(65e-21, 65e-21, 37e-21), 3.918401e-21},
-		{"132 opposite sides of the medium", CombineHamaker132(65e-21, 20e-21, 37e-21), (math.Sqrt(65e-21) - math.Sqrt(37e-21)) * (math.Sqrt(20e-21) - math.Sqrt(37e-21))},
-	}
-	for _, tt := range tests {
-		if e := interactionRelErr(tt.got, tt.want); e > 1e-6 {
-			t.Errorf("%s: got %g, want %g", tt.name, tt.got, tt.want)
-		}
-	}
-	if got := CombineHamaker132(65e-21, 20e-21, 37e-21); !(got < 0) {
-		t.Errorf("132 with A22 < A33 < A11 = %g, want < 0", got)
 	}
 }
 
@@ -82,9 +60,7 @@ func TestHamakerPanics(t *testing.T) {
 	for name, f := range map[string]func(){
 		"zero permittivity": func() { HamakerTaborWinterton(0, 1.5, 80, 1.33, 298) },
 		"zero temperature":  func() { HamakerTaborWinterton(2, 1.5, 80, 1.33, 0) },
-		"NaN index":         func() { HamakerAsymmetricTaborWinterton(2, math.NaN(), 2, 1.4, 80, 1.33, 298) },
-		"negative A11":      func() { CombineHamaker131(-1e-20, 3e-20) },
-		"infinite A33":      func() { CombineHamaker132(1e-20, 1e-20, math.Inf(1)) },
+		"NaN index":         func() { hamakerAsymmetricTaborWinterton(2, math.NaN(), 2, 1.4, 80, 1.33, 298) },
 	} {
 		func() {
 			defer func() {

@@ -23,7 +23,7 @@ const MinimumSeparation = 0.2e-9
 //   - EpsR (> 0) relative permittivity and TempK (K, > 0) temperature.
 //   - Valence: counter-ion valence for the linear superposition double layer;
 //     0 is read as 1.
-//   - Retarded: Gregory's retarded van der Waals (GregoryLambda) instead of
+//   - Retarded: Gregory's retarded van der Waals (wavelength 100 nm) instead of
 //     Hamaker's exact non-retarded expression.
 //   - ConstantPotential: Hogg–Healy–Fuerstenau instead of linear
 //     superposition.
@@ -62,10 +62,11 @@ func (p Pair) WithIonicStrength(ionicStrength float64) Pair {
 }
 
 // Energy returns the total interaction energy in J at surface separation h
-// (m, >= 0): van der Waals (VdWHamaker, or VdWRetardedGregory when
-// p.Retarded) plus double layer (EDLLinearSuperposition, or
-// EDLHoggHealyFuerstenau when p.ConstantPotential) plus depletion
-// (AsakuraOosawa). At h = 0 it is -Inf when p.Hamaker > 0 and +Inf when
+// (m, >= 0): van der Waals (Hamaker's exact equal-sphere expression, or
+// Gregory's retarded one when p.Retarded; see hamakerSphereSum and
+// gregoryRetardation) plus double layer (linear superposition, or
+// Hogg–Healy–Fuerstenau when p.ConstantPotential; see lsaPrefactor and
+// hhfPrefactor) plus depletion (AsakuraOosawa). At h = 0 it is -Inf when p.Hamaker > 0 and +Inf when
 // p.Hamaker < 0. It panics on a negative h or an invalid Pair.
 //
 // References: B. Derjaguin & L. Landau, Acta Physicochim. URSS 14 (1941) 633;
@@ -102,21 +103,6 @@ func (p Pair) Parts(h float64) (vdw, edl, depletion float64) {
 // dV/d(ln h) = 0 with a bisection safeguard refine it to 1e-6 in ln h.
 func (p Pair) Barrier() Extremum {
 	c := p.curve()
-	b, _ := c.extrema(false)
-	return b
-}
-
-// BarrierNear is Barrier for a pair whose barrier is expected near
-// separation h (m), as along a sequence of slowly changing pairs in a root
-// search: it climbs from h to the maximum, and falls back to Barrier's full
-// scan when it finds none there or h is not positive.
-func (p Pair) BarrierNear(h float64) Extremum {
-	c := p.curve()
-	if h > 0 {
-		if v, at, ok := c.maximumNear(h); ok && v > 0 {
-			return Extremum{Energy: v, Separation: at, Found: true}
-		}
-	}
 	b, _ := c.extrema(false)
 	return b
 }
@@ -221,7 +207,7 @@ func (c *pairCurve) parts(h float64) (vdw, edl, depletion float64) {
 	case h == 0:
 		vdw = math.Inf(-int(math.Copysign(1, c.hamaker)))
 	case c.retarded:
-		vdw = -c.hamaker * c.radius / (12 * h) * gregoryRetardation(GregoryLambda/(gregoryB*h))
+		vdw = -c.hamaker * c.radius / (12 * h) * gregoryRetardation(gregoryLambda/(gregoryB*h))
 	default:
 		vdw = -c.hamaker / 6 * hamakerSphereSum(c.radius, h)
 	}

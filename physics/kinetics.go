@@ -2,35 +2,6 @@ package physics
 
 import "math"
 
-// RapidCollisionKernel returns Smoluchowski's perikinetic collision kernel
-// in m^3/s for equal spheres in rapid (diffusion-limited) aggregation,
-//
-//	beta = 8 kT / (3 eta),
-//
-// in the convention where the collision rate per unit volume is
-// beta N^2 / 2 (J = 16 pi D a N^2 / 2 with D = kT/(6 pi eta a)); it does not
-// depend on size. viscosity in Pa s, tempK in K. It panics unless both are
-// finite and > 0.
-//
-// Reference: M. von Smoluchowski, "Versuch einer mathematischen Theorie der
-// Koagulationskinetik kolloider Lösungen", Z. Phys. Chem. 92 (1917) 129.
-func RapidCollisionKernel(viscosity, tempK float64) float64 {
-	checkKineticsArgs(viscosity, tempK)
-	return 8 * Boltzmann * tempK / (3 * viscosity)
-}
-
-// RapidAggregationRateConstant returns the number-loss rate constant k in
-// m^3/s of rapid perikinetic aggregation, dN/dt = -k N^2 with
-// k = 4 kT/(3 eta), half of RapidCollisionKernel because each collision
-// removes one particle of two. Slow aggregation divides it by the stability
-// ratio W. Arguments and panics as RapidCollisionKernel.
-//
-// Reference: Smoluchowski (1917); D. J. Shaw, Introduction to Colloid and
-// Surface Chemistry, 4th ed. (1992), ch. 8.
-func RapidAggregationRateConstant(viscosity, tempK float64) float64 {
-	return RapidCollisionKernel(viscosity, tempK) / 2
-}
-
 // Log10HalfLife returns log10 of the aggregation half-life in s, the time in
 // which the particle number falls to half its initial value N0
 // (numberDensity, 1/m^3) in Brownian aggregation slowed by the stability
@@ -42,8 +13,13 @@ func RapidAggregationRateConstant(viscosity, tempK float64) float64 {
 // viscosity and tempK are finite and > 0, numberDensity is finite and >= 0
 // and log10W is not NaN.
 //
-// Reference: Smoluchowski (1917); the half-life of second-order kinetics
-// 1/(k N0) with k = RapidAggregationRateConstant/W.
+// Reference: M. von Smoluchowski, "Versuch einer mathematischen Theorie der
+// Koagulationskinetik kolloider Lösungen", Z. Phys. Chem. 92 (1917) 129: the
+// half-life 1/(k N0) of second-order kinetics dN/dt = -k N^2 with the
+// number-loss constant of rapid perikinetic aggregation k = 4 kT/(3 eta)
+// (half the collision kernel 8 kT/(3 eta), each collision removing one
+// particle of two), divided by W; D. J. Shaw, Introduction to Colloid and
+// Surface Chemistry, 4th ed. (1992), ch. 8.
 func Log10HalfLife(viscosity, tempK, numberDensity, log10W float64) float64 {
 	checkKineticsArgs(viscosity, tempK)
 	if !(numberDensity >= 0 && numberDensity <= math.MaxFloat64) || math.IsNaN(log10W) {
@@ -82,6 +58,26 @@ func OrthoPerikineticRatio(shearRate, diameter, viscosity, tempK float64) float6
 		panic("physics: OrthoPerikineticRatio needs a finite shearRate >= 0 and diameter > 0")
 	}
 	return shearRate * diameter * diameter * diameter * viscosity / (2 * Boltzmann * tempK)
+}
+
+// OrthoPerikineticShearRate inverts OrthoPerikineticRatio for the shear
+// rate: the rate G (1/s) at which the orthokinetic kernel of equal spheres
+// of diameter d (m) is ratio (>= 0) times the perikinetic one, in a liquid
+// of viscosity eta (Pa s) at tempK (K),
+//
+//	G = 2 kT ratio / (eta d^3).
+//
+// Below it Brownian collisions weigh more than ratio allows. It panics
+// unless ratio >= 0, diameter > 0, viscosity > 0 and tempK > 0, all finite.
+//
+// Reference: as OrthoPerikineticRatio (Smoluchowski 1917), solved for G.
+func OrthoPerikineticShearRate(ratio, diameter, viscosity, tempK float64) float64 {
+	checkKineticsArgs(viscosity, tempK)
+	if !(ratio >= 0 && ratio <= math.MaxFloat64) || !(diameter > 0 && diameter <= math.MaxFloat64) {
+		panic("physics: OrthoPerikineticShearRate needs a finite ratio >= 0 and diameter > 0")
+	}
+	kT := Boltzmann * tempK
+	return ratio * 2 * kT / (viscosity * diameter * diameter * diameter)
 }
 
 func checkKineticsArgs(viscosity, tempK float64) {

@@ -9,16 +9,14 @@ func TestAggregationKinetics(t *testing.T) {
 	t.Parallel()
 	const eta, tempK = 0.89e-3, 298.15
 	n0 := NumberDensity(0.1, 0.5e-6)
-	// [calc] testdata/reference/interaction.py; REFERENCES.md: kernel
-	// 1.233e-17 m^3/s, number-loss constant 6.17e-18 m^3/s, half-life
-	// 1.62e17 W/N0 s, 0.85 s at a = 0.5 um and phi = 0.1, ortho/peri 10.8.
+	// [calc] testdata/reference/interaction.py; REFERENCES.md: half-life
+	// 1.62e17 W/N0 s (the inverse of the number-loss constant 6.17e-18
+	// m^3/s), 0.85 s at a = 0.5 um and phi = 0.1, ortho/peri 10.8.
 	tests := []struct {
 		name      string
 		got, want float64
 		tol       float64
 	}{
-		{"collision kernel", RapidCollisionKernel(eta, tempK), 1.233380e-17, 1e-6},
-		{"number-loss constant", RapidAggregationRateConstant(eta, tempK), 6.166899e-18, 1e-6},
 		{"N0", n0, 1.909859e17, 1e-6},
 		{"half-life", math.Pow(10, Log10HalfLife(eta, tempK, n0, 0)), 0.849047, 1e-5},
 		{"half-life W = 1e6", math.Pow(10, Log10HalfLife(eta, tempK, n0, 6)-6), 0.849047, 1e-5},
@@ -41,14 +39,42 @@ func TestAggregationKinetics(t *testing.T) {
 	}
 }
 
+func TestOrthoPerikineticShearRate(t *testing.T) {
+	t.Parallel()
+	// Smoluchowski's ratio G d^3 eta/(2 kT) solved for G: ratio 1 at
+	// d = 1 um in 1 mPa s at 25 °C, testdata/reference/inverses.py [calc];
+	// J. Gregory, Particles in Water (2006), ch. 6: for 1 um particles in
+	// water the two rates are equal near G = 10 1/s [memory].
+	tests := []struct {
+		name                            string
+		ratio, diameter, eta, want, tol float64
+	}{
+		{"inverses.py", 1, 1e-6, 1e-3, 8.232810, 1e-6},
+		{"Gregory", 1, 1e-6, 1e-3, 10, 0.3},
+		{"ratio 0", 0, 1e-6, 1e-3, 0, 0},
+		// The ratio of TestAggregationKinetics [calc], read backwards.
+		{"interaction.py backwards", 10.810404, 1e-6, 0.89e-3, 100, 1e-6},
+	}
+	for _, tt := range tests {
+		if got := OrthoPerikineticShearRate(tt.ratio, tt.diameter, tt.eta, 298.15); interactionRelErr(got, tt.want) > tt.tol {
+			t.Errorf("%s: %.7g 1/s, want %.7g", tt.name, got, tt.want)
+		}
+	}
+	g := OrthoPerikineticShearRate(2.5, 0.7e-6, 3e-3, 310)
+	if got := OrthoPerikineticRatio(g, 0.7e-6, 3e-3, 310); interactionRelErr(got, 2.5) > 1e-14 {
+		t.Errorf("round trip: %.17g, want 2.5", got)
+	}
+}
+
 func TestKineticsPanics(t *testing.T) {
 	t.Parallel()
 	for name, f := range map[string]func(){
-		"zero viscosity":   func() { RapidCollisionKernel(0, 298) },
-		"zero temperature": func() { RapidAggregationRateConstant(1e-3, 0) },
+		"zero viscosity":   func() { Log10HalfLife(0, 298, 1e18, 0) },
+		"zero temperature": func() { OrthoPerikineticRatio(1, 1e-6, 1e-3, 0) },
 		"NaN log10W":       func() { Log10HalfLife(1e-3, 298, 1e18, math.NaN()) },
 		"phi above 1":      func() { NumberDensity(1.5, 1e-6) },
 		"negative shear":   func() { OrthoPerikineticRatio(-1, 1e-6, 1e-3, 298) },
+		"negative ratio":   func() { OrthoPerikineticShearRate(-1, 1e-6, 1e-3, 298) },
 	} {
 		func() {
 			defer func() {

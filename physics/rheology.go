@@ -8,28 +8,9 @@ import "math"
 const RandomClosePacking = 0.64
 
 // DefaultIntrinsicViscosity is Einstein's intrinsic viscosity of hard
-// spheres, 5/2.
+// spheres, 5/2: a dilute suspension has the relative viscosity 1 + 2.5 phi
+// (Einstein, Ann. Phys. 19, 289 (1906); 34, 591 (1911)).
 const DefaultIntrinsicViscosity = 2.5
-
-// EinsteinViscosity returns the relative viscosity 1 + 2.5 phi of a dilute
-// suspension of hard spheres at volume fraction phi (dimensionless, valid
-// up to about 0.05). It panics unless 0 <= phi < 1.
-//
-// Reference: Einstein, Ann. Phys. 19, 289 (1906); 34, 591 (1911).
-func EinsteinViscosity(phi float64) float64 {
-	checkRheologyVolumeFraction(phi)
-	return 1 + DefaultIntrinsicViscosity*phi
-}
-
-// BatchelorViscosity returns the relative viscosity 1 + 2.5 phi +
-// 6.2 phi^2 of Brownian hard spheres at low shear, correct to second order
-// in phi (valid up to about 0.1). It panics unless 0 <= phi < 1.
-//
-// Reference: Batchelor, J. Fluid Mech. 83, 97 (1977), eq. 5.2.
-func BatchelorViscosity(phi float64) float64 {
-	checkRheologyVolumeFraction(phi)
-	return 1 + DefaultIntrinsicViscosity*phi + 6.2*phi*phi
-}
 
 // KriegerDougherty returns the relative viscosity (1 - phi/phiMax)^(-intrinsic
 // phiMax) of a suspension at volume fraction phi with maximum packing
@@ -84,12 +65,6 @@ func EffectiveVolumeFraction(phi, radius, shell float64) float64 {
 	}
 	g := 1 + shell/radius
 	return phi * g * g * g
-}
-
-func checkRheologyVolumeFraction(phi float64) {
-	if !(phi >= 0 && phi < 1) {
-		panic("physics: volume fraction must be in [0, 1)")
-	}
 }
 
 func checkKriegerDougherty(phiMax, intrinsic float64) {

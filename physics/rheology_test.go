@@ -10,17 +10,14 @@ import (
 
 func TestSuspensionViscosityAtPhi03(t *testing.T) {
 	t.Parallel()
-	// REFERENCES.md, phi = 0.3 [calc]: Einstein 1.75; Batchelor 2.308;
-	// Krieger–Dougherty (0.64) 2.751; (0.71) 2.650; six digits from
-	// testdata/reference/beyond_dlvo.py.
+	// REFERENCES.md, phi = 0.3 [calc]: Krieger–Dougherty (0.64) 2.751;
+	// (0.71) 2.650; six digits from testdata/reference/beyond_dlvo.py.
 	const phi = 0.3
 	cases := []struct {
 		name      string
 		got, want float64
 		tol       float64
 	}{
-		{"Einstein", physics.EinsteinViscosity(phi), 1.75, 1e-12},
-		{"Batchelor", physics.BatchelorViscosity(phi), 2.308, 1e-12},
 		{"KD 0.64", physics.KriegerDougherty(phi, 0.64, 2.5), 2.751197, 1e-6},
 		{"KD 0.71", physics.KriegerDougherty(phi, 0.71, 2.5), 2.650283, 1e-6},
 	}

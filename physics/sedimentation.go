@@ -40,6 +40,76 @@ func StokesVelocity(radius, deltaRho, viscosity float64) float64 {
 	return 2 * radius * radius * deltaRho * StandardGravity / (9 * viscosity)
 }
 
+// StokesRadius inverts StokesVelocity for the radius: the radius, in m, of
+// the sphere that moves at speed (m/s, sign ignored) with density excess
+// deltaRho (kg/m^3, sign ignored) in a liquid of viscosity (Pa s),
+//
+//	a = (9 eta |v| / (2 |deltaRho| g))^(1/2).
+//
+// Spheres smaller than it move slower. It returns +Inf at deltaRho = 0 and
+// speed != 0 (no size moves that fast), and 0 at speed 0. It panics on a
+// non-finite speed or deltaRho, or a non-positive or non-finite viscosity.
+//
+// Reference: G. G. Stokes, Trans. Camb. Phil. Soc. 9, 8–106 (1851), the
+// terminal velocity of StokesVelocity solved for a.
+func StokesRadius(speed, deltaRho, viscosity float64) float64 {
+	checkStokesInverse(speed, deltaRho, viscosity)
+	if speed == 0 {
+		return 0
+	}
+	return math.Sqrt(9 * viscosity * math.Abs(speed) / (2 * math.Abs(deltaRho) * StandardGravity))
+}
+
+// StokesDensityDifference inverts StokesVelocity for the density excess:
+// the magnitude |deltaRho| (kg/m^3) at which a sphere of radius (m, > 0)
+// moves at speed (m/s, sign ignored) in a liquid of viscosity (Pa s),
+//
+//	|deltaRho| = 9 eta |v| / (2 a^2 g).
+//
+// A smaller density difference moves the sphere slower. It panics on a
+// non-positive or non-finite radius or viscosity, or a non-finite speed.
+//
+// Reference: G. G. Stokes, Trans. Camb. Phil. Soc. 9, 8–106 (1851), the
+// terminal velocity of StokesVelocity solved for deltaRho.
+func StokesDensityDifference(speed, radius, viscosity float64) float64 {
+	checkStokesInverse(speed, 0, viscosity)
+	if !(radius > 0 && radius <= math.MaxFloat64) {
+		panic("physics: StokesDensityDifference needs a finite radius > 0")
+	}
+	return 9 * viscosity * math.Abs(speed) / (2 * radius * radius * StandardGravity)
+}
+
+// StokesViscosity inverts StokesVelocity for the viscosity: the viscosity,
+// in Pa s, in which a sphere of radius (m) with density excess deltaRho
+// (kg/m^3, sign ignored) moves at speed (m/s, sign ignored),
+//
+//	eta = 2 a^2 |deltaRho| g / (9 |v|).
+//
+// A more viscous liquid moves the sphere slower. It returns +Inf at speed 0
+// unless radius or deltaRho is 0, and 0 then. It panics on a negative or
+// non-finite radius, a non-finite deltaRho, or a non-finite speed.
+//
+// Reference: G. G. Stokes, Trans. Camb. Phil. Soc. 9, 8–106 (1851), the
+// terminal velocity of StokesVelocity solved for eta.
+func StokesViscosity(speed, radius, deltaRho float64) float64 {
+	checkStokesInverse(speed, deltaRho, 1)
+	if !(radius >= 0 && radius <= math.MaxFloat64) {
+		panic("physics: StokesViscosity needs a finite radius >= 0")
+	}
+	force := 2 * radius * radius * math.Abs(deltaRho) * StandardGravity
+	if force == 0 {
+		return 0
+	}
+	return force / (9 * math.Abs(speed))
+}
+
+func checkStokesInverse(speed, deltaRho, viscosity float64) {
+	if !(math.Abs(speed) <= math.MaxFloat64) || !(math.Abs(deltaRho) <= math.MaxFloat64) ||
+		!(viscosity > 0 && viscosity <= math.MaxFloat64) {
+		panic("physics: Stokes' law inverted needs finite speed, deltaRho and viscosity > 0")
+	}
+}
+
 // RichardsonZakiFactor returns the hindered-settling factor (1 - phi)^n,
 // dimensionless, by which the Stokes velocity of a suspension at particle
 // volume fraction phi is reduced; n is RichardsonZakiExponentLowRe at low
@@ -98,6 +168,30 @@ func GravitationalLength(radius, deltaRho, tempK float64) float64 {
 		return math.Inf(1)
 	}
 	return Boltzmann * tempK / weight
+}
+
+// PerrinRadius inverts GravitationalLength for the radius: the radius, in
+// m, of spheres with density excess deltaRho (kg/m^3, sign ignored) whose
+// gravitational length at tempK (K) equals length (m),
+//
+//	a = (3 kT / (4 pi |deltaRho| g l))^(1/3).
+//
+// Smaller spheres have a longer gravitational length: in a container of
+// height l they stay spread over the whole height at sedimentation
+// equilibrium. It returns +Inf at deltaRho = 0 or length = 0. It panics on a
+// negative or non-finite length, a non-finite deltaRho, or a non-positive or
+// non-finite tempK.
+//
+// Reference: J. Perrin, "Mouvement brownien et réalité moléculaire", Ann.
+// Chim. Phys. (8) 18, 5–114 (1909), the barometric law of
+// GravitationalLength solved for a.
+func PerrinRadius(length, deltaRho, tempK float64) float64 {
+	if !(length >= 0 && length <= math.MaxFloat64) || !(math.Abs(deltaRho) <= math.MaxFloat64) ||
+		!(tempK > 0 && tempK <= math.MaxFloat64) {
+		panic("physics: PerrinRadius needs finite length >= 0, deltaRho and tempK > 0")
+	}
+	kT := Boltzmann * tempK
+	return math.Cbrt(3 * kT / (4 * math.Pi * math.Abs(deltaRho) * StandardGravity * length))
 }
 
 // SuspensionDiameter returns, in m, the largest sphere diameter d for which
@@ -189,4 +283,37 @@ func ClearLayer(speed, duration, height float64) float64 {
 		panic("physics: ClearLayer needs finite duration >= 0, height >= 0 and speed")
 	}
 	return math.Min(math.Abs(speed)*duration, height)
+}
+
+// SedimentedFraction returns the fraction of the solids volume that has
+// reached the end of its travel (the bottom when settling, the top when
+// creaming) after duration (s) in a column of height (m) in which every
+// class started uniformly spread: class i contributes its volume fraction
+// times min(1, |v_i| t / H), with v_i = speedOf(diameter) in m/s. classes
+// should be normalised; no classes give 0. It panics unless height is
+// positive and finite and duration >= 0, and if speedOf returns NaN.
+//
+// Reference: Allen, Particle Size Measurement, 5th ed. (1997)
+// (cumulative sedimentation from a homogeneous start).
+func SedimentedFraction(classes []SizeClass, speedOf func(diameter float64) float64, duration, height float64) float64 {
+	if !(height > 0) || math.IsInf(height, 1) || !(duration >= 0) {
+		panic("physics: SedimentedFraction needs finite height > 0 and duration >= 0")
+	}
+	settled := 0.0
+	for _, c := range classes {
+		v := speedOf(c.Diameter)
+		if math.IsNaN(v) {
+			panic("physics: SedimentedFraction: speedOf returned NaN")
+		}
+		travel := 0.0 // a class at rest stays put even after an infinite time
+		if v != 0 {
+			travel = math.Abs(v) * duration
+		}
+		if travel >= height {
+			settled += c.VolumeFraction
+		} else {
+			settled += c.VolumeFraction * travel / height
+		}
+	}
+	return settled
 }

@@ -226,6 +226,12 @@ func TestSedimentationPanics(t *testing.T) {
 		{"quantum diameter zero density", func() { physics.QuantumDiameter(0, 298) }},
 		{"settling time negative height", func() { physics.SettlingTime(-1, 1e-6) }},
 		{"clear layer infinite duration", func() { physics.ClearLayer(0, math.Inf(1), 1) }},
+		{"Stokes radius zero viscosity", func() { physics.StokesRadius(1e-6, 1000, 0) }},
+		{"Stokes radius NaN speed", func() { physics.StokesRadius(math.NaN(), 1000, 1e-3) }},
+		{"Stokes density difference zero radius", func() { physics.StokesDensityDifference(1e-6, 0, 1e-3) }},
+		{"Stokes viscosity negative radius", func() { physics.StokesViscosity(1e-6, -1e-6, 1000) }},
+		{"Stokes viscosity infinite deltaRho", func() { physics.StokesViscosity(1e-6, 1e-6, math.Inf(1)) }},
+		{"Perrin radius negative length", func() { physics.PerrinRadius(-1, 1000, 298) }},
 	}
 	for _, c := range cases {
 		func() {
@@ -245,4 +251,113 @@ func ExampleStokesVelocity() {
 	v := physics.StokesVelocity(0.5e-6, 1000, physics.WaterViscosity(tk))
 	fmt.Printf("%.3g µm/s, %.1f mm/day\n", v*1e6, v*86400e3)
 	// Output: 0.612 µm/s, 52.9 mm/day
+}
+
+func TestSedimentedFraction(t *testing.T) {
+	t.Parallel()
+	// Uniform start: class i settled fraction min(1, v t/H) (Allen 1997);
+	// hand values with speeds proportional to d^2 (Stokes).
+	classes := []physics.SizeClass{{1e-6, 0.5}, {2e-6, 0.3}, {4e-6, 0.2}}
+	speed := func(d float64) float64 { return 1e-6 * (d / 1e-6) * (d / 1e-6) } // 1, 4, 16 um/s
+	cases := []struct {
+		duration, height, want float64
+	}{
+		{0, 0.1, 0},
+		{1000, 0.1, 0.5*0.01 + 0.3*0.04 + 0.2*0.16},
+		{10000, 0.1, 0.5*0.1 + 0.3*0.4 + 0.2*1},
+		{1e6, 0.1, 1},
+	}
+	for _, c := range cases {
+		got := physics.SedimentedFraction(classes, speed, c.duration, c.height)
+		if math.Abs(got-c.want) > 1e-12 {
+			t.Errorf("SedimentedFraction(t=%v, H=%v) = %.6f, want %.6f", c.duration, c.height, got, c.want)
+		}
+	}
+	cream := func(d float64) float64 { return -speed(d) }
+	if a, b := physics.SedimentedFraction(classes, cream, 1000, 0.1), physics.SedimentedFraction(classes, speed, 1000, 0.1); a != b {
+		t.Errorf("creaming %v differs from settling %v at equal speeds", a, b)
+	}
+	if got := physics.SedimentedFraction(nil, speed, 1000, 0.1); got != 0 {
+		t.Errorf("no classes: %v, want 0", got)
+	}
+}
+
+func TestStokesInverses(t *testing.T) {
+	t.Parallel()
+	// Stokes (1851) solved for a, drho and eta: testdata/reference/inverses.py
+	// [calc]; McClements, Food Emulsions (CRC), ch. 7: oil droplets of
+	// r = 1 µm, 910 in water of 1000 kg/m^3 and 1 mPa s cream at about
+	// 17 mm/day [pub], read backwards.
+	mcClements := -17e-3 / 86400
+	cases := []struct {
+		name      string
+		got, want float64
+		tol       float64
+	}{
+		{"radius, inverses.py", physics.StokesRadius(1e-6, 1000, 1e-3), 6.774011e-7, 1e-6},
+		{"radius, signs ignored", physics.StokesRadius(-1e-6, -1000, 1e-3), 6.774011e-7, 1e-6},
+		{"density difference, inverses.py", physics.StokesDensityDifference(1e-6, 0.5e-6, 1e-3), 1.835489e3, 1e-6},
+		{"viscosity, inverses.py", physics.StokesViscosity(1e-6, 0.5e-6, 1000), 5.448139e-4, 1e-6},
+		{"radius, McClements", physics.StokesRadius(mcClements, 910-1000, 1e-3), 1e-6, 0.01},
+		{"density difference, McClements", physics.StokesDensityDifference(mcClements, 1e-6, 1e-3), 90, 0.02},
+		{"viscosity, McClements", physics.StokesViscosity(mcClements, 1e-6, 910-1000), 1e-3, 0.02},
+	}
+	for _, c := range cases {
+		if e := basicsRelErr(c.got, c.want); e > c.tol {
+			t.Errorf("%s: %.6e, want %.6e (rel err %.1e)", c.name, c.got, c.want, e)
+		}
+	}
+	// Round trips through StokesVelocity.
+	const a, drho, eta = 0.3e-6, 1650.0, 2.5e-3
+	v := physics.StokesVelocity(a, drho, eta)
+	for name, got := range map[string]float64{
+		"radius": physics.StokesRadius(v, drho, eta) / a, "density": physics.StokesDensityDifference(v, a, eta) / drho,
+		"viscosity": physics.StokesViscosity(v, a, drho) / eta,
+	} {
+		if math.Abs(got-1) > 1e-14 {
+			t.Errorf("round trip of the %s: ratio %.17g, want 1", name, got)
+		}
+	}
+	// Limits.
+	if got := physics.StokesRadius(1e-6, 0, 1e-3); !math.IsInf(got, 1) {
+		t.Errorf("StokesRadius at drho = 0: %v, want +Inf", got)
+	}
+	if got := physics.StokesRadius(0, 0, 1e-3); got != 0 {
+		t.Errorf("StokesRadius at speed 0: %v, want 0", got)
+	}
+	if got := physics.StokesViscosity(0, 1e-6, 100); !math.IsInf(got, 1) {
+		t.Errorf("StokesViscosity at speed 0: %v, want +Inf", got)
+	}
+	if got := physics.StokesViscosity(0, 1e-6, 0); got != 0 {
+		t.Errorf("StokesViscosity at drho = 0 and speed 0: %v, want 0", got)
+	}
+}
+
+func TestPerrinRadius(t *testing.T) {
+	t.Parallel()
+	tk := physics.Kelvin(25)
+	// Perrin (1909) solved for a: testdata/reference/inverses.py [calc]; and
+	// back to the gravitational length of a = 50 nm, drho = 1000 at 25 °C,
+	// 8.016758e-4 m (testdata/reference/basics.py [calc]).
+	cases := []struct {
+		name                   string
+		length, deltaRho, want float64
+		tol                    float64
+	}{
+		{"inverses.py, 0.1 m", 0.1, 1000, 1.000698e-8, 1e-6},
+		{"inverses.py, 1 mm", 1e-3, 100, 1.000698e-7, 1e-6},
+		{"basics.py backwards", 8.016758e-4, 1000, 50e-9, 1e-6},
+		{"creaming alike", 8.016758e-4, -1000, 50e-9, 1e-6},
+	}
+	for _, c := range cases {
+		if got := physics.PerrinRadius(c.length, c.deltaRho, tk); basicsRelErr(got, c.want) > c.tol {
+			t.Errorf("%s: PerrinRadius = %.6e m, want %.6e", c.name, got, c.want)
+		}
+	}
+	if got := physics.GravitationalLength(physics.PerrinRadius(0.05, 80, tk), 80, tk); basicsRelErr(got, 0.05) > 1e-14 {
+		t.Errorf("round trip: gravitational length %.17g, want 0.05", got)
+	}
+	if got := physics.PerrinRadius(0.1, 0, tk); !math.IsInf(got, 1) {
+		t.Errorf("PerrinRadius at drho = 0: %v, want +Inf", got)
+	}
 }

@@ -23,21 +23,29 @@ func HydrodynamicShearForceEnergy(viscosity, shearRate, radius, barrierWidth flo
 	return 6 * math.Pi * viscosity * radius * radius * shearRate * barrierWidth
 }
 
-// ShearPeclet returns the shear Péclet number Pe = 6 pi eta a^3 G/(kB T),
-// the ratio of the shear rate G (1/s) to the rotary-diffusion rate of a
-// sphere of radius a (m) in a liquid of viscosity eta (Pa s) at tempK (K):
-// Pe >> 1 means shear, not Brownian motion, brings particles together
-// (orthokinetic aggregation). It panics on negative, infinite or NaN
-// arguments and non-positive tempK.
+// HydrodynamicShearRate inverts HydrodynamicShearForceEnergy for the shear
+// rate: the rate G (1/s) at which the shear work 6 pi eta a^2 G w on a pair
+// of spheres of radius a (m) across barrierWidth w (m) in a liquid of
+// viscosity eta (Pa s) equals energy (J, >= 0),
 //
-// Reference: Russel, Saville & Schowalter, Colloidal Dispersions (1989)
-// (Péclet number of sheared suspensions).
-func ShearPeclet(viscosity, shearRate, radius, tempK float64) float64 {
-	checkShearArgs(viscosity, shearRate, radius)
-	if !(tempK > 0) {
-		panic("physics: ShearPeclet needs tempK > 0")
+//	G = E / (6 pi eta a^2 w).
+//
+// Below it shear does less work than energy. It is +Inf when radius or
+// barrierWidth is 0 (shear does no work) unless energy is 0 too, and 0 then.
+// It panics on a negative or non-finite energy, radius or barrierWidth, or a
+// non-positive or non-finite viscosity.
+//
+// References: as HydrodynamicShearForceEnergy (van de Ven & Mason 1977),
+// solved for G.
+func HydrodynamicShearRate(energy, viscosity, radius, barrierWidth float64) float64 {
+	if !(energy >= 0) || math.IsInf(energy, 1) || !(viscosity > 0) || math.IsInf(viscosity, 1) ||
+		!(radius >= 0) || math.IsInf(radius, 1) || !(barrierWidth >= 0) || math.IsInf(barrierWidth, 1) {
+		panic("physics: HydrodynamicShearRate needs finite energy, radius, barrierWidth >= 0 and viscosity > 0")
 	}
-	return 6 * math.Pi * viscosity * radius * radius * radius * shearRate / (Boltzmann * tempK)
+	if energy == 0 {
+		return 0
+	}
+	return energy / (6 * math.Pi * viscosity * radius * radius * barrierWidth)
 }
 
 func checkShearArgs(viscosity, shearRate, radius float64) {

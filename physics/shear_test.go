@@ -7,32 +7,6 @@ import (
 	"colloidtriage/physics"
 )
 
-func TestShearPeclet(t *testing.T) {
-	t.Parallel()
-	// 6 pi eta a^3 G/(kT) (Russel, Saville & Schowalter 1989) from
-	// testdata/reference/beyond_dlvo.py [calc], water 0.89 mPa s, 25 C.
-	cases := []struct {
-		radius, rate, want, tol float64
-	}{
-		{0.5e-6, 100, 50.942828, 1e-6},
-		{1e-6, 100, 407.542620, 1e-6},
-		{1e-6, 0, 0, 0},
-	}
-	for _, c := range cases {
-		got := physics.ShearPeclet(0.89e-3, c.rate, c.radius, 298.15)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("ShearPeclet(a=%v, G=%v) = %.6f, want %.6f", c.radius, c.rate, got, c.want)
-		}
-	}
-	// Independent check against Smoluchowski's orthokinetic/perikinetic
-	// ratio G d^3 eta/(2 kT) = (4/(6 pi)) Pe: d = 1 um, G = 100 1/s gives
-	// 10.8 (REFERENCES.md [calc], formula [memory]).
-	ratio := physics.ShearPeclet(0.89e-3, 100, 0.5e-6, 298.15) * 4 / (6 * math.Pi)
-	if math.Abs(ratio-10.8) > 0.05 {
-		t.Errorf("orthokinetic ratio from Pe = %.3f, want 10.8", ratio)
-	}
-}
-
 func TestHydrodynamicShearForceEnergy(t *testing.T) {
 	t.Parallel()
 	// Hand calculation of 6 pi eta a^2 G w (van de Ven & Mason 1977 order
@@ -53,4 +27,38 @@ func TestHydrodynamicShearForceEnergy(t *testing.T) {
 				c.eta, c.rate, c.radius, c.width, got, c.want)
 		}
 	}
+}
+
+func TestHydrodynamicShearRate(t *testing.T) {
+	t.Parallel()
+	// 6 pi eta a^2 G w = E solved for G: 10 kT at 25 °C over w = 10 nm at
+	// a = 100 nm in 1 mPa s, testdata/reference/inverses.py [calc]; and back
+	// to the hand value of TestHydrodynamicShearForceEnergy [calc].
+	kT := physics.Boltzmann * 298.15
+	cases := []struct {
+		energy, eta, radius, width, want, tol float64
+	}{
+		{10 * kT, 1e-3, 100e-9, 10e-9, 2.183821e4, 1e-6},
+		{9.424778e-20, 1e-3, 1e-6, 5e-9, 1000, 1e-6},
+		{0, 1e-3, 1e-6, 5e-9, 0, 0},
+	}
+	for _, c := range cases {
+		got := physics.HydrodynamicShearRate(c.energy, c.eta, c.radius, c.width)
+		if e := beyondRelErr(got, c.want); e > c.tol {
+			t.Errorf("HydrodynamicShearRate(%v, %v, %v, %v) = %.6e 1/s, want %.6e", c.energy, c.eta, c.radius, c.width, got, c.want)
+		}
+	}
+	g := physics.HydrodynamicShearRate(3e-19, 2e-3, 0.4e-6, 7e-9)
+	if got := physics.HydrodynamicShearForceEnergy(2e-3, g, 0.4e-6, 7e-9); beyondRelErr(got, 3e-19) > 1e-14 {
+		t.Errorf("round trip: %.17g J, want 3e-19", got)
+	}
+	if got := physics.HydrodynamicShearRate(kT, 1e-3, 1e-6, 0); !math.IsInf(got, 1) {
+		t.Errorf("zero width: %v, want +Inf", got)
+	}
+	defer func() {
+		if recover() == nil {
+			t.Error("negative energy: no panic")
+		}
+	}()
+	physics.HydrodynamicShearRate(-kT, 1e-3, 1e-6, 5e-9)
 }

@@ -24,7 +24,7 @@ func (c *pairCurve) slopes(h float64) (v, vs, vss float64) {
 	switch {
 	case c.hamaker == 0:
 	case c.retarded:
-		x := GregoryLambda / (gregoryB * h)
+		x := gregoryLambda / (gregoryB * h)
 		f := x / (1 + x)
 		pre := c.hamaker * c.radius / (12 * h)
 		v -= pre * gregoryRetardation(x)

@@ -1,14 +1,11 @@
 package physics
 
-import (
-	"math"
+import "math"
 
-	"gonum.org/v1/gonum/integrate/quad"
-)
-
-// Log10StabilityRatio returns log10 W, the Fuchs stability ratio of the pair:
-// the factor by which the interaction slows Brownian aggregation relative to
-// Smoluchowski's rapid rate,
+// Log10StabilityRatioWith returns log10 W, the Fuchs stability ratio of the
+// pair p whose barrier, found by Pair.Barrier or Pair.Extrema, is barrier:
+// the factor by which the interaction slows Brownian aggregation relative
+// to Smoluchowski's rapid rate,
 //
 //	W = 2 int_{u0}^Inf beta(u) exp(V(u a)/kT) / (u+2)^2 du,  u = h/a,
 //
@@ -42,14 +39,6 @@ import (
 // Saville & W. R. Schowalter, Colloidal Dispersions (1989), ch. 8;
 // M. Abramowitz & I. A. Stegun, Handbook of Mathematical Functions (1964),
 // 25.4.46 (Gauss–Hermite quadrature).
-func Log10StabilityRatio(p Pair, honig bool) float64 {
-	c := p.curve()
-	barrier, _ := c.extrema(false)
-	return c.log10StabilityRatio(barrier, honig)
-}
-
-// Log10StabilityRatioWith is Log10StabilityRatio for a pair whose barrier
-// was already found by Barrier or Extrema, which saves its search.
 func Log10StabilityRatioWith(p Pair, barrier Extremum, honig bool) float64 {
 	c := p.curve()
 	return c.log10StabilityRatio(barrier, honig)
@@ -117,7 +106,7 @@ const (
 )
 
 // compositeStabilityRatio is log10 W by the composite rule of
-// Log10StabilityRatio.
+// Log10StabilityRatioWith.
 func (c *pairCurve) compositeStabilityRatio(barrier Extremum, honig bool) float64 {
 	lo, hi := c.searchRange()
 	sLo := math.Log(lo)
@@ -238,14 +227,14 @@ func stabilityWeight(u float64, honig bool) float64 {
 }
 
 // Log10StabilityRatioPeak is an estimate of log10 W from the barrier b of
-// the pair alone: the integrand of Log10StabilityRatio in s = ln h,
+// the pair alone: the integrand of Log10StabilityRatioWith in s = ln h,
 // weight(u) exp(V/kT), is integrated about the barrier s* by 5-point
 // Gauss–Hermite quadrature in t = (s - s*)/(sqrt 2 w), w the width
 // (kT/|d2V/ds2|)^(1/2) at the barrier, which is Laplace's method (the
 // 1-point rule) with the asymmetry of the peak and its weight resolved. It
 // costs 5 energies and the curvature, against the tens of energies of the
 // quadrature, and is meant for searches that check their answer with one
-// Log10StabilityRatio. For the tested barriers of 15 kT and more it is
+// Log10StabilityRatioWith. For the tested barriers of 15 kT and more it is
 // within 2e-4 decades of the quadrature. It returns NaN where it does not
 // apply: without a barrier, or when the barrier is no sharp interior peak
 // (wider than maxPeakWidth in ln h, or closer than peakClearance widths to
@@ -310,30 +299,6 @@ func (c *pairCurve) barrierWidth(s float64) float64 {
 	slope /= c.kT
 	curvature /= c.kT
 	return 1 / math.Sqrt(math.Abs(curvature)+slope*slope+1e-300)
-}
-
-// quadratureRule holds the nodes and weights of a fixed rule: Gauss–Legendre
-// on [-1, 1], or Gauss–Hermite for the weight exp(-t^2) on the whole line.
-type quadratureRule struct{ x, w []float64 }
-
-var (
-	gaussLegendre4 = newGaussLegendre(4)
-	gaussLegendre6 = newGaussLegendre(6)
-	gaussLegendre8 = newGaussLegendre(8)
-	gaussHermite5  = newGaussHermite(5)
-	gaussHermite7  = newGaussHermite(7)
-)
-
-func newGaussHermite(n int) quadratureRule {
-	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
-	quad.Hermite{}.FixedLocations(r.x, r.w, math.Inf(-1), math.Inf(1))
-	return r
-}
-
-func newGaussLegendre(n int) quadratureRule {
-	r := quadratureRule{x: make([]float64, n), w: make([]float64, n)}
-	quad.Legendre{}.FixedLocations(r.x, r.w, -1, 1)
-	return r
 }
 
 // sortSmall is an insertion sort for the few panel edges.

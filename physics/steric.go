@@ -71,7 +71,7 @@ func SolventQualityFromChi(chi float64) SolventQuality {
 	return PoorSolvent
 }
 
-// LayerCollapsed reports whether a stabiliser layer with lower-critical
+// layerCollapsed reports whether a stabiliser layer with lower-critical
 // solution behaviour (poly(ethylene oxide) chains, ethoxylated nonionic
 // surfactants) has lost its solvency at the storage temperature: true at
 // or above the cloud point (both K). Napper found the critical flocculation
@@ -82,16 +82,16 @@ func SolventQualityFromChi(chi float64) SolventQuality {
 //
 // References: Napper, J. Colloid Interface Sci. 58, 390 (1977); Napper,
 // Polymeric Stabilization of Colloidal Dispersions (1983), ch. 5 and 15.
-func LayerCollapsed(storageTempK, cloudPointK float64) bool {
+func layerCollapsed(storageTempK, cloudPointK float64) bool {
 	if !(storageTempK > 0) || !(cloudPointK > 0) {
-		panic("physics: LayerCollapsed needs positive temperatures")
+		panic("physics: layerCollapsed needs positive temperatures")
 	}
 	return storageTempK >= cloudPointK
 }
 
 // StericLayerEffective reports whether a steric layer repels at storage:
 // the solvent must be better than theta and, when the stabiliser has a
-// cloud point (hasCloudPoint), storage must stay below it (LayerCollapsed).
+// cloud point (hasCloudPoint), storage must stay below it (layerCollapsed).
 // Temperatures in K; cloudPointK is ignored without a cloud point.
 //
 // Reference: Napper, Polymeric Stabilization of Colloidal Dispersions
@@ -100,7 +100,7 @@ func StericLayerEffective(quality SolventQuality, storageTempK, cloudPointK floa
 	if quality != GoodSolvent {
 		return false
 	}
-	return !hasCloudPoint || !LayerCollapsed(storageTempK, cloudPointK)
+	return !hasCloudPoint || !layerCollapsed(storageTempK, cloudPointK)
 }
 
 // Search limits of MinimumStericThickness, m: below a hundredth of a

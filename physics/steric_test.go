@@ -85,21 +85,17 @@ func TestStericLayerEffective(t *testing.T) {
 		quality       physics.SolventQuality
 		storage, cp   float64
 		hasCloudPoint bool
-		collapsed     bool
 		want          bool
 	}{
-		{physics.GoodSolvent, c(25), c(60), true, false, true},
-		{physics.GoodSolvent, c(60), c(60), true, true, false},
-		{physics.GoodSolvent, c(70), c(60), true, true, false},
-		{physics.GoodSolvent, c(70), c(60), false, true, true},
-		{physics.ThetaSolvent, c(25), c(60), true, false, false},
-		{physics.PoorSolvent, c(25), c(60), false, false, false},
-		{physics.SolventQuality(0), c(25), c(60), false, false, false},
+		{physics.GoodSolvent, c(25), c(60), true, true},
+		{physics.GoodSolvent, c(60), c(60), true, false},
+		{physics.GoodSolvent, c(70), c(60), true, false},
+		{physics.GoodSolvent, c(70), c(60), false, true},
+		{physics.ThetaSolvent, c(25), c(60), true, false},
+		{physics.PoorSolvent, c(25), c(60), false, false},
+		{physics.SolventQuality(0), c(25), c(60), false, false},
 	}
 	for _, k := range cases {
-		if got := physics.LayerCollapsed(k.storage, k.cp); got != k.collapsed {
-			t.Errorf("LayerCollapsed(%v, %v) = %v, want %v", k.storage, k.cp, got, k.collapsed)
-		}
 		if got := physics.StericLayerEffective(k.quality, k.storage, k.cp, k.hasCloudPoint); got != k.want {
 			t.Errorf("StericLayerEffective(%v, %v, %v, %v) = %v, want %v",
 				k.quality, k.storage, k.cp, k.hasCloudPoint, got, k.want)

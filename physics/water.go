@@ -70,7 +70,7 @@ var iapwsResidualH = [6][7]float64{
 	{0, 1.20573e-1, 0, 0, 0, 0, -5.93264e-4},
 }
 
-// IAPWSViscosity returns the shear viscosity of water, in Pa s, at
+// iapwsViscosity returns the shear viscosity of water, in Pa s, at
 // temperature tempK (K) and density (kg/m^3), as the product of the
 // dilute-gas term mu0(T) and the residual term mu1(T, rho) of IAPWS R12-08:
 //
@@ -93,9 +93,9 @@ var iapwsResidualH = [6][7]float64{
 // Viscosity of Ordinary Water Substance" (2008); M. L. Huber et al., "New
 // international formulation for the viscosity of H2O", J. Phys. Chem. Ref.
 // Data 38, 101–125 (2009), eqs. 2, 11 and 12.
-func IAPWSViscosity(tempK, density float64) float64 {
+func iapwsViscosity(tempK, density float64) float64 {
 	if !(tempK > 0 && tempK <= math.MaxFloat64) || !(density > 0 && density <= math.MaxFloat64) {
-		panic("physics: IAPWSViscosity needs finite tempK > 0 and density > 0")
+		panic("physics: iapwsViscosity needs finite tempK > 0 and density > 0")
 	}
 	tb := tempK / iapwsTempK
 	rb := density / iapwsDensity
@@ -120,7 +120,7 @@ func IAPWSViscosity(tempK, density float64) float64 {
 }
 
 // WaterViscosity returns the shear viscosity of liquid water near 0.1 MPa,
-// in Pa s, at temperature tempK (K): IAPWSViscosity at the 1-atm density of
+// in Pa s, at temperature tempK (K): iapwsViscosity at the 1-atm density of
 // WaterDensity. The pressure difference between 0.1 MPa and 1 atm changes
 // the viscosity by less than 1 ppm.
 //
@@ -134,7 +134,7 @@ func WaterViscosity(tempK float64) float64 {
 	if !(tempK >= WaterMinTempK && tempK <= WaterMaxTempK) {
 		panic("physics: WaterViscosity needs WaterMinTempK <= tempK <= WaterMaxTempK")
 	}
-	return IAPWSViscosity(tempK, WaterDensity(tempK))
+	return iapwsViscosity(tempK, WaterDensity(tempK))
 }
 
 // WaterPermittivity returns the static relative permittivity (dielectric

@@ -57,21 +57,3 @@ func YieldStressToHoldSphere(radius, deltaRho float64) float64 {
 	}
 	return 2 * BerisCriticalYieldNumber * math.Abs(deltaRho) * StandardGravity * radius / 3
 }
-
-// YieldStressInverseMaxRadius returns the largest sphere radius (m) that a
-// yield stress tau_y (Pa) holds at rest against a density difference drho
-// (kg/m^3, sign ignored): R = 3 tau_y / (2 0.143 |drho| g); +Inf at
-// drho = 0. It panics on a negative yield stress or a non-finite argument.
-//
-// Reference: Beris, Tsamopoulos, Armstrong & Brown, J. Fluid Mech. 158,
-// 219 (1985), solved for R.
-func YieldStressInverseMaxRadius(yieldStress, deltaRho float64) float64 {
-	if !(yieldStress >= 0) || math.IsInf(yieldStress, 1) || math.IsNaN(deltaRho) || math.IsInf(deltaRho, 0) {
-		panic("physics: YieldStressInverseMaxRadius needs finite yieldStress >= 0 and deltaRho")
-	}
-	w := 2 * BerisCriticalYieldNumber * math.Abs(deltaRho) * StandardGravity
-	if w == 0 {
-		return math.Inf(1)
-	}
-	return 3 * yieldStress / w
-}

@@ -65,25 +65,3 @@ func TestBerisYieldNumberConventions(t *testing.T) {
 		t.Errorf("YieldNumber at matched density = %v, want +Inf", y)
 	}
 }
-
-func TestYieldStressInverseMaxRadius(t *testing.T) {
-	t.Parallel()
-	// Inverse of the Beris criterion: round trip, and R = 3 tau/(2 0.143
-	// drho g) by hand [calc]: 1 Pa, 1000 kg/m^3 -> 1.069633 mm.
-	cases := []struct {
-		tau, drho, want, tol float64
-	}{
-		{1, 1000, 3 / (2 * 0.143 * 1000 * 9.80665), 1e-12},
-		{1, 1000, 1.069633e-3, 1e-6},
-		{physics.YieldStressToHoldSphere(3e-6, 80), 80, 3e-6, 1e-12},
-	}
-	for _, c := range cases {
-		got := physics.YieldStressInverseMaxRadius(c.tau, c.drho)
-		if e := beyondRelErr(got, c.want); e > c.tol {
-			t.Errorf("YieldStressInverseMaxRadius(%v, %v) = %.7e m, want %.7e", c.tau, c.drho, got, c.want)
-		}
-	}
-	if got := physics.YieldStressInverseMaxRadius(1, 0); !math.IsInf(got, 1) {
-		t.Errorf("matched density: %v, want +Inf", got)
-	}
-}

@@ -2,35 +2,19 @@ package physics
 
 import "math"
 
-// ZetaSmoluchowski returns the zeta potential in V of a particle of
-// electrophoretic mobility mobility (m^2/(V s), signed) in a liquid of
-// viscosity viscosity (Pa s) and relative permittivity epsR:
+// Limits of Henry's function f(kappa a) for a non-conducting sphere, the
+// factor of ZetaHenry: HenryHuckel for a double layer much thicker than the
+// particle (kappa a -> 0), HenrySmoluchowski for one much thinner
+// (kappa a -> Inf).
 //
-//	zeta = eta mu / (eps0 epsR)
-//
-// It is the thin-double-layer limit (kappa a >> 1, Henry f = 3/2). It panics
-// unless viscosity > 0 and epsR > 0.
-//
-// Reference: M. von Smoluchowski, "Contribution à la théorie de l'endosmose
-// électrique et de quelques phénomènes corrélatifs", Bull. Int. Acad. Sci.
-// Cracovie (1903) 184; R. J. Hunter, Zeta Potential in Colloid Science
-// (Academic Press, 1981), ch. 3.
-func ZetaSmoluchowski(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, 1.5)
-}
-
-// ZetaHuckel returns the zeta potential in V in the thick-double-layer limit
-// (kappa a << 1, Henry f = 1):
-//
-//	zeta = 3 eta mu / (2 eps0 epsR)
-//
-// Units and panics as ZetaSmoluchowski.
-//
-// Reference: E. Hückel, "Die Kataphorese der Kugel", Phys. Z. 25 (1924) 204;
-// Hunter (1981), ch. 3.
-func ZetaHuckel(mobility, viscosity, epsR float64) float64 {
-	return ZetaHenry(mobility, viscosity, epsR, 1)
-}
+// References: E. Hückel, Phys. Z. 25 (1924) 204; M. von Smoluchowski, Bull.
+// Int. Acad. Sci. Cracovie (1903) 184; D. C. Henry, Proc. R. Soc. Lond. A 133
+// (1931) 106, who joins the two; R. J. Hunter, Zeta Potential in Colloid
+// Science (Academic Press, 1981), ch. 3.
+const (
+	HenryHuckel       = 1.0
+	HenrySmoluchowski = 1.5
+)
 
 // ZetaHenry returns the zeta potential in V from the mobility (m^2/(V s)),
 // viscosity (Pa s), relative permittivity and Henry's function value f
@@ -67,7 +51,7 @@ func HenryOhshima(kappaA float64) float64 {
 		panic("physics: HenryOhshima needs kappaA >= 0")
 	}
 	if kappaA == 0 {
-		return 1
+		return HenryHuckel
 	}
 	delta := 2.5 / (1 + 2*math.Exp(-kappaA))
 	c := 1 + delta/kappaA
@@ -92,9 +76,9 @@ func HenrySwanFurst(kappaA float64) float64 {
 		panic("physics: HenrySwanFurst needs kappaA >= 0")
 	}
 	if math.IsInf(kappaA, 1) {
-		return 1.5
+		return HenrySmoluchowski
 	}
-	return 1.5 - 1.5*(5*scaledExpIntegral(7, kappaA)-2*scaledExpIntegral(5, kappaA))
+	return HenrySmoluchowski - HenrySmoluchowski*(5*scaledExpIntegral(7, kappaA)-2*scaledExpIntegral(5, kappaA))
 }
 
 // scaledExpIntegral returns exp(x) E_n(x) for n >= 2 and x >= 0, where

@@ -23,10 +23,10 @@ func TestZetaFromMobility(t *testing.T) {
 		got, want float64
 		tol       float64
 	}{
-		{"Smoluchowski", ZetaSmoluchowski(mu, eta, epsR), 25.60953e-3, 1e-6},
-		{"Hückel", ZetaHuckel(mu, eta, epsR), 38.41430e-3, 1e-6},
+		{"Smoluchowski", ZetaHenry(mu, eta, epsR, HenrySmoluchowski), 25.60953e-3, 1e-6},
+		{"Hückel", ZetaHenry(mu, eta, epsR, HenryHuckel), 38.41430e-3, 1e-6},
 		{"Henry ka=10", ZetaHenry(mu, eta, epsR, HenrySwanFurst(10)), 30.66343e-3, 1e-6},
-		{"sign follows mobility", ZetaSmoluchowski(-mu, eta, epsR), -25.60953e-3, 1e-6},
+		{"sign follows mobility", ZetaHenry(-mu, eta, epsR, HenrySmoluchowski), -25.60953e-3, 1e-6},
 	}
 	for _, tt := range tests {
 		if e := interactionRelErr(tt.got, tt.want); e > tt.tol {
@@ -70,6 +70,21 @@ func TestHenryFunction(t *testing.T) {
 	}
 }
 
+func TestHenryLimits(t *testing.T) {
+	t.Parallel()
+	// Hückel (1924) f = 1 and Smoluchowski (1903) f = 3/2 [pub], the ends of
+	// Henry's function (Henry 1931), which both forms reach.
+	if HenryHuckel != 1 || HenrySmoluchowski != 1.5 {
+		t.Errorf("limits %g and %g, want 1 and 1.5", HenryHuckel, HenrySmoluchowski)
+	}
+	if HenrySwanFurst(0) != HenryHuckel || HenryOhshima(0) != HenryHuckel {
+		t.Errorf("f(0) = %g (Swan & Furst), %g (Ohshima), want %g", HenrySwanFurst(0), HenryOhshima(0), HenryHuckel)
+	}
+	if math.Abs(HenrySwanFurst(1e6)-HenrySmoluchowski) > 1e-5 || math.Abs(HenryOhshima(1e6)-HenrySmoluchowski) > 1e-5 {
+		t.Errorf("f(1e6) = %g, %g, want about %g", HenrySwanFurst(1e6), HenryOhshima(1e6), HenrySmoluchowski)
+	}
+}
+
 func TestHenryOhshima(t *testing.T) {
 	t.Parallel()
 	// [pub] Ohshima 1994 claims a maximum relative error of about 1 %.
@@ -98,8 +113,8 @@ func TestHenryOhshima(t *testing.T) {
 func TestZetaPanics(t *testing.T) {
 	t.Parallel()
 	for name, f := range map[string]func(){
-		"zero viscosity": func() { ZetaSmoluchowski(1e-8, 0, 78) },
-		"zero epsR":      func() { ZetaHuckel(1e-8, 1e-3, 0) },
+		"zero viscosity": func() { ZetaHenry(1e-8, 0, 78, HenrySmoluchowski) },
+		"zero epsR":      func() { ZetaHenry(1e-8, 1e-3, 0, HenryHuckel) },
 		"zero f":         func() { ZetaHenry(1e-8, 1e-3, 78, 0) },
 		"negative ka":    func() { HenrySwanFurst(-1) },
 		"NaN ka":         func() { HenryOhshima(math.NaN()) },

@@ -2,7 +2,7 @@
 """Reference values for the "beyond DLVO" physics tests: steric layers,
 bridging, Ostwald ripening, rheology, size distributions, shear and yield
 stress (physics/steric.go, bridging.go, ripening.go, rheology.go,
-distribution.go, shear.go, yieldstress.go).
+distribution.go, packing.go, shear.go, yieldstress.go).
 
 Run with the system python3 that has scipy (python3-scipy):
 
