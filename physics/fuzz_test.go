@@ -45,7 +45,7 @@ func fuzzFinite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
 // FuzzPair drives the interaction of two spheres: Energy and Parts at a
 // fuzzed separation and at contact, Barrier, SecondaryMinimum and Extrema,
-// Log10StabilityRatio with and without the Honig factor, and
+// Log10StabilityRatioWith with and without the Honig factor, and
 // CriticalIonicStrength. The domain is what a valid sample can produce:
 // radius 0.25 nm to 5 mm, A from 0 to 1000 zJ, |psi| up to 300 mV, a Debye
 // length from 0.03 nm up (or no electrolyte), relative permittivity 1 to
@@ -166,7 +166,7 @@ func TestFuzzFindings(t *testing.T) {
 	for name, pair := range map[string]physics.Pair{"10 mm at 429 K": p, "0.1 mm in water": q} {
 		t.Run(name, func(t *testing.T) {
 			if w := physics.Log10StabilityRatioWith(pair, pair.Barrier(), true); !fuzzFinite(w) {
-				t.Errorf("Log10StabilityRatio = %g for %+v", w, pair)
+				t.Errorf("Log10StabilityRatioWith = %g for %+v", w, pair)
 			}
 			b := pair.Barrier()
 			if e := pair.Energy(b.Separation * 1.0146); e > b.Energy {
@@ -182,7 +182,7 @@ func TestFuzzFindings(t *testing.T) {
 		EpsR: 78.4, TempK: 222.15, Retarded: true, ConstantPotential: true}
 	t.Run("8.3 nm, Debye length 100 um", func(t *testing.T) {
 		if w := physics.Log10StabilityRatioWith(r, r.Barrier(), true); !fuzzFinite(w) {
-			t.Errorf("Log10StabilityRatio = %g for %+v", w, r)
+			t.Errorf("Log10StabilityRatioWith = %g for %+v", w, r)
 		}
 	})
 	// FuzzPair: a 10 mm sphere in a relative permittivity of 1 with a
