@@ -17,7 +17,7 @@ import "math"
 //
 // V is summed as in parts. Each derivative is that of the published
 // expression (Hamaker 1937; Gregory 1981; Verwey & Overbeek 1948; Hogg,
-// Healy & Fuerstenau 1966; Asakura & Oosawa 1958); none has the
+// Healy & Fuerstenau 1966; Asakura & Oosawa 1954); none has the
 // cancellation of the energies themselves, so they hold full precision at
 // every separation.
 func (c *pairCurve) slopes(h float64) (v, vs, vss float64) {

@@ -10,7 +10,7 @@ import (
 // of Energy itself, for every model of the three parts and on both branches
 // of Hamaker's sphere sum (h << a and h >> a). The derivatives are calculus
 // on the published formulas (Hamaker 1937; Gregory 1981; Verwey & Overbeek
-// 1948; Hogg, Healy & Fuerstenau 1966; Asakura & Oosawa 1958); the check
+// 1948; Hogg, Healy & Fuerstenau 1966; Asakura & Oosawa 1954); the check
 // values are the finite differences of the tested energies.
 func TestCurveSlopes(t *testing.T) {
 	t.Parallel()
