@@ -1,7 +1,8 @@
 // Package rules holds colloidtriage's knowledge base as data: the rule files
-// (*.rules.yaml), the catalogue of symptoms, causes, remedies and scales
-// (catalog.yaml), and the materials and liquids library (library/*.yaml).
-// Everything is embedded in the binary; package advisor parses, checks and
+// (*.rules.yaml), the catalogue of symptoms, causes and remedies
+// (catalog.yaml; the scales are declared in code, beside the physics that
+// computes them), and the materials and liquids library (library/*.yaml).
+// Everything is embedded in the binary; the advisor parses, checks and
 // compiles it once at start-up.
 package rules
 
