@@ -3,6 +3,8 @@ package advisor
 import (
 	"fmt"
 	"math"
+
+	"colloidtriage/advisor/number"
 )
 
 // Size limits of the handling cautions: below 100 nm a material is a
@@ -24,7 +26,7 @@ func cautions(ev *evaluation) []string {
 		switch {
 		case d < nanoLimit:
 			out = append(out, fmt.Sprintf("Nanoscale particles (median %s): as dry powder or spray mist they are an inhalation hazard. Handle wet or in closed systems with local exhaust ventilation and suitable respiratory protection; nanomaterial reporting rules may apply.",
-				formatQuantity(d*1e9, "nm")))
+				number.Quantity(d*1e9, "nm")))
 		case d < respirableLim:
 			out = append(out, "Fine particles: dry handling raises respirable dust and, for combustible solids, a dust-explosion risk. Handle wet or with local exhaust ventilation; milling to a smaller size adds to this.")
 		}
@@ -32,7 +34,7 @@ func cautions(ev *evaluation) []string {
 	if c.liquid.flammable {
 		fp := "unknown"
 		if !math.IsNaN(c.liquid.flashPointC) {
-			fp = formatQuantity(c.liquid.flashPointC, "degC")
+			fp = number.Quantity(c.liquid.flashPointC, "degC")
 		}
 		out = append(out, fmt.Sprintf("Flammable liquid %q (flash point %s): keep away from ignition sources, bond and ground containers, and store and ship under the local rules for flammable liquids.", c.liquid.key, fp))
 	}

@@ -7,6 +7,9 @@ import (
 	"slices"
 	"strings"
 
+	"colloidtriage/advisor/library"
+	"colloidtriage/advisor/number"
+
 	"github.com/expr-lang/expr/vm"
 )
 
@@ -18,11 +21,11 @@ const EngineVersion = "0.1.0"
 // evaluation.
 type Engine struct {
 	rules *RuleSet
-	lib   *Library
+	lib   *library.Library
 }
 
 // NewEngine builds an engine from a compiled rule set and a loaded library.
-func NewEngine(rules *RuleSet, lib *Library) *Engine {
+func NewEngine(rules *RuleSet, lib *library.Library) *Engine {
 	return &Engine{rules: rules, lib: lib}
 }
 
@@ -34,7 +37,7 @@ func LoadEngine(builtin fs.FS, packs ...fs.FS) (*Engine, error) {
 	if err != nil {
 		return nil, err
 	}
-	lib, err := LoadLibrary(builtin)
+	lib, err := library.Load(builtin)
 	if err != nil {
 		return nil, err
 	}
@@ -45,7 +48,7 @@ func LoadEngine(builtin fs.FS, packs ...fs.FS) (*Engine, error) {
 func (e *Engine) RuleSet() *RuleSet { return e.rules }
 
 // Library returns the engine's materials and liquids library.
-func (e *Engine) Library() *Library { return e.lib }
+func (e *Engine) Library() *library.Library { return e.lib }
 
 // Triage computes the scales of a validated sample, ranks the causes of its
 // symptom and solves the remedies' targets. It returns an *InputError when
@@ -185,7 +188,7 @@ func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
 			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
 				continue
 			}
-			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: r.When})
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: number.Round(v, 6), Unit: factIndex[name].Unit, Test: r.When})
 		}
 		if r.Certainty < 0 {
 			continue

@@ -4,6 +4,8 @@ import (
 	"math"
 	"slices"
 	"strconv"
+
+	"colloidtriage/advisor/number"
 )
 
 type factKind int
@@ -161,29 +163,9 @@ func (f facts) env(afterCauses bool) map[string]any {
 func (f facts) appendFormat(b []byte, spec declaredFact) []byte {
 	switch spec.Kind {
 	case numberFact:
-		return appendQuantity(b, f.num[spec.slot], spec.Unit)
+		return number.AppendQuantity(b, f.num[spec.slot], spec.Unit)
 	case flagFact:
 		return strconv.AppendBool(b, f.flag[spec.slot])
 	}
 	return append(b, f.text[spec.slot]...)
-}
-
-func formatQuantity(v float64, unit string) string {
-	var buf [48]byte
-	return string(appendQuantity(buf[:0], v, unit))
-}
-
-// appendQuantity is formatQuantity appending to b.
-func appendQuantity(b []byte, v float64, unit string) []byte {
-	switch {
-	case math.IsNaN(v):
-		return append(b, "unknown"...)
-	case math.IsInf(v, 0):
-		return append(b, "unbounded"...)
-	}
-	b = strconv.AppendFloat(b, v, 'g', 3, 64)
-	if unit == "" || unit == "1" {
-		return b
-	}
-	return append(append(b, ' '), unit...)
 }

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/library"
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -14,14 +16,14 @@ const extrapolationMarginK = 10.0
 
 // liquidAt returns a library liquid's properties at tempC, or an InputError
 // on field when the temperature is too far outside its sourced range.
-func (e *Engine) liquidAt(l Liquid, tempC float64, field string, n *notes) (liquidState, error) {
+func (e *Engine) liquidAt(l library.Liquid, tempC float64, field string, n *notes) (liquidState, error) {
 	T := physics.Kelvin(tempC)
-	lo := math.Max(l.MinTempK-extrapolationMarginK, LiquidMinTempK)
-	hi := math.Min(l.MaxTempK+extrapolationMarginK, LiquidMaxTempK)
+	lo := math.Max(l.MinTempK-extrapolationMarginK, library.LiquidMinTempK)
+	hi := math.Min(l.MaxTempK+extrapolationMarginK, library.LiquidMaxTempK)
 	if !(T >= lo && T <= hi) {
 		bad := &InputError{}
 		bad.add(field, fmt.Sprintf("outside the range in which the properties of %s are known", l.Name), "degC",
-			fmt.Sprintf("%g <= value <= %g", roundSignificant(lo-physics.CelsiusZero, 4), roundSignificant(hi-physics.CelsiusZero, 4)))
+			fmt.Sprintf("%g <= value <= %g", number.Round(lo-physics.CelsiusZero, 4), number.Round(hi-physics.CelsiusZero, 4)))
 		return liquidState{}, bad
 	}
 	p, lines := l.Properties(T)
@@ -60,7 +62,7 @@ func (e *Engine) resolveMaterial(p *Particles, bad *InputError) (materialProps, 
 	return out, true
 }
 
-func valueOrNaN(v *SourcedValue) float64 {
+func valueOrNaN(v *library.SourcedValue) float64 {
 	if v == nil {
 		return math.NaN()
 	}

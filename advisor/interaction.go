@@ -3,6 +3,7 @@ package advisor
 import (
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -43,7 +44,7 @@ func (ev *evaluation) computeInteraction() {
 
 	if shielded(ev.pair) {
 		ev.n.add("the steric layers stop the pair where the total energy is still repulsive (%s at layer contact): there is no well to aggregate into, so the barrier, stability ratio and half-life are unbounded",
-			formatQuantity(ev.pair.Energy(2*ev.pair.StericThickness)/kT, "kT"))
+			number.Quantity(ev.pair.Energy(2*ev.pair.StericThickness)/kT, "kT"))
 		ev.set("energy_barrier", math.Inf(1), "")
 		ev.set("log10_stability_ratio", math.Inf(1), "")
 		ev.set("log10_aggregation_half_life_days", math.Inf(1), "")

@@ -2,7 +2,6 @@ package advisor
 
 import (
 	"fmt"
-	"strconv"
 )
 
 // notes collects the assumptions of one triage in the order they were made:
@@ -14,12 +13,5 @@ func (n *notes) add(format string, args ...any) {
 }
 
 // text adds a note already written out; the frequent notes are built by
-// concatenation with shortest, which spares fmt's formatting.
+// concatenation with number.Shortest, which spares fmt's formatting.
 func (n *notes) text(s string) { n.list = append(n.list, s) }
-
-// shortest prints v as fmt's %g does: the shortest representation that
-// reads back as v.
-func shortest(v float64) string {
-	var buf [32]byte
-	return string(strconv.AppendFloat(buf[:0], v, 'g', -1, 64))
-}

@@ -22,6 +22,8 @@ func profileEngine(t testing.TB) *advisor.Engine {
 
 func ptr[T any](v T) *T { return &v }
 
+func relErr(got, want float64) float64 { return math.Abs(got-want) / math.Abs(want) }
+
 // referenceSample is the REFERENCES.md interaction case: a = 100 nm,
 // A = 1e-20 J, psi = -25 mV, 1 mM NaCl, 25 degC, with the relative
 // permittivity 78.4 that the reference values use.

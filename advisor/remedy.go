@@ -3,6 +3,8 @@ package advisor
 import (
 	"math"
 	"strings"
+
+	"colloidtriage/advisor/number"
 )
 
 // solver computes a remedy's target for one evaluated sample: the value a
@@ -28,7 +30,7 @@ func (e *Engine) remedy(ev *evaluation, id string) Remedy {
 	}
 	t.Value = roundTowardAcceptable(t.Value, t.Op)
 	r.Target = &t
-	r.Action = withTarget(entry.Action, t.Quantity+" "+t.Op+" "+formatQuantity(t.Value, t.Unit))
+	r.Action = withTarget(entry.Action, t.Quantity+" "+t.Op+" "+number.Quantity(t.Value, t.Unit))
 	return r
 }
 
@@ -38,11 +40,11 @@ func (e *Engine) remedy(ev *evaluation, id string) Remedy {
 func roundTowardAcceptable(v float64, op string) float64 {
 	switch op {
 	case "<=":
-		return roundDigits(v, 3, math.Floor)
+		return number.RoundWith(v, 3, math.Floor)
 	case ">=":
-		return roundDigits(v, 3, math.Ceil)
+		return number.RoundWith(v, 3, math.Ceil)
 	}
-	return roundDigits(v, 3, math.Round)
+	return number.RoundWith(v, 3, math.Round)
 }
 
 // withTarget puts target in place of the {target} of an action (the

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -16,8 +17,8 @@ import (
 
 func stabilityCriterion(ev *evaluation) string {
 	if ev.stabilityText == "" {
-		ev.stabilityText = "energy barrier >= " + shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
-			shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
+		ev.stabilityText = "energy barrier >= " + number.Shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
+			number.Shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
 	}
 	return ev.stabilityText
 }

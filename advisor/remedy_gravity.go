@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -13,8 +14,8 @@ import (
 // maxClear/shelfLife.
 
 func clearLayerCriterion(ev *evaluation) string {
-	return "clear layer at the end of a " + shortest(ev.c.shelfLife/day) + " d shelf life <= " +
-		formatQuantity(ev.c.maxClear*1e3, "mm") + " (hindered Stokes settling)"
+	return "clear layer at the end of a " + number.Shortest(ev.c.shelfLife/day) + " d shelf life <= " +
+		number.Quantity(ev.c.maxClear*1e3, "mm") + " (hindered Stokes settling)"
 }
 
 // allowedStokesSpeed is the largest isolated-particle Stokes speed, m/s,
@@ -73,7 +74,7 @@ func solveDensityMatch(ev *evaluation) (Target, string, bool) {
 	}
 	if t.Value > densestLiquid || t.Value < lightestLiquid {
 		return Target{}, fmt.Sprintf("%s: needs a liquid of %s, outside the %g-%g kg/m^3 that liquids reach",
-			crit, formatQuantity(t.Value, "kg/m^3"), lightestLiquid, densestLiquid), false
+			crit, number.Quantity(t.Value, "kg/m^3"), lightestLiquid, densestLiquid), false
 	}
 	return t, crit, true
 }

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -12,7 +13,7 @@ import (
 const cloudPointMarginK = 10.0
 
 func stericCriterion(ev *evaluation) string {
-	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + shortest(ev.c.criteria.maxStericKT) + " kT"
+	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(ev.c.criteria.maxStericKT) + " kT"
 }
 
 // thickestAdsorbedLayer is about the largest thickness adsorbed polymer or

@@ -4,6 +4,7 @@ import (
 	"math"
 	"strconv"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -37,7 +38,7 @@ func (e *Engine) resolve(s *Sample, n *notes) (*conditions, error) {
 	if s.Storage.TemperatureC != nil {
 		storageT, tempField = *s.Storage.TemperatureC, "/storage/temperature_c"
 	} else {
-		n.text("storage.temperature_c not given: stability judged at the medium temperature, " + shortest(mediumT) + " degC")
+		n.text("storage.temperature_c not given: stability judged at the medium temperature, " + number.Shortest(mediumT) + " degC")
 	}
 	c.storageTempK = physics.Kelvin(storageT)
 	c.liquid = e.resolveLiquid(m, mediumT, storageT, tempField, bad, n)
@@ -77,7 +78,7 @@ type fieldDefault struct {
 }
 
 func newFieldDefault(field string, value float64, unit string) fieldDefault {
-	note := field + " not given: default " + shortest(value)
+	note := field + " not given: default " + number.Shortest(value)
 	if unit != "" {
 		note += " " + unit
 	}
@@ -115,7 +116,7 @@ func firstKnown(v *float64, lib float64, field, unit, key string, n *notes) floa
 		return *v
 	}
 	if !math.IsNaN(lib) {
-		n.text(field + " = " + formatQuantity(lib, unit) + " from the library entry " + strconv.Quote(key))
+		n.text(field + " = " + number.Quantity(lib, unit) + " from the library entry " + strconv.Quote(key))
 		return lib
 	}
 	return math.NaN()
@@ -136,7 +137,7 @@ func (e *Engine) resolveSize(p *Particles, c *conditions, bad *InputError, n *no
 		c.classes = norm
 		c.radius = physics.D50(norm) / 2
 		n.add("median diameter %s taken from the size distribution (%d classes, normalised to a total of 1)",
-			formatQuantity(2*c.radius*1e9, "nm"), len(norm))
+			number.Quantity(2*c.radius*1e9, "nm"), len(norm))
 		if p.DiameterNm != nil {
 			n.add("particles.diameter_nm is superseded by particles.size_distribution")
 		}
@@ -161,19 +162,19 @@ func (e *Engine) resolveHamaker(p *Particles, c *conditions, mat materialProps, 
 		c.hamaker = *p.HamakerZJ * 1e-21
 	case !math.IsNaN(mat.hamakerWater) && c.liquid.key == "water":
 		c.hamaker = mat.hamakerWater
-		n.text("hamaker_zJ = " + formatQuantity(c.hamaker*1e21, "zJ") + " across water from the library entry " + strconv.Quote(p.Material))
+		n.text("hamaker_zJ = " + number.Quantity(c.hamaker*1e21, "zJ") + " across water from the library entry " + strconv.Quote(p.Material))
 	default:
 		epsP := pick(p.Permittivity, mat.epsR)
 		nP := pick(p.RefractiveIndex, mat.refrIndex)
 		if !math.IsNaN(epsP) && !math.IsNaN(nP) && c.liquid.epsR > 0 && c.liquid.refrIndex > 0 {
 			c.hamaker = physics.HamakerTaborWinterton(epsP, nP, c.liquid.epsR, c.liquid.refrIndex, c.storageTempK)
 			n.add("hamaker constant %s estimated by the Tabor-Winterton (Lifshitz) approximation from permittivities and refractive indices",
-				formatQuantity(c.hamaker*1e21, "zJ"))
+				number.Quantity(c.hamaker*1e21, "zJ"))
 			return
 		}
 		c.hamaker = defaultHamakerJ
 		n.add("hamaker constant not given and not estimable: default %s (typical of oxides and polymers across water)",
-			formatQuantity(defaultHamakerJ*1e21, "zJ"))
+			number.Quantity(defaultHamakerJ*1e21, "zJ"))
 	}
 }
 
@@ -193,8 +194,8 @@ func resolveStorage(s *Sample, c *conditions, n *notes) {
 		c.maxClear = *st.MaxClearLayerMm * 1e-3
 	} else {
 		c.maxClear = defaultClearLayerShare * c.height
-		n.text("storage.max_clear_layer_mm not given: acceptance criterion " + shortest(defaultClearLayerShare*100) +
-			" % of the container height, " + formatQuantity(c.maxClear*1e3, "mm"))
+		n.text("storage.max_clear_layer_mm not given: acceptance criterion " + number.Shortest(defaultClearLayerShare*100) +
+			" % of the container height, " + number.Quantity(c.maxClear*1e3, "mm"))
 	}
 	if st.ShearRatePerS != nil {
 		c.shear = *st.ShearRatePerS

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -44,7 +45,7 @@ func resolveStabilizer(st *Stabilizer, fp *FreePolymer, c *conditions, n *notes)
 		case fp.MolarMassKgMol != nil:
 			c.freePolymer.rg = physics.PolymerCoilSize(c.freePolymer.molarMass)
 			n.add("free polymer radius of gyration %s estimated from its molar mass (flexible coil in good solvent)",
-				formatQuantity(c.freePolymer.rg*1e9, "nm"))
+				number.Quantity(c.freePolymer.rg*1e9, "nm"))
 		default:
 			n.add("free polymer without radius_of_gyration_nm or molar_mass_kg_mol: depletion not evaluated")
 		}

@@ -3,6 +3,7 @@ package advisor
 import (
 	"math"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -107,7 +108,7 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
 		ions = append(ions, monovalent(is)...)
 		n.add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
-			formatQuantity(is, "mM"))
+			number.Quantity(is, "mM"))
 	}
 	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
 		// The acid or base that set the pH brings its own monovalent
@@ -116,7 +117,7 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 		pair := physics.IonsFromPH(*m.PH)
 		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
 		ions = append(ions, monovalent(excess)...)
-		n.text("pH " + shortest(*m.PH) + " is outside 4-10: " + formatQuantity(excess, "mM") +
+		n.text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
 			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
 	}
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
@@ -126,7 +127,7 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 	c.ionicStrength = physics.IonicStrength(ions)
 	if c.liquid.aqueous && c.ionicStrength < autoionisationMolM3 {
 		c.ionicStrength = autoionisationMolM3
-		n.add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", formatQuantity(autoionisationMolM3, "mM"))
+		n.add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(autoionisationMolM3, "mM"))
 	}
 	if !c.liquid.aqueous && c.ionicStrength > 0 {
 		n.add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
@@ -174,12 +175,12 @@ func resolveZeta(p *Particles, c *conditions, n *notes) {
 		}
 		c.zeta = physics.ZetaHenry(mu, c.liquid.viscosity, c.liquid.epsR, c.henry)
 		c.zetaSource = "mobility"
-		n.add("zeta potential %s from mobility by %s, f = %.4g", formatQuantity(c.zeta*1e3, "mV"), how, c.henry)
+		n.add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.zeta*1e3, "mV"), how, c.henry)
 	case !math.IsNaN(c.iep) && !math.IsNaN(c.ph):
 		c.zeta = physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK)
 		c.zetaSource = "estimated"
 		n.add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
-			formatQuantity(c.zeta*1e3, "mV"), c.ph, c.iep)
+			number.Quantity(c.zeta*1e3, "mV"), c.ph, c.iep)
 	default:
 		n.add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")
 	}

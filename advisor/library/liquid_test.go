@@ -1,4 +1,4 @@
-package advisor_test
+package library_test
 
 import (
 	"fmt"
@@ -6,12 +6,12 @@ import (
 	"strings"
 	"testing"
 
-	"colloidtriage/advisor"
+	"colloidtriage/advisor/library"
 	"colloidtriage/physics"
 	"colloidtriage/rules"
 )
 
-func liquid(t testing.TB, lib *advisor.Library, key string) advisor.Liquid {
+func liquid(t testing.TB, lib *library.Library, key string) library.Liquid {
 	t.Helper()
 	l, ok := lib.Liquids[key]
 	if !ok {
@@ -137,17 +137,17 @@ func TestLiquidInterpolationHitsPointsAndIsMonotone(t *testing.T) {
 	lib := loadEmbedded(t)
 	for _, key := range lib.LiquidKeys() {
 		l := lib.Liquids[key]
-		if l.Model == advisor.LiquidIAPWSWater {
+		if l.Model == library.LiquidIAPWSWater {
 			continue
 		}
 		tables := []struct {
 			name  string
-			table advisor.LiquidTable
-			get   func(advisor.LiquidProperties) float64
+			table library.LiquidTable
+			get   func(library.LiquidProperties) float64
 		}{
-			{"density", l.Density, func(p advisor.LiquidProperties) float64 { return p.Density }},
-			{"viscosity", l.Viscosity, func(p advisor.LiquidProperties) float64 { return p.Viscosity }},
-			{"permittivity", l.RelativePermittivity, func(p advisor.LiquidProperties) float64 { return p.RelativePermittivity }},
+			{"density", l.Density, func(p library.LiquidProperties) float64 { return p.Density }},
+			{"viscosity", l.Viscosity, func(p library.LiquidProperties) float64 { return p.Viscosity }},
+			{"permittivity", l.RelativePermittivity, func(p library.LiquidProperties) float64 { return p.RelativePermittivity }},
 		}
 		for _, tb := range tables {
 			pts := tb.table.Points
@@ -218,7 +218,7 @@ func TestLiquidFiniteOverDomain(t *testing.T) {
 	lib := loadEmbedded(t)
 	for _, key := range lib.LiquidKeys() {
 		l := lib.Liquids[key]
-		for k := advisor.LiquidMinTempK; k <= advisor.LiquidMaxTempK; k += 0.5 {
+		for k := library.LiquidMinTempK; k <= library.LiquidMaxTempK; k += 0.5 {
 			p, notes := l.Properties(k)
 			finite := !math.IsInf(p.Density, 0) && !math.IsInf(p.Viscosity, 0) && !math.IsInf(p.RelativePermittivity, 0)
 			if !finite || !(p.Density > 0) || !(p.Viscosity > 0) || !(p.RelativePermittivity >= 1) || len(notes) == 0 {
@@ -231,7 +231,7 @@ func TestLiquidFiniteOverDomain(t *testing.T) {
 func TestLiquidPropertiesPanicsOutsideDomain(t *testing.T) {
 	t.Parallel()
 	water := liquid(t, loadEmbedded(t), "water")
-	for _, k := range []float64{advisor.LiquidMinTempK - 1, advisor.LiquidMaxTempK + 1, math.NaN(), math.Inf(1)} {
+	for _, k := range []float64{library.LiquidMinTempK - 1, library.LiquidMaxTempK + 1, math.NaN(), math.Inf(1)} {
 		func() {
 			defer func() {
 				if recover() == nil {
@@ -285,7 +285,7 @@ func TestLiquidFlags(t *testing.T) {
 }
 
 func ExampleLiquid_Properties() {
-	lib, err := advisor.LoadLibrary(rules.FS)
+	lib, err := library.Load(rules.FS)
 	if err != nil {
 		panic(err)
 	}

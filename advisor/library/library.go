@@ -1,4 +1,4 @@
-package advisor
+package library
 
 import (
 	"bytes"
@@ -13,9 +13,11 @@ import (
 	"strings"
 
 	"gopkg.in/yaml.v3"
+
+	"colloidtriage/advisor/number"
 )
 
-// Paths of the library files inside the file system given to LoadLibrary.
+// Paths of the library files inside the file system given to Load.
 const (
 	materialsPath = "library/materials.yaml"
 	liquidsPath   = "library/liquids.yaml"
@@ -56,27 +58,27 @@ type Library struct {
 	materialKeys, liquidKeys []string
 }
 
-// LibraryError is one problem in a library file; Line is 0 when the problem
+// Error is one problem in a library file; Line is 0 when the problem
 // concerns the file as a whole.
-type LibraryError struct {
+type Error struct {
 	File string
 	Line int
 	Msg  string
 }
 
 // Error formats the problem as file:line: message.
-func (e *LibraryError) Error() string {
+func (e *Error) Error() string {
 	if e.Line > 0 {
 		return fmt.Sprintf("%s:%d: %s", e.File, e.Line, e.Msg)
 	}
 	return e.File + ": " + e.Msg
 }
 
-// LoadLibrary reads library/materials.yaml and library/liquids.yaml from fsys
+// Load reads library/materials.yaml and library/liquids.yaml from fsys
 // (normally rules.FS), decodes them strictly (an unknown key is an error) and
-// checks every entry. The error, if any, joins one *LibraryError per problem
+// checks every entry. The error, if any, joins one *Error per problem
 // found, each naming its file and line.
-func LoadLibrary(fsys fs.FS) (*Library, error) {
+func Load(fsys fs.FS) (*Library, error) {
 	materials, errM := loadMaterials(fsys)
 	liquids, errL := loadLiquids(fsys)
 	if err := errors.Join(errM, errL); err != nil {
@@ -96,14 +98,14 @@ func (lib *Library) MaterialKeys() []string { return slices.Clone(lib.materialKe
 // LiquidKeys returns the liquid keys in sorted order.
 func (lib *Library) LiquidKeys() []string { return slices.Clone(lib.liquidKeys) }
 
-// LibraryListing is the library as served by GET /v1/materials: units in the
+// Listing is the library as served by GET /v1/materials: units in the
 // field names, a source beside every value, entries sorted by key.
-type LibraryListing struct {
+type Listing struct {
 	Materials []MaterialListing `json:"materials"`
 	Liquids   []LiquidListing   `json:"liquids"`
 }
 
-// MaterialListing is one material of a LibraryListing.
+// MaterialListing is one material of a Listing.
 type MaterialListing struct {
 	Key                  string        `json:"key"`
 	Name                 string        `json:"name"`
@@ -118,8 +120,8 @@ type MaterialListing struct {
 }
 
 // Listing returns the whole library for the API, in key order.
-func (lib *Library) Listing() LibraryListing {
-	out := LibraryListing{
+func (lib *Library) Listing() Listing {
+	out := Listing{
 		Materials: make([]MaterialListing, 0, len(lib.materialKeys)),
 		Liquids:   make([]LiquidListing, 0, len(lib.liquidKeys)),
 	}
@@ -142,7 +144,7 @@ func (m Material) listing() MaterialListing {
 		Notes:                m.Notes,
 	}
 	if m.HamakerWater != nil {
-		out.HamakerWaterZJ = &SourcedValue{Value: listingRound(m.HamakerWater.Value/zeptojoule, listingDigits), Source: m.HamakerWater.Source}
+		out.HamakerWaterZJ = &SourcedValue{Value: number.Round(m.HamakerWater.Value/zeptojoule, listingDigits), Source: m.HamakerWater.Source}
 	}
 	return out
 }
@@ -155,13 +157,6 @@ func copySourced(v *SourcedValue) *SourcedValue {
 	return &c
 }
 
-// listingRound rounds a unit-converted value to the given significant
-// digits so that listings show 1.412, not 1.4120000000000001.
-func listingRound(x float64, digits int) float64 {
-	v, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', digits, 64), 64)
-	return v
-}
-
 // listingDigits are the significant digits of a listed library value: far
 // more than any source gives, so only conversion noise is removed.
 const listingDigits = 12
@@ -170,18 +165,18 @@ const zeptojoule = 1e-21 // J
 
 // Physical ranges checked at load time.
 const (
-	libMinSolidDensity, libMaxSolidDensity       = 500.0, 25000.0 // kg/m^3
-	libMinLiquidDensity, libMaxLiquidDensity     = 600.0, 2000.0  // kg/m^3
-	libMinRefractiveIndex, libMaxRefractiveIndex = 1.0, 3.5
-	libMinPermittivity, libMaxPermittivity       = 1.0, 200.0
-	libMinPH, libMaxPH                           = 0.0, 14.0
-	libMinHamakerZJ, libMaxHamakerZJ             = 0.1, 600.0
+	minSolidDensity, maxSolidDensity       = 500.0, 25000.0 // kg/m^3
+	minLiquidDensity, maxLiquidDensity     = 600.0, 2000.0  // kg/m^3
+	minRefractiveIndex, maxRefractiveIndex = 1.0, 3.5
+	minPermittivity, maxPermittivity       = 1.0, 200.0
+	minPH, maxPH                           = 0.0, 14.0
+	minHamakerZJ, maxHamakerZJ             = 0.1, 600.0
 )
 
 var (
-	libMaterialKinds  = []string{"oxide", "carbonate", "clay", "pigment", "latex", "oil", "wax", "metal", "organic"}
-	libMaterialPhases = []string{"solid", "liquid"}
-	libraryKeyForm    = regexp.MustCompile(`^[a-z][a-z0-9_]*$`)
+	materialKinds  = []string{"oxide", "carbonate", "clay", "pigment", "latex", "oil", "wax", "metal", "organic"}
+	materialPhases = []string{"solid", "liquid"}
+	keyForm        = regexp.MustCompile(`^[a-z][a-z0-9_]*$`)
 )
 
 type materialsFileYAML struct {
@@ -189,34 +184,34 @@ type materialsFileYAML struct {
 }
 
 type materialYAML struct {
-	Key                  libText     `yaml:"key"`
-	Name                 libText     `yaml:"name"`
-	Kind                 libText     `yaml:"kind"`
-	Phase                libText     `yaml:"phase"`
-	Density              *libSourced `yaml:"density_kg_m3"`
-	RefractiveIndex      *libSourced `yaml:"refractive_index"`
-	RelativePermittivity *libSourced `yaml:"relative_permittivity"`
-	IsoelectricPH        *libSourced `yaml:"isoelectric_ph"`
-	HamakerWaterZJ       *libSourced `yaml:"hamaker_water_zJ"`
-	Notes                string      `yaml:"notes"`
+	Key                  yamlText     `yaml:"key"`
+	Name                 yamlText     `yaml:"name"`
+	Kind                 yamlText     `yaml:"kind"`
+	Phase                yamlText     `yaml:"phase"`
+	Density              *yamlSourced `yaml:"density_kg_m3"`
+	RefractiveIndex      *yamlSourced `yaml:"refractive_index"`
+	RelativePermittivity *yamlSourced `yaml:"relative_permittivity"`
+	IsoelectricPH        *yamlSourced `yaml:"isoelectric_ph"`
+	HamakerWaterZJ       *yamlSourced `yaml:"hamaker_water_zJ"`
+	Notes                string       `yaml:"notes"`
 }
 
 func loadMaterials(fsys fs.FS) (map[string]Material, error) {
 	var doc materialsFileYAML
-	c := &libChecker{file: materialsPath}
+	c := &checker{file: materialsPath}
 	lines, ok := c.decode(fsys, "materials", &doc)
 	if !ok {
 		return nil, c.err()
 	}
 	out := make(map[string]Material, len(doc.Materials))
 	for i, e := range doc.Materials {
-		line := libEntryLine(lines, i)
-		key := libEntryKey(c, e.Key, e.Name, line, out)
-		c.oneOf(e.Kind, "kind", line, libMaterialKinds)
-		c.oneOf(e.Phase, "phase", line, libMaterialPhases)
-		lo, hi := libMinSolidDensity, libMaxSolidDensity
+		line := entryLine(lines, i)
+		key := entryKey(c, e.Key, e.Name, line, out)
+		c.oneOf(e.Kind, "kind", line, materialKinds)
+		c.oneOf(e.Phase, "phase", line, materialPhases)
+		lo, hi := minSolidDensity, maxSolidDensity
 		if e.Phase.text == "liquid" {
-			lo, hi = libMinLiquidDensity, libMaxLiquidDensity
+			lo, hi = minLiquidDensity, maxLiquidDensity
 		}
 		m := Material{Key: key, Name: e.Name.text, Kind: e.Kind.text, Phase: e.Phase.text, Notes: e.Notes}
 		if d := c.sourced(e.Density, "density_kg_m3", lo, hi, 1); d != nil {
@@ -224,10 +219,10 @@ func loadMaterials(fsys fs.FS) (map[string]Material, error) {
 		} else if e.Density == nil {
 			c.add(line, "material %q: density_kg_m3 is required", key)
 		}
-		m.RefractiveIndex = c.sourced(e.RefractiveIndex, "refractive_index", libMinRefractiveIndex, libMaxRefractiveIndex, 1)
-		m.RelativePermittivity = c.sourced(e.RelativePermittivity, "relative_permittivity", libMinPermittivity, libMaxPermittivity, 1)
-		m.IsoelectricPH = c.sourced(e.IsoelectricPH, "isoelectric_ph", libMinPH, libMaxPH, 1)
-		m.HamakerWater = c.sourced(e.HamakerWaterZJ, "hamaker_water_zJ", libMinHamakerZJ, libMaxHamakerZJ, zeptojoule)
+		m.RefractiveIndex = c.sourced(e.RefractiveIndex, "refractive_index", minRefractiveIndex, maxRefractiveIndex, 1)
+		m.RelativePermittivity = c.sourced(e.RelativePermittivity, "relative_permittivity", minPermittivity, maxPermittivity, 1)
+		m.IsoelectricPH = c.sourced(e.IsoelectricPH, "isoelectric_ph", minPH, maxPH, 1)
+		m.HamakerWater = c.sourced(e.HamakerWaterZJ, "hamaker_water_zJ", minHamakerZJ, maxHamakerZJ, zeptojoule)
 		if key != "" {
 			out[key] = m
 		}
@@ -244,7 +239,7 @@ func loadMaterials(fsys fs.FS) (map[string]Material, error) {
 // empty or unparsable file gives ok false. It returns the line of each
 // entry of the top-level sequence listKey, for messages about an entry as a
 // whole.
-func (c *libChecker) decode(fsys fs.FS, listKey string, doc any) (lines []int, ok bool) {
+func (c *checker) decode(fsys fs.FS, listKey string, doc any) (lines []int, ok bool) {
 	data, err := fs.ReadFile(fsys, c.file)
 	if err != nil {
 		c.add(0, "%v", err)
@@ -283,9 +278,9 @@ func (c *libChecker) decode(fsys fs.FS, listKey string, doc any) (lines []int, o
 
 // yamlMessage records one of the parser's messages ("yaml: line 3: ...", or
 // a TypeError's "line 7: field x not found in type y") with its line.
-func (c *libChecker) yamlMessage(msg string) {
+func (c *checker) yamlMessage(msg string) {
 	msg = strings.TrimPrefix(msg, "yaml: ")
-	e := &LibraryError{File: c.file, Msg: msg}
+	e := &Error{File: c.file, Msg: msg}
 	if rest, ok := strings.CutPrefix(msg, "line "); ok {
 		if num, tail, ok := strings.Cut(rest, ": "); ok {
 			if line, err := strconv.Atoi(num); err == nil {
@@ -301,35 +296,35 @@ func (c *libChecker) yamlMessage(msg string) {
 	c.errs = append(c.errs, e)
 }
 
-// libEntryLine is the line of entry i, or 0 if unknown.
-func libEntryLine(lines []int, i int) int {
+// entryLine is the line of entry i, or 0 if unknown.
+func entryLine(lines []int, i int) int {
 	if i < len(lines) {
 		return lines[i]
 	}
 	return 0
 }
 
-// libChecker collects the problems of one file.
-type libChecker struct {
+// checker collects the problems of one file.
+type checker struct {
 	file string
 	errs []error
 }
 
-func (c *libChecker) add(line int, format string, args ...any) {
-	c.errs = append(c.errs, &LibraryError{File: c.file, Line: line, Msg: fmt.Sprintf(format, args...)})
+func (c *checker) add(line int, format string, args ...any) {
+	c.errs = append(c.errs, &Error{File: c.file, Line: line, Msg: fmt.Sprintf(format, args...)})
 }
 
-func (c *libChecker) err() error { return errors.Join(c.errs...) }
+func (c *checker) err() error { return errors.Join(c.errs...) }
 
-// libEntryKey checks an entry's key and name and returns the key ("" if unusable).
-func libEntryKey[V any](c *libChecker, key, name libText, entryLine int, seen map[string]V) string {
+// entryKey checks an entry's key and name and returns the key ("" if unusable).
+func entryKey[V any](c *checker, key, name yamlText, entryLine int, seen map[string]V) string {
 	switch {
 	case key.bad:
 		return ""
 	case key.line == 0:
 		c.add(entryLine, "entry without a key")
 		return ""
-	case !libraryKeyForm.MatchString(key.text):
+	case !keyForm.MatchString(key.text):
 		c.add(key.line, "key %q is not snake_case", key.text)
 		return ""
 	}
@@ -343,7 +338,7 @@ func libEntryKey[V any](c *libChecker, key, name libText, entryLine int, seen ma
 	return key.text
 }
 
-func (c *libChecker) oneOf(v libText, what string, entryLine int, allowed []string) {
+func (c *checker) oneOf(v yamlText, what string, entryLine int, allowed []string) {
 	switch {
 	case v.bad:
 	case v.line == 0:
@@ -355,7 +350,7 @@ func (c *libChecker) oneOf(v libText, what string, entryLine int, allowed []stri
 
 // sourced checks an optional sourced value against [lo, hi] (file units) and
 // returns it multiplied by scale into SI, or nil when absent or invalid.
-func (c *libChecker) sourced(s *libSourced, what string, lo, hi, scale float64) *SourcedValue {
+func (c *checker) sourced(s *yamlSourced, what string, lo, hi, scale float64) *SourcedValue {
 	if s == nil || s.bad {
 		return nil
 	}
@@ -366,54 +361,54 @@ func (c *libChecker) sourced(s *libSourced, what string, lo, hi, scale float64) 
 	return &SourcedValue{Value: s.value * scale, Source: s.source}
 }
 
-// libText is a YAML scalar string with the line it stands on (0 if absent).
+// yamlText is a YAML scalar string with the line it stands on (0 if absent).
 // A value that failed to decode has bad set (its error is already recorded).
-type libText struct {
+type yamlText struct {
 	text string
 	line int
 	bad  bool
 }
 
-func (t *libText) UnmarshalYAML(n *yaml.Node) error {
+func (t *yamlText) UnmarshalYAML(n *yaml.Node) error {
 	t.line = n.Line
 	if n.Kind != yaml.ScalarNode {
 		t.bad = true
-		return libTypeError(n.Line, "want a string")
+		return typeError(n.Line, "want a string")
 	}
 	t.text = n.Value
 	return nil
 }
 
-// libNumber is a YAML number with the line it stands on (0 if absent).
-type libNumber struct {
+// yamlNumber is a YAML number with the line it stands on (0 if absent).
+type yamlNumber struct {
 	value float64
 	line  int
 	bad   bool
 }
 
-func (v *libNumber) UnmarshalYAML(n *yaml.Node) error {
+func (v *yamlNumber) UnmarshalYAML(n *yaml.Node) error {
 	v.line = n.Line
 	if n.Kind != yaml.ScalarNode || n.Decode(&v.value) != nil {
 		v.bad = true
-		return libTypeError(n.Line, "want a number")
+		return typeError(n.Line, "want a number")
 	}
 	return nil
 }
 
-// libSourced is a {value, source} mapping. It decodes itself because the
+// yamlSourced is a {value, source} mapping. It decodes itself because the
 // strict decoder's unknown-key check does not reach custom unmarshalers.
-type libSourced struct {
+type yamlSourced struct {
 	value  float64
 	source string
 	line   int
 	bad    bool
 }
 
-func (s *libSourced) UnmarshalYAML(n *yaml.Node) error {
+func (s *yamlSourced) UnmarshalYAML(n *yaml.Node) error {
 	s.line = n.Line
 	if n.Kind != yaml.MappingNode {
 		s.bad = true
-		return libTypeError(n.Line, `want {value: <number>, source: "<where it comes from>"}`)
+		return typeError(n.Line, `want {value: <number>, source: "<where it comes from>"}`)
 	}
 	var problems []string
 	seen := map[string]bool{}
@@ -451,6 +446,6 @@ func (s *libSourced) UnmarshalYAML(n *yaml.Node) error {
 	return nil
 }
 
-func libTypeError(line int, msg string) error {
+func typeError(line int, msg string) error {
 	return &yaml.TypeError{Errors: []string{fmt.Sprintf("line %d: %s", line, msg)}}
 }

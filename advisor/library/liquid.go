@@ -1,4 +1,4 @@
-package advisor
+package library
 
 import (
 	"fmt"
@@ -7,6 +7,7 @@ import (
 	"strconv"
 	"strings"
 
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -90,7 +91,7 @@ type LiquidProperties struct {
 // NaN): callers validate the request temperature first.
 func (l Liquid) Properties(tempK float64) (LiquidProperties, []string) {
 	if !(tempK >= LiquidMinTempK && tempK <= LiquidMaxTempK) {
-		panic("advisor: Liquid.Properties needs LiquidMinTempK <= tempK <= LiquidMaxTempK")
+		panic("library: Liquid.Properties needs LiquidMinTempK <= tempK <= LiquidMaxTempK")
 	}
 	p := LiquidProperties{
 		RefractiveIndex: l.RefractiveIndex.Value,
@@ -119,7 +120,7 @@ func (l Liquid) Properties(tempK float64) (LiquidProperties, []string) {
 		p.RelativePermittivity, use = l.RelativePermittivity.at(tempK, false)
 		notes = append(notes, l.RelativePermittivity.note("relative permittivity", l.Name, tempK, use))
 	}
-	notes = append(notes, "refractive index of "+l.Name+" "+shortest(l.RefractiveIndex.Value)+
+	notes = append(notes, "refractive index of "+l.Name+" "+number.Shortest(l.RefractiveIndex.Value)+
 		", not corrected for temperature; source: "+l.RefractiveIndex.Source)
 	return p, notes
 }
@@ -215,7 +216,7 @@ func celsiusText(tempK float64) string {
 	return strconv.FormatFloat(c, 'f', -1, 64) + " °C"
 }
 
-// LiquidListing is one liquid of a LibraryListing. For water the points are
+// LiquidListing is one liquid of a Listing. For water the points are
 // computed from the physics fits and the sources name them.
 type LiquidListing struct {
 	Key                string                    `json:"key"`
@@ -260,8 +261,8 @@ var waterListingC = []float64{0, 10, 20, 25, 30, 40, 50, 60, 70, 80, 90, 100}
 func (l Liquid) listing() LiquidListing {
 	out := LiquidListing{
 		Key: l.Key, Name: l.Name, Model: l.Model,
-		MinTemperatureC: listingRound(l.MinTempK-physics.CelsiusZero, listingDigits),
-		MaxTemperatureC: listingRound(l.MaxTempK-physics.CelsiusZero, listingDigits),
+		MinTemperatureC: number.Round(l.MinTempK-physics.CelsiusZero, listingDigits),
+		MaxTemperatureC: number.Round(l.MaxTempK-physics.CelsiusZero, listingDigits),
 		DensitySource:   l.Density.Source, ViscositySource: l.Viscosity.Source,
 		PermittivitySource: l.RelativePermittivity.Source,
 		RefractiveIndex:    l.RefractiveIndex, FlashPointC: copySourced(l.FlashPointC),
@@ -276,31 +277,31 @@ func (l Liquid) listing() LiquidListing {
 		for _, c := range waterListingC {
 			k := physics.Kelvin(c)
 			rho, eta, eps := waterProperties(k)
-			density = append(density, LiquidPoint{k, listingRound(rho, 7)})
-			viscosity = append(viscosity, LiquidPoint{k, listingRound(eta, 5)})
-			permittivity = append(permittivity, LiquidPoint{k, listingRound(eps, 5)})
+			density = append(density, LiquidPoint{k, number.Round(rho, 7)})
+			viscosity = append(viscosity, LiquidPoint{k, number.Round(eta, 5)})
+			permittivity = append(permittivity, LiquidPoint{k, number.Round(eps, 5)})
 		}
 	}
 	out.DensityPoints = make([]LiquidDensityPoint, len(density))
 	for i, p := range density {
-		out.DensityPoints[i] = LiquidDensityPoint{listingRound(p.TempK-physics.CelsiusZero, listingDigits), listingRound(p.Value, listingDigits)}
+		out.DensityPoints[i] = LiquidDensityPoint{number.Round(p.TempK-physics.CelsiusZero, listingDigits), number.Round(p.Value, listingDigits)}
 	}
 	out.ViscosityPoints = make([]LiquidViscosityPoint, len(viscosity))
 	for i, p := range viscosity {
-		out.ViscosityPoints[i] = LiquidViscosityPoint{listingRound(p.TempK-physics.CelsiusZero, listingDigits), listingRound(p.Value*1e3, listingDigits)}
+		out.ViscosityPoints[i] = LiquidViscosityPoint{number.Round(p.TempK-physics.CelsiusZero, listingDigits), number.Round(p.Value*1e3, listingDigits)}
 	}
 	out.PermittivityPoints = make([]LiquidPermittivityPoint, len(permittivity))
 	for i, p := range permittivity {
-		out.PermittivityPoints[i] = LiquidPermittivityPoint{listingRound(p.TempK-physics.CelsiusZero, listingDigits), listingRound(p.Value, listingDigits)}
+		out.PermittivityPoints[i] = LiquidPermittivityPoint{number.Round(p.TempK-physics.CelsiusZero, listingDigits), number.Round(p.Value, listingDigits)}
 	}
 	return out
 }
 
 // Physical ranges of liquid tables, in file units.
 const (
-	libMinViscosityMPaS, libMaxViscosityMPaS = 0.01, 1e9
-	libMinFlashPointC, libMaxFlashPointC     = -60.0, 400.0
-	libFlammableBelowC                       = 60.0 // UN GHS, chapter 2.6: categories 1-3
+	minViscosityMPaS, maxViscosityMPaS = 0.01, 1e9
+	minFlashPointC, maxFlashPointC     = -60.0, 400.0
+	flammableBelowC                    = 60.0 // UN GHS, chapter 2.6: categories 1-3
 )
 
 type liquidsFileYAML struct {
@@ -308,70 +309,70 @@ type liquidsFileYAML struct {
 }
 
 type liquidYAML struct {
-	Key                  libText                          `yaml:"key"`
-	Name                 libText                          `yaml:"name"`
-	Model                libText                          `yaml:"model"`
-	MinC                 libNumber                        `yaml:"min_c"`
-	MaxC                 libNumber                        `yaml:"max_c"`
-	Density              *libTable[densityPointYAML]      `yaml:"density"`
-	Viscosity            *libTable[viscosityPointYAML]    `yaml:"viscosity"`
-	RelativePermittivity *libTable[permittivityPointYAML] `yaml:"relative_permittivity"`
-	RefractiveIndex      *libSourced                      `yaml:"refractive_index"`
-	FlashPointC          *libSourced                      `yaml:"flash_point_c"`
-	Aqueous              *bool                            `yaml:"aqueous"`
-	Flammable            *bool                            `yaml:"flammable"`
-	Notes                string                           `yaml:"notes"`
+	Key                  yamlText                          `yaml:"key"`
+	Name                 yamlText                          `yaml:"name"`
+	Model                yamlText                          `yaml:"model"`
+	MinC                 yamlNumber                        `yaml:"min_c"`
+	MaxC                 yamlNumber                        `yaml:"max_c"`
+	Density              *yamlTable[densityPointYAML]      `yaml:"density"`
+	Viscosity            *yamlTable[viscosityPointYAML]    `yaml:"viscosity"`
+	RelativePermittivity *yamlTable[permittivityPointYAML] `yaml:"relative_permittivity"`
+	RefractiveIndex      *yamlSourced                      `yaml:"refractive_index"`
+	FlashPointC          *yamlSourced                      `yaml:"flash_point_c"`
+	Aqueous              *bool                             `yaml:"aqueous"`
+	Flammable            *bool                             `yaml:"flammable"`
+	Notes                string                            `yaml:"notes"`
 }
 
-type libTable[P libPoint] struct {
-	Source libText `yaml:"source"`
-	Points []P     `yaml:"points"`
+type yamlTable[P yamlPoint] struct {
+	Source yamlText `yaml:"source"`
+	Points []P      `yaml:"points"`
 }
 
-// libPoint is one point of a table in the file: a temperature and a value.
-type libPoint interface {
-	temperatureAndValue() (libNumber, libNumber)
+// yamlPoint is one point of a table in the file: a temperature and a value.
+type yamlPoint interface {
+	temperatureAndValue() (yamlNumber, yamlNumber)
 }
 
 type densityPointYAML struct {
-	TemperatureC libNumber `yaml:"temperature_c"`
-	Value        libNumber `yaml:"value_kg_m3"`
+	TemperatureC yamlNumber `yaml:"temperature_c"`
+	Value        yamlNumber `yaml:"value_kg_m3"`
 }
 
 type viscosityPointYAML struct {
-	TemperatureC libNumber `yaml:"temperature_c"`
-	Value        libNumber `yaml:"value_mPa_s"`
+	TemperatureC yamlNumber `yaml:"temperature_c"`
+	Value        yamlNumber `yaml:"value_mPa_s"`
 }
 
 type permittivityPointYAML struct {
-	TemperatureC libNumber `yaml:"temperature_c"`
-	Value        libNumber `yaml:"value"`
+	TemperatureC yamlNumber `yaml:"temperature_c"`
+	Value        yamlNumber `yaml:"value"`
 }
 
-func (p densityPointYAML) temperatureAndValue() (libNumber, libNumber) {
+func (p densityPointYAML) temperatureAndValue() (yamlNumber, yamlNumber) {
 	return p.TemperatureC, p.Value
 }
 
-func (p viscosityPointYAML) temperatureAndValue() (libNumber, libNumber) {
+func (p viscosityPointYAML) temperatureAndValue() (yamlNumber, yamlNumber) {
 	return p.TemperatureC, p.Value
 }
 
-func (p permittivityPointYAML) temperatureAndValue() (libNumber, libNumber) {
+func (p permittivityPointYAML) temperatureAndValue() (yamlNumber, yamlNumber) {
 	return p.TemperatureC, p.Value
 }
 
 func loadLiquids(fsys fs.FS) (map[string]Liquid, error) {
 	var doc liquidsFileYAML
-	c := &libChecker{file: liquidsPath}
+	c := &checker{file: liquidsPath}
 	lines, ok := c.decode(fsys, "liquids", &doc)
 	if !ok {
 		return nil, c.err()
 	}
 	out := make(map[string]Liquid, len(doc.Liquids))
 	for i, e := range doc.Liquids {
-		line := libEntryLine(lines, i)
+		line := entryLine(lines, i)
 		before := len(c.errs)
-		key := libEntryKey(c, e.Key, e.Name, line, out)
+		key := entryKey(c, e.Key, e.Name, line, out)
 		l, complete := c.liquid(e, key, line)
 		if key != "" && complete && len(c.errs) == before {
 			c.extrapolation(l, line)
@@ -388,7 +389,7 @@ func loadLiquids(fsys fs.FS) (map[string]Liquid, error) {
 
 // liquid converts and checks one entry other than its key and name;
 // complete reports that its model and tables are whole enough to evaluate.
-func (c *libChecker) liquid(e liquidYAML, key string, line int) (l Liquid, complete bool) {
+func (c *checker) liquid(e liquidYAML, key string, line int) (l Liquid, complete bool) {
 	l = Liquid{Key: key, Name: e.Name.text, Model: LiquidTabulated, Notes: e.Notes}
 	if e.Model.line != 0 && !e.Model.bad {
 		l.Model = LiquidModel(e.Model.text)
@@ -405,12 +406,12 @@ func (c *libChecker) liquid(e liquidYAML, key string, line int) (l Liquid, compl
 	default:
 		c.add(e.Model.line, "model %q is not one of %s, %s", e.Model.text, LiquidTabulated, LiquidIAPWSWater)
 	}
-	if ri := c.sourced(e.RefractiveIndex, "refractive_index", libMinRefractiveIndex, libMaxRefractiveIndex, 1); ri != nil {
+	if ri := c.sourced(e.RefractiveIndex, "refractive_index", minRefractiveIndex, maxRefractiveIndex, 1); ri != nil {
 		l.RefractiveIndex = *ri
 	} else if e.RefractiveIndex == nil {
 		c.add(line, "%q: refractive_index is required", key)
 	}
-	l.FlashPointC = c.sourced(e.FlashPointC, "flash_point_c", libMinFlashPointC, libMaxFlashPointC, 1)
+	l.FlashPointC = c.sourced(e.FlashPointC, "flash_point_c", minFlashPointC, maxFlashPointC, 1)
 	if e.Aqueous == nil || e.Flammable == nil {
 		c.add(line, "%q: aqueous and flammable are required (true or false)", key)
 		return l, complete
@@ -419,20 +420,20 @@ func (c *libChecker) liquid(e liquidYAML, key string, line int) (l Liquid, compl
 	switch {
 	case l.FlashPointC == nil && l.Flammable:
 		c.add(line, "%q: a flammable liquid needs its flash_point_c", key)
-	case l.FlashPointC != nil && l.Flammable != (l.FlashPointC.Value < libFlammableBelowC):
+	case l.FlashPointC != nil && l.Flammable != (l.FlashPointC.Value < flammableBelowC):
 		c.add(e.FlashPointC.line, "%q: flammable must be %t for a flash point of %g °C (flammable means below %g °C)",
-			key, !l.Flammable, l.FlashPointC.Value, libFlammableBelowC)
+			key, !l.Flammable, l.FlashPointC.Value, flammableBelowC)
 	}
 	return l, complete
 }
 
 // tabulated converts and checks the range and tables of a tabulated liquid
 // and reports whether they are complete.
-func (c *libChecker) tabulated(l *Liquid, e liquidYAML, line int) bool {
+func (c *checker) tabulated(l *Liquid, e liquidYAML, line int) bool {
 	var okD, okV, okP bool
-	l.Density, okD = liquidTable(c, e.Density, "density", line, libMinLiquidDensity, libMaxLiquidDensity, 1)
-	l.Viscosity, okV = liquidTable(c, e.Viscosity, "viscosity", line, libMinViscosityMPaS, libMaxViscosityMPaS, 1e-3)
-	l.RelativePermittivity, okP = liquidTable(c, e.RelativePermittivity, "relative_permittivity", line, libMinPermittivity, libMaxPermittivity, 1)
+	l.Density, okD = liquidTable(c, e.Density, "density", line, minLiquidDensity, maxLiquidDensity, 1)
+	l.Viscosity, okV = liquidTable(c, e.Viscosity, "viscosity", line, minViscosityMPaS, maxViscosityMPaS, 1e-3)
+	l.RelativePermittivity, okP = liquidTable(c, e.RelativePermittivity, "relative_permittivity", line, minPermittivity, maxPermittivity, 1)
 	if e.MinC.line == 0 || e.MaxC.line == 0 {
 		c.add(line, "%q: min_c and max_c (the sourced range) are required", l.Key)
 		return false
@@ -463,7 +464,7 @@ func (c *libChecker) tabulated(l *Liquid, e liquidYAML, line int) bool {
 
 // liquidTable converts and checks one table; values must lie in [lo, hi]
 // (file units) and are multiplied by scale into SI.
-func liquidTable[P libPoint](c *libChecker, t *libTable[P], what string, line int, lo, hi, scale float64) (LiquidTable, bool) {
+func liquidTable[P yamlPoint](c *checker, t *yamlTable[P], what string, line int, lo, hi, scale float64) (LiquidTable, bool) {
 	if t == nil {
 		c.add(line, "the %s table is required", what)
 		return LiquidTable{}, false
@@ -516,7 +517,7 @@ func liquidTable[P libPoint](c *libChecker, t *libTable[P], what string, line in
 // extrapolation checks that the liquid stays physical at both ends of the
 // domain of Properties, so that no request temperature can yield a
 // non-positive density or viscosity or a permittivity below 1.
-func (c *libChecker) extrapolation(l Liquid, line int) {
+func (c *checker) extrapolation(l Liquid, line int) {
 	for _, tempK := range []float64{LiquidMinTempK, LiquidMaxTempK} {
 		p, _ := l.Properties(tempK)
 		if !(p.Density > 0 && p.Viscosity > 0 && p.RelativePermittivity >= 1) ||

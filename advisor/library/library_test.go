@@ -1,4 +1,4 @@
-package advisor_test
+package library_test
 
 import (
 	"bytes"
@@ -9,13 +9,13 @@ import (
 	"testing"
 	"testing/fstest"
 
-	"colloidtriage/advisor"
+	"colloidtriage/advisor/library"
 	"colloidtriage/rules"
 )
 
-func loadEmbedded(t testing.TB) *advisor.Library {
+func loadEmbedded(t testing.TB) *library.Library {
 	t.Helper()
-	lib, err := advisor.LoadLibrary(rules.FS)
+	lib, err := library.Load(rules.FS)
 	if err != nil {
 		t.Fatalf("LoadLibrary(rules.FS): %v", err)
 	}
@@ -51,7 +51,7 @@ func TestLibraryEmbeddedLoads(t *testing.T) {
 func TestLibraryEveryValueSourcedAndInRange(t *testing.T) {
 	t.Parallel()
 	lib := loadEmbedded(t)
-	check := func(owner, what string, v *advisor.SourcedValue, lo, hi float64) {
+	check := func(owner, what string, v *library.SourcedValue, lo, hi float64) {
 		t.Helper()
 		if v == nil {
 			return
@@ -76,12 +76,12 @@ func TestLibraryEveryValueSourcedAndInRange(t *testing.T) {
 	for k, l := range lib.Liquids {
 		check(k, "refractive index", &l.RefractiveIndex, 1, 3.5)
 		check(k, "flash point", l.FlashPointC, -60, 400)
-		if l.Model == advisor.LiquidIAPWSWater {
+		if l.Model == library.LiquidIAPWSWater {
 			continue
 		}
 		for _, tb := range []struct {
 			what   string
-			table  advisor.LiquidTable
+			table  library.LiquidTable
 			lo, hi float64
 		}{
 			{"density", l.Density, 600, 2000},
@@ -149,7 +149,7 @@ func TestLibraryValuesAgainstReferences(t *testing.T) {
 			t.Errorf("%s missing", tc.key)
 			continue
 		}
-		var v *advisor.SourcedValue
+		var v *library.SourcedValue
 		switch tc.property {
 		case "hamaker":
 			v = m.HamakerWater
@@ -221,7 +221,7 @@ func TestLibraryListingJSON(t *testing.T) {
 	for _, l := range listing.Liquids {
 		switch l.Key {
 		case "glycerol":
-			if !slices.Contains(l.ViscosityPoints, advisor.LiquidViscosityPoint{TemperatureC: 20, ViscosityMPaS: 1412}) {
+			if !slices.Contains(l.ViscosityPoints, library.LiquidViscosityPoint{TemperatureC: 20, ViscosityMPaS: 1412}) {
 				t.Errorf("glycerol viscosity points %v lack {20, 1412}", l.ViscosityPoints)
 			}
 		case "water":
@@ -340,7 +340,7 @@ func TestLibraryBrokenFiles(t *testing.T) {
 				"library/materials.yaml": {Data: []byte(tc.materials)},
 				"library/liquids.yaml":   {Data: []byte(tc.liquids)},
 			}
-			lib, err := advisor.LoadLibrary(fsys)
+			lib, err := library.Load(fsys)
 			if tc.want == nil {
 				if err != nil || lib == nil {
 					t.Fatalf("LoadLibrary: %v", err)
@@ -361,7 +361,7 @@ func TestLibraryBrokenFiles(t *testing.T) {
 
 func TestLibraryMissingFile(t *testing.T) {
 	t.Parallel()
-	_, err := advisor.LoadLibrary(fstest.MapFS{"library/materials.yaml": {Data: []byte(validMaterials)}})
+	_, err := library.Load(fstest.MapFS{"library/materials.yaml": {Data: []byte(validMaterials)}})
 	if err == nil || !strings.Contains(err.Error(), "library/liquids.yaml") {
 		t.Errorf("error %v, want one naming library/liquids.yaml", err)
 	}
