@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/rule"
 	"colloidtriage/physics"
 )
 
@@ -12,7 +13,7 @@ import (
 // the facts the rules see, the scales reported, and the notes made.
 type evaluation struct {
 	c      *conditions
-	f      facts
+	f      rule.Facts
 	scales map[string]Scale
 	n      *notes
 	models map[string]string
@@ -32,11 +33,11 @@ type evaluation struct {
 	}
 }
 
-// scaleIndex holds the declared scales, each with its slot among the facts.
-var scaleIndex = func() map[string]declaredFact {
-	m := map[string]declaredFact{}
+// scaleIndex holds the declared scales by name.
+var scaleIndex = func() map[string]ScaleSpec {
+	m := make(map[string]ScaleSpec, len(scaleSpecs))
 	for _, s := range scaleSpecs {
-		m[s.Name] = factIndex[s.Name]
+		m[s.Name] = s
 	}
 	return m
 }()
@@ -49,7 +50,7 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 	if !ok {
 		panic("advisor: undeclared scale " + name)
 	}
-	ev.f.num[spec.slot] = v
+	ev.f.SetNumber(name, v)
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
 			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)
@@ -87,38 +88,38 @@ func (ev *evaluation) model(m modelChoice) {
 
 func (ev *evaluation) inputFacts() {
 	c, f := ev.c, ev.f
-	f.setText("symptom", c.symptom)
-	f.setText("phase", c.phase)
-	f.setNumber("volume_fraction", c.phi)
-	f.setNumber("shelf_life_days", c.shelfLife/day)
-	f.setNumber("container_height_mm", c.height*1e3)
-	f.setNumber("max_clear_layer_mm", c.maxClear*1e3)
-	f.setNumber("storage_temperature_c", c.storageTempK-physics.CelsiusZero)
-	f.setNumber("observed_clear_layer_mm", c.observed.clearLayer*1e3)
-	f.setNumber("age_days", c.observed.age/day)
-	f.setText("sediment_redisperses", c.observed.redisperses)
-	f.setNumber("viscosity_change_percent", c.observed.viscosityChange)
-	f.setNumber("size_growth_percent", c.observed.sizeGrowth)
-	f.setFlag("zeta_measured", c.zetaSource == "measured" || c.zetaSource == "mobility")
-	f.setFlag("has_electrolyte", c.ionicStrength > 0)
-	f.setNumber("ph", c.ph)
-	f.setNumber("isoelectric_ph", c.iep)
-	f.setFlag("has_steric_layer", c.steric.present)
-	f.setNumber("steric_thickness_nm", nanOr(c.steric.present, c.steric.thickness*1e9))
+	f.SetText("symptom", c.symptom)
+	f.SetText("phase", c.phase)
+	f.SetNumber("volume_fraction", c.phi)
+	f.SetNumber("shelf_life_days", c.shelfLife/day)
+	f.SetNumber("container_height_mm", c.height*1e3)
+	f.SetNumber("max_clear_layer_mm", c.maxClear*1e3)
+	f.SetNumber("storage_temperature_c", c.storageTempK-physics.CelsiusZero)
+	f.SetNumber("observed_clear_layer_mm", c.observed.clearLayer*1e3)
+	f.SetNumber("age_days", c.observed.age/day)
+	f.SetText("sediment_redisperses", c.observed.redisperses)
+	f.SetNumber("viscosity_change_percent", c.observed.viscosityChange)
+	f.SetNumber("size_growth_percent", c.observed.sizeGrowth)
+	f.SetFlag("zeta_measured", c.zetaSource == "measured" || c.zetaSource == "mobility")
+	f.SetFlag("has_electrolyte", c.ionicStrength > 0)
+	f.SetNumber("ph", c.ph)
+	f.SetNumber("isoelectric_ph", c.iep)
+	f.SetFlag("has_steric_layer", c.steric.present)
+	f.SetNumber("steric_thickness_nm", nanOr(c.steric.present, c.steric.thickness*1e9))
 	if c.steric.hasQuality {
-		f.setText("solvent_quality", c.steric.quality.String())
+		f.SetText("solvent_quality", c.steric.quality.String())
 	}
-	f.setNumber("cloud_point_c", c.steric.cloudK-physics.CelsiusZero)
-	f.setNumber("free_polymer_g_L", nanOr(c.freePolymer.present, c.freePolymer.concentration))
-	f.setNumber("adsorbing_coverage", nanOr(c.adsorbing.present, c.adsorbing.coverage))
-	f.setNumber("adsorbing_molar_mass_kg_mol", nanOr(c.adsorbing.present, c.adsorbing.molarMass))
-	f.setNumber("shear_rate_per_s", c.shear)
-	f.setNumber("yield_stress_pa", c.yieldStress)
-	f.setNumber("min_barrier_kT", c.criteria.minBarrierKT)
-	f.setNumber("half_life_to_shelf_life", c.criteria.halfLifeRatio)
-	f.setFlag("has_size_distribution", c.classes != nil)
-	f.setNumber("max_relative_viscosity", c.criteria.maxRelViscosity)
-	f.setNumber("max_steric_contact_kT", c.criteria.maxStericKT)
+	f.SetNumber("cloud_point_c", c.steric.cloudK-physics.CelsiusZero)
+	f.SetNumber("free_polymer_g_L", nanOr(c.freePolymer.present, c.freePolymer.concentration))
+	f.SetNumber("adsorbing_coverage", nanOr(c.adsorbing.present, c.adsorbing.coverage))
+	f.SetNumber("adsorbing_molar_mass_kg_mol", nanOr(c.adsorbing.present, c.adsorbing.molarMass))
+	f.SetNumber("shear_rate_per_s", c.shear)
+	f.SetNumber("yield_stress_pa", c.yieldStress)
+	f.SetNumber("min_barrier_kT", c.criteria.minBarrierKT)
+	f.SetNumber("half_life_to_shelf_life", c.criteria.halfLifeRatio)
+	f.SetFlag("has_size_distribution", c.classes != nil)
+	f.SetNumber("max_relative_viscosity", c.criteria.maxRelViscosity)
+	f.SetNumber("max_steric_contact_kT", c.criteria.maxStericKT)
 }
 
 func nanOr(ok bool, v float64) float64 {

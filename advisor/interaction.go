@@ -70,7 +70,7 @@ func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {
 		ev.set("secondary_minimum", m.Energy/kT, "minimum of the total energy beyond the barrier")
 		ev.set("secondary_minimum_position", m.Separation*1e9, "separation at the secondary minimum")
 	} else {
-		ev.f.setNumber("secondary_minimum", 0)
+		ev.f.SetNumber("secondary_minimum", 0)
 	}
 }
 

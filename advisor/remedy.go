@@ -15,7 +15,7 @@ type solver func(ev *evaluation) (t Target, criterion string, ok bool)
 
 // remedy renders one catalogue remedy with its solved target.
 func (e *Engine) remedy(ev *evaluation, id string) Remedy {
-	entry, _ := find(e.rules.Catalog.Remedies, id)
+	entry, _ := e.rules.Catalog.Remedy(id)
 	r := Remedy{ID: id}
 	solve := remedySolvers[id]
 	if solve == nil {

@@ -74,8 +74,8 @@ func viscosityCriterion(ev *evaluation) string {
 
 func solveVolumeFraction(ev *evaluation) (Target, string, bool) {
 	c := ev.c
-	phiMax := ev.f.number("max_packing_fraction")
-	phiEff := ev.f.number("effective_volume_fraction")
+	phiMax := ev.f.Number("max_packing_fraction")
+	phiEff := ev.f.Number("effective_volume_fraction")
 	if math.IsNaN(phiMax) || phiEff <= 0 {
 		return Target{}, viscosityCriterion(ev), false
 	}
@@ -87,7 +87,7 @@ func solveVolumeFraction(ev *evaluation) (Target, string, bool) {
 // needs, then the log-normal span whose packing reaches it.
 func solveSizeSpan(ev *evaluation) (Target, string, bool) {
 	c := ev.c
-	phiEff := ev.f.number("effective_volume_fraction")
+	phiEff := ev.f.Number("effective_volume_fraction")
 	crit := viscosityCriterion(ev) + ", by a wider log-normal distribution"
 	kd := func(phim float64) float64 {
 		return physics.KriegerDougherty(phiEff, phim, physics.DefaultIntrinsicViscosity) - c.criteria.maxRelViscosity

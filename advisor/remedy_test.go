@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
+	"strings"
 	"testing"
 
 	"colloidtriage/physics"
@@ -76,8 +77,8 @@ func TestRemedyTargetsInvertThePhysics(t *testing.T) {
 		t.Error("no volume-fraction target")
 	} else {
 		c := ev.c
-		eff := tg.Value * ev.f.number("effective_volume_fraction") / c.phi
-		got := physics.KriegerDougherty(eff, ev.f.number("max_packing_fraction"), physics.DefaultIntrinsicViscosity)
+		eff := tg.Value * ev.f.Number("effective_volume_fraction") / c.phi
+		got := physics.KriegerDougherty(eff, ev.f.Number("max_packing_fraction"), physics.DefaultIntrinsicViscosity)
 		if math.Abs(got/c.criteria.maxRelViscosity-1) > 1e-2 {
 			t.Errorf("volume fraction target %v: relative viscosity %v, want %v", tg.Value, got, c.criteria.maxRelViscosity)
 		}
@@ -347,5 +348,31 @@ func TestAnchoredSearchesSweep(t *testing.T) {
 	}
 	if ionic < 100 || potential < 300 {
 		t.Errorf("only %d ionic-strength and %d potential targets checked", ionic, potential)
+	}
+}
+
+func TestCatalogRemediesHaveSolvers(t *testing.T) {
+	t.Parallel()
+	rs := benchEngine(t).RuleSet()
+	for _, r := range rs.Catalog.Remedies {
+		_, ok := remedySolvers[r.ID]
+		if !ok && r.ID != "investigate_non_colloidal" {
+			t.Errorf("remedy %s has no target solver", r.ID)
+		}
+		if ok != strings.Contains(r.Action, "{target}") {
+			t.Errorf("remedy %s: action template and solver disagree about a target", r.ID)
+		}
+	}
+	for id := range remedySolvers {
+		if _, ok := rs.Catalog.Remedy(id); !ok {
+			t.Errorf("solver for %s, which the catalogue does not list", id)
+		}
+	}
+}
+
+func TestWithTarget(t *testing.T) {
+	t.Parallel()
+	if got := withTarget("Raise it: {target}.", "x >= 1"); got != "Raise it: x >= 1." {
+		t.Errorf("withTarget = %q", got)
 	}
 }

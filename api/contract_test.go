@@ -31,6 +31,7 @@ import (
 	"gopkg.in/yaml.v3"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/rule"
 	"colloidtriage/openapi"
 )
 
@@ -625,7 +626,7 @@ func enumStrings(t testing.TB, s *openapi3.Schema) []string {
 	return out
 }
 
-func entryIDs(entries []advisor.Entry) []string {
+func entryIDs(entries []rule.Entry) []string {
 	out := make([]string, len(entries))
 	for i, e := range entries {
 		out[i] = e.ID

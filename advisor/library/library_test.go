@@ -17,7 +17,7 @@ func loadEmbedded(t testing.TB) *library.Library {
 	t.Helper()
 	lib, err := library.Load(rules.FS)
 	if err != nil {
-		t.Fatalf("LoadLibrary(rules.FS): %v", err)
+		t.Fatalf("library.Load(rules.FS): %v", err)
 	}
 	return lib
 }
@@ -343,12 +343,12 @@ func TestLibraryBrokenFiles(t *testing.T) {
 			lib, err := library.Load(fsys)
 			if tc.want == nil {
 				if err != nil || lib == nil {
-					t.Fatalf("LoadLibrary: %v", err)
+					t.Fatalf("library.Load: %v", err)
 				}
 				return
 			}
 			if err == nil {
-				t.Fatalf("LoadLibrary accepted the file, want an error containing %q", tc.want)
+				t.Fatalf("library.Load accepted the file, want an error containing %q", tc.want)
 			}
 			for _, w := range tc.want {
 				if !strings.Contains(err.Error(), w) {

@@ -1,4 +1,4 @@
-package advisor
+package rule
 
 import (
 	"bytes"
@@ -56,6 +56,12 @@ func decodeStrict(data []byte, v any) error {
 	dec.KnownFields(true)
 	return dec.Decode(v)
 }
+
+// Cause returns the catalogue entry of a cause.
+func (c *Catalog) Cause(id string) (Entry, bool) { return find(c.Causes, id) }
+
+// Remedy returns the catalogue entry of a remedy.
+func (c *Catalog) Remedy(id string) (Entry, bool) { return find(c.Remedies, id) }
 
 func find(entries []Entry, id string) (Entry, bool) {
 	for _, e := range entries {

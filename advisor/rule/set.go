@@ -1,4 +1,4 @@
-package advisor
+package rule
 
 import (
 	"crypto/sha256"
@@ -20,17 +20,19 @@ import (
 // ruleFileSuffix marks rule files in the built-in set and in site packs.
 const ruleFileSuffix = ".rules.yaml"
 
-// RuleSet is the compiled knowledge base: every rule parsed, checked against
+// Set is the compiled knowledge base: every rule parsed, checked against
 // the catalogue and the declared facts, and compiled once.
-type RuleSet struct {
+type Set struct {
 	Catalog *Catalog
 	Hash    string
 	Files   []string
-	rules   []rule
+	rules   []Rule
+	vocab   *vocabulary
 }
 
-type rule struct {
-	ruleSpec
+// Rule is one compiled rule.
+type Rule struct {
+	spec
 	program *vm.Program
 	cond    condition  // the program as a closure over the facts; nil outside the subset
 	text    []textPart // explain, split at its placeholders once at load
@@ -39,22 +41,28 @@ type rule struct {
 // textPart is literal text, or a fact whose value is formatted in its place.
 type textPart struct {
 	literal string
-	fact    *declaredFact // nil for literal text
+	fact    *declared // nil for literal text
 }
 
 var placeholder = regexp.MustCompile(`\{([A-Za-z0-9_]+)\}`)
 
-// LoadRuleSet reads the catalogue (catalog.yaml) and every *.rules.yaml file
-// of builtin, then the rule files of each site pack, and compiles them. Any
-// error names the file, the rule id, the line and the column.
-func LoadRuleSet(builtin fs.FS, packs ...fs.FS) (*RuleSet, error) {
+// Load reads the catalogue (catalog.yaml) and every *.rules.yaml file of
+// builtin, then the rule files of each site pack, and compiles them against
+// the facts declared in vocabulary (TopCauseScore is added). Any error names
+// the file, the rule id, the line and the column.
+func Load(vocabulary []Fact, builtin fs.FS, packs ...fs.FS) (*Set, error) {
+	vocab, err := newVocabulary(vocabulary)
+	if err != nil {
+		return nil, err
+	}
 	catalog, catalogData, err := loadCatalog(builtin, "catalog.yaml")
 	if err != nil {
 		return nil, err
 	}
 	h := sha256.New()
 	h.Write(catalogData)
-	rs := &RuleSet{Catalog: catalog}
+	rs := &Set{Catalog: catalog, vocab: vocab}
+	c := compiler{vocab: vocab, env: vocab.defaults.env(false), afterCausesEnv: vocab.defaults.env(true)}
 	seen := map[string]string{}
 	for i, fsys := range append([]fs.FS{builtin}, packs...) {
 		names, err := fs.Glob(fsys, "*"+ruleFileSuffix)
@@ -82,7 +90,7 @@ func LoadRuleSet(builtin fs.FS, packs ...fs.FS) (*RuleSet, error) {
 					return nil, s.errorAt("id", fmt.Sprintf("duplicate rule id, first defined in %s", prev))
 				}
 				seen[s.ID] = s.file
-				r, err := compileRule(s, catalog)
+				r, err := c.rule(s, catalog)
 				if err != nil {
 					return nil, err
 				}
@@ -98,62 +106,70 @@ func LoadRuleSet(builtin fs.FS, packs ...fs.FS) (*RuleSet, error) {
 	return rs, nil
 }
 
-func (s ruleSpec) errorAt(key, msg string) *RuleError {
+func (s spec) errorAt(key, msg string) *Error {
 	line, col := s.line, s.column
 	if n, ok := s.at[key]; ok {
 		line, col = n.Line, n.Column
 	}
-	return &RuleError{File: s.file, RuleID: s.ID, Line: line, Column: col, Message: msg}
+	return &Error{File: s.file, RuleID: s.ID, Line: line, Column: col, Message: msg}
+}
+
+// compiler compiles the rules of one set against its vocabulary.
+type compiler struct {
+	vocab *vocabulary
+	// env and afterCausesEnv declare the facts' types to the expression
+	// compiler (the values are the defaults); read only.
+	env, afterCausesEnv map[string]any
 }
 
 // fact looks up a fact the rule may name: top_cause_score only after the
 // causes.
-func (s ruleSpec) fact(name string) (declaredFact, bool) {
-	f, ok := factIndex[name]
-	return f, ok && (name != topCauseScore || s.AfterCauses)
+func (cp compiler) fact(s spec, name string) (declared, bool) {
+	f, ok := cp.vocab.index[name]
+	return f, ok && (name != TopCauseScore || s.AfterCauses)
 }
 
-func compileRule(s ruleSpec, c *Catalog) (rule, error) {
+func (cp compiler) rule(s spec, c *Catalog) (Rule, error) {
 	if s.ID == "" {
-		return rule{}, s.errorAt("id", "empty rule id")
+		return Rule{}, s.errorAt("id", "empty rule id")
 	}
 	if _, ok := find(c.Causes, s.Cause); !ok {
-		return rule{}, s.errorAt("cause", fmt.Sprintf("unknown cause %q", s.Cause))
+		return Rule{}, s.errorAt("cause", fmt.Sprintf("unknown cause %q", s.Cause))
 	}
 	if len(s.Symptoms) == 0 {
-		return rule{}, s.errorAt("symptoms", "a rule names at least one symptom (or \"any\")")
+		return Rule{}, s.errorAt("symptoms", "a rule names at least one symptom (or \"any\")")
 	}
 	for _, sym := range s.Symptoms {
 		if _, ok := find(c.Symptoms, sym); !ok && sym != "any" {
-			return rule{}, s.errorAt("symptoms", fmt.Sprintf("unknown symptom %q", sym))
+			return Rule{}, s.errorAt("symptoms", fmt.Sprintf("unknown symptom %q", sym))
 		}
 	}
 	if !(s.Certainty >= -1 && s.Certainty <= 1) || s.Certainty == 0 {
-		return rule{}, s.errorAt("certainty", "certainty must be in [-1, 1] and not 0")
+		return Rule{}, s.errorAt("certainty", "certainty must be in [-1, 1] and not 0")
 	}
 	for _, id := range s.Remedies {
 		if _, ok := find(c.Remedies, id); !ok {
-			return rule{}, s.errorAt("remedies", fmt.Sprintf("unknown remedy %q", id))
+			return Rule{}, s.errorAt("remedies", fmt.Sprintf("unknown remedy %q", id))
 		}
 	}
 	for _, name := range s.Evidence {
-		if f, ok := s.fact(name); !ok || f.Kind != numberFact {
-			return rule{}, s.errorAt("evidence", fmt.Sprintf("evidence %q is not a numeric fact", name))
+		if f, ok := cp.fact(s, name); !ok || f.Kind != Number {
+			return Rule{}, s.errorAt("evidence", fmt.Sprintf("evidence %q is not a numeric fact", name))
 		}
 	}
 	var text []textPart
 	last := 0
 	for _, m := range placeholder.FindAllStringSubmatchIndex(s.Explain, -1) {
 		name := s.Explain[m[2]:m[3]]
-		f, ok := s.fact(name)
+		f, ok := cp.fact(s, name)
 		if !ok {
-			return rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", name))
+			return Rule{}, s.errorAt("explain", fmt.Sprintf("placeholder {%s} is not a fact", name))
 		}
 		text = append(text, textPart{literal: s.Explain[last:m[0]]}, textPart{fact: &f})
 		last = m[1]
 	}
 	text = append(text, textPart{literal: s.Explain[last:]})
-	program, err := expr.Compile(s.When, compileOptions(s.AfterCauses)...)
+	program, err := expr.Compile(s.When, cp.options(s.AfterCauses)...)
 	if err != nil {
 		re := s.errorAt("when", err.Error())
 		var fe *file.Error
@@ -161,25 +177,18 @@ func compileRule(s ruleSpec, c *Catalog) (rule, error) {
 			p := s.whenPos.offset(fe.Line, fe.Column)
 			re.Line, re.Column, re.Message, re.Snippet = p.line, p.column, fe.Message, fe.Snippet
 		}
-		return rule{}, re
+		return Rule{}, re
 	}
-	return rule{ruleSpec: s, program: program, cond: compileCondition(program.Node()), text: text}, nil
+	return Rule{spec: s, program: program, cond: cp.condition(program.Node()), text: text}, nil
 }
 
-// ruleEnv and afterCausesEnv declare the facts' types to the compiler (the
-// values are the defaults); read only.
-var (
-	ruleEnv        = newFacts().env(false)
-	afterCausesEnv = newFacts().env(true)
-)
-
-// compileOptions declares the rule language: the facts with their types, a
+// options declares the rule language: the facts with their types, a
 // boolean result, and known(x), which is false for a number the advisor
 // could not compute for this sample (such numbers make every comparison false).
-func compileOptions(afterCauses bool) []expr.Option {
-	env := ruleEnv
+func (cp compiler) options(afterCauses bool) []expr.Option {
+	env := cp.env
 	if afterCauses {
-		env = afterCausesEnv
+		env = cp.afterCausesEnv
 	}
 	return []expr.Option{
 		expr.Env(env),
@@ -192,21 +201,21 @@ func compileOptions(afterCauses bool) []expr.Option {
 }
 
 // Rules lists the loaded rules for the catalogue endpoint.
-func (rs *RuleSet) Rules() []RuleInfo {
-	out := make([]RuleInfo, len(rs.rules))
+func (rs *Set) Rules() []Info {
+	out := make([]Info, len(rs.rules))
 	for i, r := range rs.rules {
 		remedies := r.Remedies
 		if remedies == nil {
 			remedies = []string{}
 		}
-		out[i] = RuleInfo{ID: r.ID, File: r.file, Line: r.line, Cause: r.Cause, Symptoms: r.Symptoms,
+		out[i] = Info{ID: r.ID, File: r.file, Line: r.line, Cause: r.Cause, Symptoms: r.Symptoms,
 			When: r.When, Certainty: r.Certainty, Remedies: remedies, AfterCauses: r.AfterCauses}
 	}
 	return out
 }
 
-// RuleInfo describes one loaded rule.
-type RuleInfo struct {
+// Info describes one loaded rule.
+type Info struct {
 	ID          string   `json:"id"`
 	File        string   `json:"file"`
 	Line        int      `json:"line"`
@@ -227,7 +236,7 @@ func sortedKeys(m map[string]bool) []string {
 	return out
 }
 
-func (s *ruleSpec) appliesTo(symptom string) bool {
+func (s *spec) appliesTo(symptom string) bool {
 	for _, sym := range s.Symptoms {
 		if sym == symptom || sym == "any" {
 			return true
@@ -236,9 +245,9 @@ func (s *ruleSpec) appliesTo(symptom string) bool {
 	return false
 }
 
-// writeExplanation writes the rule's text with its placeholders filled by
+// WriteExplanation writes the rule's text with its placeholders filled by
 // the facts' values.
-func (r *rule) writeExplanation(b *strings.Builder, f facts) {
+func (r *Rule) WriteExplanation(b *strings.Builder, f Facts) {
 	var value [64]byte
 	for _, part := range r.text {
 		if part.fact != nil {

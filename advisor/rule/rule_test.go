@@ -1,47 +1,93 @@
-package advisor
+package rule_test
 
 import (
+	"encoding/json"
 	"errors"
+	"io/fs"
+	"os"
 	"strings"
 	"testing"
 	"testing/fstest"
 
+	"colloidtriage/advisor"
+	"colloidtriage/advisor/rule"
 	"colloidtriage/rules"
 )
 
+// load builds the rule set of the built-in rules plus packs, against the
+// vocabulary the advisor declares.
+func load(packs ...fs.FS) (*rule.Set, error) {
+	eng, err := advisor.LoadEngine(rules.FS, packs...)
+	if err != nil {
+		return nil, err
+	}
+	return eng.RuleSet(), nil
+}
+
 func TestBuiltinRuleSetCompiles(t *testing.T) {
 	t.Parallel()
-	rs, err := LoadRuleSet(rules.FS)
+	rs, err := load()
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(rs.rules) == 0 || !strings.HasPrefix(rs.Hash, "sha256:") {
-		t.Fatalf("rule set: %d rules, hash %q", len(rs.rules), rs.Hash)
+	if len(rs.Rules()) == 0 || !strings.HasPrefix(rs.Hash, "sha256:") {
+		t.Fatalf("rule set: %d rules, hash %q", len(rs.Rules()), rs.Hash)
 	}
-	again, err := LoadRuleSet(rules.FS)
+	again, err := load()
 	if err != nil || again.Hash != rs.Hash {
 		t.Fatalf("hash not stable: %q vs %q (%v)", rs.Hash, again.Hash, err)
 	}
 }
 
-func TestCatalogRemediesHaveSolvers(t *testing.T) {
+// TestConditionsMatchMachine: every built-in condition compiles to a
+// closure, and the closure answers as the expression library's machine does
+// on random facts, NaN and infinities included.
+func TestConditionsMatchMachine(t *testing.T) {
 	t.Parallel()
-	rs, err := LoadRuleSet(rules.FS)
+	rs, err := load()
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, r := range rs.Catalog.Remedies {
-		_, ok := remedySolvers[r.ID]
-		if !ok && r.ID != "investigate_non_colloidal" {
-			t.Errorf("remedy %s has no target solver", r.ID)
-		}
-		if ok != strings.Contains(r.Action, "{target}") {
-			t.Errorf("remedy %s: action template and solver disagree about a target", r.ID)
-		}
+	rule.ConditionsMatchMachine(t, rs)
+}
+
+// TestConditionOutsideSubset: a site rule beyond the subset has no closure
+// and still runs, on the machine.
+func TestConditionOutsideSubset(t *testing.T) {
+	t.Parallel()
+	pack := fstest.MapFS{"site.rules.yaml": {Data: []byte("rules:\n  - id: site.modulo\n    cause: gravity_settling\n" +
+		"    symptoms: [settling]\n    when: symptom in [\"settling\"] && int(age_days) % 2 == 0\n    certainty: 0.9\n    explain: site-modulo-fired\n")}}
+	eng, err := advisor.LoadEngine(rules.FS, pack)
+	if err != nil {
+		t.Fatal(err)
 	}
-	for id := range remedySolvers {
-		if _, ok := find(rs.Catalog.Remedies, id); !ok {
-			t.Errorf("solver for %s, which the catalogue does not list", id)
+	loaded, closure := rule.HasClosure(eng.RuleSet(), "site.modulo")
+	if !loaded {
+		t.Fatal("site.modulo not loaded")
+	}
+	if closure {
+		t.Fatal("site.modulo compiled to a closure")
+	}
+	data, err := os.ReadFile("../../testdata/demo/gravity_settling.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, age := range []float64{4, 3} {
+		var s advisor.Sample
+		if err := json.Unmarshal(data, &s); err != nil {
+			t.Fatal(err)
+		}
+		s.Observation = &advisor.Observation{AgeDays: &age}
+		rep, err := eng.Triage(&s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		fired := false
+		for _, c := range rep.Causes {
+			fired = fired || strings.Contains(c.Explanation, "site-modulo-fired")
+		}
+		if fired != (age == 4) {
+			t.Errorf("age %g d: site.modulo fired = %v", age, fired)
 		}
 	}
 }
@@ -64,10 +110,10 @@ func TestRuleErrorsNamePlace(t *testing.T) {
 	}
 	for _, c := range cases {
 		pack := fstest.MapFS{"site.rules.yaml": {Data: []byte(head + "    when: " + c.when + "\n" + c.extra)}}
-		_, err := LoadRuleSet(rules.FS, pack)
-		var re *RuleError
+		_, err := load(pack)
+		var re *rule.Error
 		if !errors.As(err, &re) {
-			t.Errorf("%s: want a *RuleError, got %v", c.name, err)
+			t.Errorf("%s: want a *rule.Error, got %v", c.name, err)
 			continue
 		}
 		if re.File != "pack1/site.rules.yaml" || re.RuleID != "site.broken" || re.Line != c.line ||
@@ -90,24 +136,13 @@ func TestRuleCatalogueChecks(t *testing.T) {
 	}
 	for _, c := range cases {
 		pack := fstest.MapFS{"site.rules.yaml": {Data: []byte(base + c.body)}}
-		_, err := LoadRuleSet(rules.FS, pack)
+		_, err := load(pack)
 		if err == nil || !strings.Contains(err.Error(), c.msg) || !strings.Contains(err.Error(), "site.x") {
 			t.Errorf("%s: got %v, want an error naming site.x with %q", c.name, err, c.msg)
 		}
 	}
 	dup := fstest.MapFS{"a.rules.yaml": {Data: []byte("rules:\n  - id: gravity.clear_layer_beyond_criterion\n    cause: gravity_settling\n    symptoms: [settling]\n    when: true\n    certainty: 0.1\n    explain: x\n")}}
-	if _, err := LoadRuleSet(rules.FS, dup); err == nil || !strings.Contains(err.Error(), "duplicate rule id") {
+	if _, err := load(dup); err == nil || !strings.Contains(err.Error(), "duplicate rule id") {
 		t.Errorf("duplicate id: got %v", err)
-	}
-}
-
-func TestCatalogActionHoldsOneTarget(t *testing.T) {
-	t.Parallel()
-	fsys := fstest.MapFS{"catalog.yaml": {Data: []byte("remedies:\n  - id: twice\n    action: \"{target} and {target}\"\n")}}
-	if _, _, err := loadCatalog(fsys, "catalog.yaml"); err == nil || !strings.Contains(err.Error(), "at most one {target}") {
-		t.Errorf("two {target}: got %v", err)
-	}
-	if got := withTarget("Raise it: {target}.", "x >= 1"); got != "Raise it: x >= 1." {
-		t.Errorf("withTarget = %q", got)
 	}
 }

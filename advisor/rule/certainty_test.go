@@ -1,4 +1,4 @@
-package advisor
+package rule
 
 import (
 	"math"
@@ -19,17 +19,17 @@ func TestCombineCertainty(t *testing.T) {
 		{0, 0.5, 0.5},
 	}
 	for _, c := range cases {
-		got := combineCertainty(c.a, c.b)
+		got := combine(c.a, c.b)
 		if math.Abs(got-c.want) > 1e-12 {
 			t.Errorf("combine(%v, %v) = %v, want %v", c.a, c.b, got, c.want)
 		}
-		if back := combineCertainty(c.b, c.a); math.Abs(back-got) > 1e-12 {
+		if back := combine(c.b, c.a); math.Abs(back-got) > 1e-12 {
 			t.Errorf("combine not commutative for %v, %v", c.a, c.b)
 		}
 	}
 	// Associativity for same-sign evidence.
-	x := combineCertainty(combineCertainty(0.3, 0.5), 0.7)
-	y := combineCertainty(0.3, combineCertainty(0.5, 0.7))
+	x := combine(combine(0.3, 0.5), 0.7)
+	y := combine(0.3, combine(0.5, 0.7))
 	if math.Abs(x-y) > 1e-12 {
 		t.Errorf("not associative: %v vs %v", x, y)
 	}

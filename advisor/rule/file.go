@@ -1,4 +1,4 @@
-package advisor
+package rule
 
 import (
 	"fmt"
@@ -7,9 +7,9 @@ import (
 	"gopkg.in/yaml.v3"
 )
 
-// ruleSpec is one rule as written in a rule file, with the position of every
+// spec is one rule as written in a rule file, with the position of every
 // part that can be wrong, so that load-time errors point at it.
-type ruleSpec struct {
+type spec struct {
 	ID          string
 	Cause       string
 	Symptoms    []string
@@ -36,21 +36,21 @@ var ruleKeys = map[string]bool{
 
 // parseRuleFile reads a rule file: a mapping with the single key "rules"
 // holding a sequence of rule mappings.
-func parseRuleFile(file string, data []byte) ([]ruleSpec, error) {
+func parseRuleFile(file string, data []byte) ([]spec, error) {
 	var doc yaml.Node
 	if err := yaml.Unmarshal(data, &doc); err != nil {
-		return nil, &RuleError{File: file, Message: err.Error()}
+		return nil, &Error{File: file, Message: err.Error()}
 	}
 	if len(doc.Content) == 0 {
-		return nil, &RuleError{File: file, Line: 1, Column: 1, Message: "empty rule file"}
+		return nil, &Error{File: file, Line: 1, Column: 1, Message: "empty rule file"}
 	}
 	root := doc.Content[0]
 	if root.Kind != yaml.MappingNode || len(root.Content) != 2 || root.Content[0].Value != "rules" ||
 		root.Content[1].Kind != yaml.SequenceNode {
-		return nil, &RuleError{File: file, Line: root.Line, Column: root.Column,
+		return nil, &Error{File: file, Line: root.Line, Column: root.Column,
 			Message: `a rule file is a mapping with one key "rules" holding a list of rules`}
 	}
-	var specs []ruleSpec
+	var specs []spec
 	for _, n := range root.Content[1].Content {
 		s, err := parseRule(file, n)
 		if err != nil {
@@ -61,15 +61,15 @@ func parseRuleFile(file string, data []byte) ([]ruleSpec, error) {
 	return specs, nil
 }
 
-func parseRule(file string, n *yaml.Node) (ruleSpec, error) {
-	s := ruleSpec{file: file, line: n.Line, column: n.Column, at: map[string]yaml.Node{}}
+func parseRule(file string, n *yaml.Node) (spec, error) {
+	s := spec{file: file, line: n.Line, column: n.Column, at: map[string]yaml.Node{}}
 	if n.Kind != yaml.MappingNode {
-		return s, &RuleError{File: file, Line: n.Line, Column: n.Column, Message: "a rule is a mapping"}
+		return s, &Error{File: file, Line: n.Line, Column: n.Column, Message: "a rule is a mapping"}
 	}
 	for i := 0; i+1 < len(n.Content); i += 2 {
 		key, val := n.Content[i], n.Content[i+1]
 		if !ruleKeys[key.Value] {
-			return s, &RuleError{File: file, RuleID: s.ID, Line: key.Line, Column: key.Column,
+			return s, &Error{File: file, RuleID: s.ID, Line: key.Line, Column: key.Column,
 				Message: fmt.Sprintf("unknown key %q (known: %s)", key.Value, strings.Join(sortedKeys(ruleKeys), ", "))}
 		}
 		s.at[key.Value] = *val
@@ -96,13 +96,13 @@ func parseRule(file string, n *yaml.Node) (ruleSpec, error) {
 			err = val.Decode(&s.AfterCauses)
 		}
 		if err != nil {
-			return s, &RuleError{File: file, RuleID: s.ID, Line: val.Line, Column: val.Column,
+			return s, &Error{File: file, RuleID: s.ID, Line: val.Line, Column: val.Column,
 				Message: fmt.Sprintf("%s: %v", key.Value, err)}
 		}
 	}
 	for _, k := range []string{"id", "cause", "symptoms", "when", "certainty", "explain"} {
 		if _, ok := s.at[k]; !ok {
-			return s, &RuleError{File: file, RuleID: s.ID, Line: n.Line, Column: n.Column,
+			return s, &Error{File: file, RuleID: s.ID, Line: n.Line, Column: n.Column,
 				Message: fmt.Sprintf("missing key %q", k)}
 		}
 	}
@@ -130,8 +130,8 @@ func (p position) offset(line, column int) position {
 	return position{p.line + line - 1, column + 1}
 }
 
-// RuleError is a rule set that cannot be loaded, with the place to fix.
-type RuleError struct {
+// Error is a rule set that cannot be loaded, with the place to fix.
+type Error struct {
 	File    string
 	RuleID  string
 	Line    int
@@ -140,7 +140,7 @@ type RuleError struct {
 	Snippet string
 }
 
-func (e *RuleError) Error() string {
+func (e *Error) Error() string {
 	var b strings.Builder
 	b.WriteString(e.File)
 	if e.Line > 0 {
