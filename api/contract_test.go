@@ -28,7 +28,7 @@ import (
 	"github.com/getkin/kin-openapi/routers"
 	"github.com/getkin/kin-openapi/routers/gorillamux"
 	"github.com/labstack/echo/v4"
-	"gopkg.in/yaml.v3"
+	"go.yaml.in/yaml/v3"
 
 	"colloidtriage/advisor"
 	"colloidtriage/advisor/rule"

@@ -6,7 +6,7 @@ import (
 	"io/fs"
 	"strings"
 
-	"gopkg.in/yaml.v3"
+	"go.yaml.in/yaml/v3"
 )
 
 // Catalog holds the stable identifiers of symptoms, causes and remedies with
