@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
 	"colloidtriage/advisor/rule"
@@ -48,9 +49,9 @@ func (e *Engine) RuleSet() *rule.Set { return e.rules }
 func (e *Engine) Library() *library.Library { return e.lib }
 
 // Triage computes the scales of a validated sample, ranks the causes of its
-// symptom and solves the remedies' targets. It returns an *InputError when
+// symptom and solves the remedies' targets. It returns an *input.Error when
 // the sample is physically inconsistent.
-func (e *Engine) Triage(s *Sample) (*Report, error) {
+func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, err
@@ -63,28 +64,28 @@ func (e *Engine) Triage(s *Sample) (*Report, error) {
 		Scales:      ev.scales,
 		Causes:      causes,
 		Cautions:    cautions(ev),
-		Assumptions: ev.n.list,
+		Assumptions: ev.notes.List(),
 		Models:      ev.models,
-		Inputs:      understood(s, ev.c),
+		Inputs:      input.Understood(s, ev.cond),
 	}, nil
 }
 
 // Scales computes only the physics of a sample, without rules.
-func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]string, error) {
+func (e *Engine) Scales(s *input.Sample) (map[string]Scale, []string, map[string]string, error) {
 	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, nil, nil, err
 	}
-	return ev.scales, ev.n.list, ev.models, nil
+	return ev.scales, ev.notes.List(), ev.models, nil
 }
 
-func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), f: e.rules.NewFacts()}
-	c, err := e.resolve(s, ev.n)
+func (e *Engine) evaluate(s *input.Sample) (*evaluation, error) {
+	ev := &evaluation{notes: input.NewNotes(32), scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), facts: e.rules.NewFacts()}
+	c, err := input.Resolve(s, e.lib, ev.notes)
 	if err != nil {
 		return nil, err
 	}
-	ev.c = c
+	ev.cond = c
 	ev.inputFacts()
 	ev.computeGravity()
 	ev.computeInteraction()
@@ -95,7 +96,7 @@ func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
 // rank ranks the causes of the sample's symptom (see rule.Set.Rank) and
 // writes each with its evidence, explanation and remedies.
 func (e *Engine) rank(ev *evaluation) []Cause {
-	scores := e.rules.Rank(ev.f, ev.c.symptom)
+	scores := e.rules.Rank(ev.facts, ev.cond.Symptom)
 	out := make([]Cause, len(scores))
 	for i, cs := range scores {
 		out[i] = e.cause(ev, cs, i+1)
@@ -119,13 +120,13 @@ func (e *Engine) cause(ev *evaluation, cs *rule.Score, rank int) Cause {
 		if i > 0 {
 			explanation.WriteByte(' ')
 		}
-		r.WriteExplanation(&explanation, ev.f)
+		r.WriteExplanation(&explanation, ev.facts)
 		for _, name := range r.Evidence {
-			v := ev.f.Number(name)
+			v := ev.facts.Number(name)
 			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
 				continue
 			}
-			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: number.Round(v, 6), Unit: ev.f.Unit(name), Test: r.When})
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: number.Round(v, 6), Unit: ev.facts.Unit(name), Test: r.When})
 		}
 		if r.Certainty < 0 {
 			continue

@@ -4,6 +4,7 @@ import (
 	"math"
 	"strings"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
 	"colloidtriage/advisor/rule"
 	"colloidtriage/physics"
@@ -12,10 +13,10 @@ import (
 // evaluation is the working state of one triage: the resolved conditions,
 // the facts the rules see, the scales reported, and the notes made.
 type evaluation struct {
-	c      *conditions
-	f      rule.Facts
+	cond   *input.Conditions
+	facts  rule.Facts
 	scales map[string]Scale
-	n      *notes
+	notes  *input.Notes
 	models map[string]string
 
 	pair    physics.Pair // the interaction of two median particles, when evaluable
@@ -50,10 +51,10 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 	if !ok {
 		panic("advisor: undeclared scale " + name)
 	}
-	ev.f.SetNumber(name, v)
+	ev.facts.SetNumber(name, v)
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
-			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)
+			ev.notes.Add("%s is unbounded for this sample and is not reported as a number", name)
 		}
 		return
 	}
@@ -83,43 +84,43 @@ var (
 // model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(m modelChoice) {
 	ev.models[m.key] = m.text
-	ev.n.text(m.note)
+	ev.notes.Text(m.note)
 }
 
 func (ev *evaluation) inputFacts() {
-	c, f := ev.c, ev.f
-	f.SetText("symptom", c.symptom)
-	f.SetText("phase", c.phase)
-	f.SetNumber("volume_fraction", c.phi)
-	f.SetNumber("shelf_life_days", c.shelfLife/day)
-	f.SetNumber("container_height_mm", c.height*1e3)
-	f.SetNumber("max_clear_layer_mm", c.maxClear*1e3)
-	f.SetNumber("storage_temperature_c", c.storageTempK-physics.CelsiusZero)
-	f.SetNumber("observed_clear_layer_mm", c.observed.clearLayer*1e3)
-	f.SetNumber("age_days", c.observed.age/day)
-	f.SetText("sediment_redisperses", c.observed.redisperses)
-	f.SetNumber("viscosity_change_percent", c.observed.viscosityChange)
-	f.SetNumber("size_growth_percent", c.observed.sizeGrowth)
-	f.SetFlag("zeta_measured", c.zetaSource == "measured" || c.zetaSource == "mobility")
-	f.SetFlag("has_electrolyte", c.ionicStrength > 0)
-	f.SetNumber("ph", c.ph)
-	f.SetNumber("isoelectric_ph", c.iep)
-	f.SetFlag("has_steric_layer", c.steric.present)
-	f.SetNumber("steric_thickness_nm", nanOr(c.steric.present, c.steric.thickness*1e9))
-	if c.steric.hasQuality {
-		f.SetText("solvent_quality", c.steric.quality.String())
+	c, f := ev.cond, ev.facts
+	f.SetText("symptom", c.Symptom)
+	f.SetText("phase", c.Phase)
+	f.SetNumber("volume_fraction", c.VolumeFraction)
+	f.SetNumber("shelf_life_days", c.ShelfLife/input.Day)
+	f.SetNumber("container_height_mm", c.Height*1e3)
+	f.SetNumber("max_clear_layer_mm", c.MaxClear*1e3)
+	f.SetNumber("storage_temperature_c", c.StorageTempK-physics.CelsiusZero)
+	f.SetNumber("observed_clear_layer_mm", c.Observed.ClearLayer*1e3)
+	f.SetNumber("age_days", c.Observed.Age/input.Day)
+	f.SetText("sediment_redisperses", c.Observed.Redisperses)
+	f.SetNumber("viscosity_change_percent", c.Observed.ViscosityChange)
+	f.SetNumber("size_growth_percent", c.Observed.SizeGrowth)
+	f.SetFlag("zeta_measured", c.ZetaSource == "measured" || c.ZetaSource == "mobility")
+	f.SetFlag("has_electrolyte", c.IonicStrength > 0)
+	f.SetNumber("ph", c.PH)
+	f.SetNumber("isoelectric_ph", c.IsoelectricPH)
+	f.SetFlag("has_steric_layer", c.Steric.Present)
+	f.SetNumber("steric_thickness_nm", nanOr(c.Steric.Present, c.Steric.Thickness*1e9))
+	if c.Steric.HasQuality {
+		f.SetText("solvent_quality", c.Steric.Quality.String())
 	}
-	f.SetNumber("cloud_point_c", c.steric.cloudK-physics.CelsiusZero)
-	f.SetNumber("free_polymer_g_L", nanOr(c.freePolymer.present, c.freePolymer.concentration))
-	f.SetNumber("adsorbing_coverage", nanOr(c.adsorbing.present, c.adsorbing.coverage))
-	f.SetNumber("adsorbing_molar_mass_kg_mol", nanOr(c.adsorbing.present, c.adsorbing.molarMass))
-	f.SetNumber("shear_rate_per_s", c.shear)
-	f.SetNumber("yield_stress_pa", c.yieldStress)
-	f.SetNumber("min_barrier_kT", c.criteria.minBarrierKT)
-	f.SetNumber("half_life_to_shelf_life", c.criteria.halfLifeRatio)
-	f.SetFlag("has_size_distribution", c.classes != nil)
-	f.SetNumber("max_relative_viscosity", c.criteria.maxRelViscosity)
-	f.SetNumber("max_steric_contact_kT", c.criteria.maxStericKT)
+	f.SetNumber("cloud_point_c", c.Steric.CloudK-physics.CelsiusZero)
+	f.SetNumber("free_polymer_g_L", nanOr(c.FreePolymer.Present, c.FreePolymer.Concentration))
+	f.SetNumber("adsorbing_coverage", nanOr(c.Adsorbing.Present, c.Adsorbing.Coverage))
+	f.SetNumber("adsorbing_molar_mass_kg_mol", nanOr(c.Adsorbing.Present, c.Adsorbing.MolarMass))
+	f.SetNumber("shear_rate_per_s", c.Shear)
+	f.SetNumber("yield_stress_pa", c.YieldStress)
+	f.SetNumber("min_barrier_kT", c.Criteria.MinBarrierKT)
+	f.SetNumber("half_life_to_shelf_life", c.Criteria.HalfLifeRatio)
+	f.SetFlag("has_size_distribution", c.Classes != nil)
+	f.SetNumber("max_relative_viscosity", c.Criteria.MaxRelViscosity)
+	f.SetNumber("max_steric_contact_kT", c.Criteria.MaxStericKT)
 }
 
 func nanOr(ok bool, v float64) float64 {

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
@@ -84,18 +85,18 @@ const (
 )
 
 // zetaNeeded is the problem of a sample whose double layer cannot be set up.
-var zetaNeeded = FieldProblem{Pointer: "/particles/zeta_mV",
+var zetaNeeded = input.FieldProblem{Pointer: "/particles/zeta_mV",
 	Reason: "needed for the interaction profile: give zeta_mV, mobility_um_cm_per_V_s, or medium.ph with " +
 		"particles.isoelectric_ph or a material with an isoelectric point",
 	Unit: "mV", Valid: "-300 <= value <= 300"}
 
 // Profile evaluates a validated sample as Triage does and returns the
 // interaction energy curve of two median particles on points log-spaced
-// separations (physics.SeparationGrid). It returns an *InputError when the
+// separations (physics.SeparationGrid). It returns an *input.Error when the
 // sample is inconsistent or no surface potential is known. It panics when
 // points is outside [ProfilePointsMin, ProfilePointsMax] (the caller checks
 // the request).
-func (e *Engine) Profile(s *Sample, points int) (*Profile, error) {
+func (e *Engine) Profile(s *input.Sample, points int) (*Profile, error) {
 	if points < ProfilePointsMin || points > ProfilePointsMax {
 		panic(fmt.Sprintf("advisor: Profile needs %d to %d points, got %d", ProfilePointsMin, ProfilePointsMax, points))
 	}
@@ -104,7 +105,7 @@ func (e *Engine) Profile(s *Sample, points int) (*Profile, error) {
 		return nil, err
 	}
 	if !ev.hasPair {
-		return nil, &InputError{Problems: []FieldProblem{zetaNeeded}}
+		return nil, &input.Error{Problems: []input.FieldProblem{zetaNeeded}}
 	}
 	p := ev.profile(points)
 	p.SampleID = s.SampleID
@@ -119,7 +120,7 @@ func (ev *evaluation) profile(points int) *Profile {
 	kT := physics.Boltzmann * pair.TempK
 	grid := physics.SeparationGrid(pair, points)
 	depletion := pair.DepletionRange > 0 && pair.DepletionDensity > 0
-	notes := append([]string(nil), ev.n.list...)
+	notes := append([]string(nil), ev.notes.List()...)
 	note := func(format string, args ...any) { notes = append(notes, fmt.Sprintf(format, args...)) }
 
 	pts, skipped := samplePoints(pair, grid, depletion)

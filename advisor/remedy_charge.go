@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
@@ -17,8 +18,8 @@ import (
 
 func stabilityCriterion(ev *evaluation) string {
 	if ev.stabilityText == "" {
-		ev.stabilityText = "energy barrier >= " + number.Shortest(ev.c.criteria.minBarrierKT) + " kT and aggregation half-life >= " +
-			number.Shortest(ev.c.criteria.halfLifeRatio) + " x shelf life"
+		ev.stabilityText = "energy barrier >= " + number.Shortest(ev.cond.Criteria.MinBarrierKT) + " kT and aggregation half-life >= " +
+			number.Shortest(ev.cond.Criteria.HalfLifeRatio) + " x shelf life"
 	}
 	return ev.stabilityText
 }
@@ -135,7 +136,7 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 	if p.StericThickness == 0 {
 		return dlvoMarginSlope(ev, p, log10W)
 	}
-	kT := physics.Boltzmann * ev.c.storageTempK
+	kT := physics.Boltzmann * ev.cond.StorageTempK
 	contact := 2 * p.StericThickness
 	byContact, contactSlope := p.Energy(contact)/kT, p.LogKappaSlope(contact)/kT*math.Ln10/2
 	m, s := dlvoMarginSlope(ev, p, log10W)
@@ -150,8 +151,8 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 
 // dlvoMarginSlope is stabilityMarginSlope without steric layers.
 func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
-	c := ev.c
-	kT := physics.Boltzmann * c.storageTempK
+	c := ev.cond
+	kT := physics.Boltzmann * c.StorageTempK
 	barrier, barrierSlope := 0.0, 0.0
 	b := p.BarrierNear(ev.lastBarrier)
 	if b.Found {
@@ -159,7 +160,7 @@ func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, s
 		barrierSlope = p.LogKappaSlope(b.Separation) / kT * math.Ln10 / 2
 		ev.lastBarrier = b.Separation
 	}
-	byBarrier := barrier - c.criteria.minBarrierKT
+	byBarrier := barrier - c.Criteria.MinBarrierKT
 	if !b.Found && byBarrier < 0 {
 		return byBarrier, barrierSlope
 	}
@@ -170,9 +171,9 @@ func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, s
 	case math.IsNaN(w):
 		return math.NaN(), barrierSlope // no estimate here: the search falls back to the quadrature
 	}
-	n0 := physics.NumberDensity(c.phi, c.radius)
-	log10T := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, w)
-	byHalfLife := log10T - math.Log10(c.criteria.halfLifeRatio*c.shelfLife)
+	n0 := physics.NumberDensity(c.VolumeFraction, c.Radius)
+	log10T := physics.Log10HalfLife(c.Liquid.Viscosity, c.StorageTempK, n0, w)
+	byHalfLife := log10T - math.Log10(c.Criteria.HalfLifeRatio*c.ShelfLife)
 	if byBarrier < byHalfLife {
 		return byBarrier, barrierSlope
 	}
@@ -181,14 +182,14 @@ func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, s
 
 func (ev *evaluation) withIonicStrength(I float64) physics.Pair {
 	p := ev.pair
-	p.Kappa = physics.DebyeKappa(I, ev.c.liquid.epsR, ev.c.storageTempK)
+	p.Kappa = physics.DebyeKappa(I, ev.cond.Liquid.Permittivity, ev.cond.StorageTempK)
 	return p
 }
 
 // ionicStrengthFloor is the lowest ionic strength a remedy may ask for.
 func ionicStrengthFloor(ev *evaluation) float64 {
-	if ev.c.liquid.aqueous {
-		return autoionisationMolM3
+	if ev.cond.Liquid.Aqueous {
+		return input.AutoionisationMolM3
 	}
 	return 1e-6
 }
@@ -217,16 +218,16 @@ const ionicStrengthTol = 1e-3
 // slope); otherwise the gap is renewed there and the search repeated. A few
 // rounds without an answer fall back to Newton steps on the exact margin.
 func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
-	c := ev.c
+	c := ev.cond
 	floor := ionicStrengthFloor(ev)
-	kT := physics.Boltzmann * c.storageTempK
-	top := c.ionicStrength
+	kT := physics.Boltzmann * c.StorageTempK
+	top := c.IonicStrength
 	if !ev.hasBarrier && ev.pair.StericThickness == 0 {
 		// No barrier at the present ionic strength: the margin has no slope
 		// there, so the search starts where the barrier meets its criterion.
 		// With steric layers the margin is the contact energy there, which
 		// has a slope, and the layers may shield the pair above that point.
-		I, ok := physics.CriticalIonicStrength(ev.pair, c.criteria.minBarrierKT*kT, ev.lastBarrier)
+		I, ok := physics.CriticalIonicStrength(ev.pair, c.Criteria.MinBarrierKT*kT, ev.lastBarrier)
 		switch {
 		case !ok && I == 0:
 			return 0, false
@@ -428,8 +429,8 @@ const potentialTol = 1e-5
 // needed potential, anchored to the measured zeta at the present pH when
 // there is one (the estimate's shape, the measurement's scale).
 func solvePH(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	if math.IsNaN(c.iep) {
+	c := ev.cond
+	if math.IsNaN(c.IsoelectricPH) {
 		return Target{}, "isoelectric point unknown", false
 	}
 	psi, ok := smallestAcceptablePotential(ev)
@@ -437,19 +438,19 @@ func solvePH(ev *evaluation) (Target, string, bool) {
 		return Target{}, stabilityCriterion(ev) + ": not reachable by pH alone at this ionic strength", false
 	}
 	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
-	if c.zetaSource != "estimated" && !math.IsNaN(c.ph) {
-		if model := physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK); model*c.zeta > 0 {
-			scale = c.zeta / model
+	if c.ZetaSource != "estimated" && !math.IsNaN(c.PH) {
+		if model := physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK); model*c.Zeta > 0 {
+			scale = c.Zeta / model
 			anchor = "; pH estimate model scaled to the measured zeta at the present pH"
 		}
 	}
-	above := math.IsNaN(c.ph) || c.ph >= c.iep
-	lo, hi, op := c.iep, 14.0, ">="
+	above := math.IsNaN(c.PH) || c.PH >= c.IsoelectricPH
+	lo, hi, op := c.IsoelectricPH, 14.0, ">="
 	if !above {
-		lo, hi, op = 0, c.iep, "<="
+		lo, hi, op = 0, c.IsoelectricPH, "<="
 	}
 	f := func(ph float64) float64 {
-		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.iep, c.storageTempK)) - psi
+		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.IsoelectricPH, c.StorageTempK)) - psi
 	}
 	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
 	if !ok {
@@ -462,20 +463,20 @@ func solvePH(ev *evaluation) (Target, string, bool) {
 const multivalentTol = 1e-4
 
 func solveMultivalent(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	if c.multivalentSalt == "" || !ev.hasPair {
+	c := ev.cond
+	if c.MultivalentSalt == "" || !ev.hasPair {
 		return Target{}, "no multivalent salt stated", false
 	}
-	other := c.ionicStrength - c.multivalentIonicShare*c.multivalentConc
+	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	withConc := func(conc float64) physics.Pair {
-		return ev.withIonicStrength(math.Max(other+c.multivalentIonicShare*conc, ionicStrengthFloor(ev)))
+		return ev.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(ev)))
 	}
 	crit := stabilityCriterion(ev) + "; counter-ion valence kept (conservative)"
-	conc := c.multivalentConc
+	conc := c.MultivalentConc
 	a := peakAnchor{ev: ev}
 	if m, _ := a.estimated(withConc(conc)); m >= 0 {
 		if m, _ = a.exact(withConc(conc)); m >= 0 {
-			return Target{c.multivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+			return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
 		}
 	}
 	reached := true
@@ -488,9 +489,9 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 		if present >= 0 {
 			return conc, true // the present concentration is acceptable
 		}
-		return physics.FindRootFrom(margin, 0, conc, without, present, multivalentTol*c.multivalentConc)
+		return physics.FindRootFrom(margin, 0, conc, without, present, multivalentTol*c.MultivalentConc)
 	}
-	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.multivalentConc)
+	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.MultivalentConc)
 	conc = math.Max(conc, 0) // a root within the tolerance of none at all
 	switch {
 	case !reached:
@@ -498,7 +499,7 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 	case !ok:
 		return Target{}, crit, false
 	}
-	return Target{c.multivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+	return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
 }
 
 // looseFlocBarrierKT is the barrier below which particles join loose flocs
@@ -507,7 +508,7 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 const looseFlocBarrierKT = 5.0
 
 func solveControlledFlocculation(ev *evaluation) (Target, string, bool) {
-	kT := physics.Boltzmann * ev.c.storageTempK
+	kT := physics.Boltzmann * ev.cond.StorageTempK
 	// Each barrier is searched from the last one found (Pair.BarrierNear, as
 	// in stabilityMarginSlope): the maximum reached from there, which for a
 	// curve with two maxima need not be Pair.Barrier's highest.

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
@@ -14,30 +15,30 @@ import (
 // maxClear/shelfLife.
 
 func clearLayerCriterion(ev *evaluation) string {
-	return "clear layer at the end of a " + number.Shortest(ev.c.shelfLife/day) + " d shelf life <= " +
-		number.Quantity(ev.c.maxClear*1e3, "mm") + " (hindered Stokes settling)"
+	return "clear layer at the end of a " + number.Shortest(ev.cond.ShelfLife/input.Day) + " d shelf life <= " +
+		number.Quantity(ev.cond.MaxClear*1e3, "mm") + " (hindered Stokes settling)"
 }
 
 // allowedStokesSpeed is the largest isolated-particle Stokes speed, m/s,
 // that meets the clear-layer criterion at the sample's volume fraction.
 func allowedStokesSpeed(ev *evaluation) float64 {
-	c := ev.c
-	return c.maxClear / c.shelfLife / physics.RichardsonZakiFactor(c.phi, physics.RichardsonZakiExponentLowRe)
+	c := ev.cond
+	return c.MaxClear / c.ShelfLife / physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
 }
 
 func solveParticleSize(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	drho := math.Abs(c.particleDensity - c.liquid.density)
+	c := ev.cond
+	drho := math.Abs(c.ParticleDensity - c.Liquid.Density)
 	if drho == 0 {
 		return Target{}, "density already matched", false
 	}
-	d := math.Sqrt(18 * c.liquid.viscosity * allowedStokesSpeed(ev) / (drho * physics.StandardGravity))
+	d := math.Sqrt(18 * c.Liquid.Viscosity * allowedStokesSpeed(ev) / (drho * physics.StandardGravity))
 	// Particles whose gravitational length reaches the container height
 	// never leave a clear layer, however long they stand: at sedimentation
 	// equilibrium the top holds at least 1/e of the bottom's concentration
 	// (Perrin's barometric profile).
-	kT := physics.Boltzmann * c.storageTempK
-	brownian := 2 * math.Cbrt(3*kT/(4*math.Pi*drho*physics.StandardGravity*c.height))
+	kT := physics.Boltzmann * c.StorageTempK
+	brownian := 2 * math.Cbrt(3*kT/(4*math.Pi*drho*physics.StandardGravity*c.Height))
 	crit := clearLayerCriterion(ev)
 	if brownian > d {
 		d = brownian
@@ -58,19 +59,19 @@ const (
 // solveDensityMatch matches the liquid to solid particles, and the droplets
 // (by a weighting agent) to the liquid for emulsions and foams.
 func solveDensityMatch(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	maxDrho := 9 * c.liquid.viscosity * allowedStokesSpeed(ev) / (2 * c.radius * c.radius * physics.StandardGravity)
+	c := ev.cond
+	maxDrho := 9 * c.Liquid.Viscosity * allowedStokesSpeed(ev) / (2 * c.Radius * c.Radius * physics.StandardGravity)
 	crit := clearLayerCriterion(ev)
-	if c.phase != "solid" {
-		if c.particleDensity < c.liquid.density {
-			return Target{"particles.density_kg_m3", ">=", c.liquid.density - maxDrho, "kg/m^3"},
+	if c.Phase != "solid" {
+		if c.ParticleDensity < c.Liquid.Density {
+			return Target{"particles.density_kg_m3", ">=", c.Liquid.Density - maxDrho, "kg/m^3"},
 				crit + "; a weighting agent in the droplets", true
 		}
-		return Target{"particles.density_kg_m3", "<=", c.liquid.density + maxDrho, "kg/m^3"}, crit, true
+		return Target{"particles.density_kg_m3", "<=", c.Liquid.Density + maxDrho, "kg/m^3"}, crit, true
 	}
-	t := Target{"medium.density_kg_m3", ">=", c.particleDensity - maxDrho, "kg/m^3"}
-	if c.particleDensity < c.liquid.density {
-		t = Target{"medium.density_kg_m3", "<=", c.particleDensity + maxDrho, "kg/m^3"}
+	t := Target{"medium.density_kg_m3", ">=", c.ParticleDensity - maxDrho, "kg/m^3"}
+	if c.ParticleDensity < c.Liquid.Density {
+		t = Target{"medium.density_kg_m3", "<=", c.ParticleDensity + maxDrho, "kg/m^3"}
 	}
 	if t.Value > densestLiquid || t.Value < lightestLiquid {
 		return Target{}, fmt.Sprintf("%s: needs a liquid of %s, outside the %g-%g kg/m^3 that liquids reach",
@@ -80,20 +81,20 @@ func solveDensityMatch(ev *evaluation) (Target, string, bool) {
 }
 
 func solveViscosity(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	drho := math.Abs(c.particleDensity - c.liquid.density)
-	eta := 2 * c.radius * c.radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(ev))
+	c := ev.cond
+	drho := math.Abs(c.ParticleDensity - c.Liquid.Density)
+	eta := 2 * c.Radius * c.Radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(ev))
 	return Target{"medium.viscosity_mPa_s", ">=", eta * 1e3, "mPa s"},
 		clearLayerCriterion(ev) + "; the low-shear viscosity is what counts", true
 }
 
 func solveYieldStress(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	largest := c.radius
-	if c.classes != nil {
-		largest = c.classes[len(c.classes)-1].Diameter / 2
+	c := ev.cond
+	largest := c.Radius
+	if c.Classes != nil {
+		largest = c.Classes[len(c.Classes)-1].Diameter / 2
 	}
-	tau := physics.YieldStressToHoldSphere(largest, c.particleDensity-c.liquid.density)
+	tau := physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density)
 	return Target{"medium.yield_stress_Pa", ">=", tau, "Pa"},
 		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985)", true
 }

@@ -13,7 +13,7 @@ import (
 const cloudPointMarginK = 10.0
 
 func stericCriterion(ev *evaluation) string {
-	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(ev.c.criteria.maxStericKT) + " kT"
+	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(ev.cond.Criteria.MaxStericKT) + " kT"
 }
 
 // thickestAdsorbedLayer is about the largest thickness adsorbed polymer or
@@ -22,7 +22,7 @@ func stericCriterion(ev *evaluation) string {
 const thickestAdsorbedLayer = 50e-9
 
 func solveStericThickness(ev *evaluation) (Target, string, bool) {
-	d := physics.MinimumStericThickness(ev.vdwOnly.EnergyCurve(), ev.c.storageTempK, ev.c.criteria.maxStericKT)
+	d := physics.MinimumStericThickness(ev.vdwOnly.EnergyCurve(), ev.cond.StorageTempK, ev.cond.Criteria.MaxStericKT)
 	crit := stericCriterion(ev) + "; the layer must stay in good solvent"
 	if d > thickestAdsorbedLayer {
 		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", thickestAdsorbedLayer*1e9)
@@ -46,7 +46,7 @@ func solveFreePolymer(ev *evaluation) (Target, string, bool) {
 		return Target{}, "no depletion well computed", false
 	}
 	// The Asakura-Oosawa energy is proportional to the polymer number density.
-	conc := ev.c.freePolymer.concentration * depletionOnsetKT / math.Abs(well.Value)
+	conc := ev.cond.FreePolymer.Concentration * depletionOnsetKT / math.Abs(well.Value)
 	return Target{"medium.free_polymer.concentration_g_L", "<=", conc, "g/L"},
 		fmt.Sprintf("depletion well at contact no deeper than %g kT (Asakura-Oosawa)", depletionOnsetKT), true
 }
@@ -57,40 +57,40 @@ func solvePolymerDose(ev *evaluation) (Target, string, bool) {
 }
 
 func solveRipeningInhibitor(ev *evaluation) (Target, string, bool) {
-	c := ev.c
+	c := ev.cond
 	rate, ok := ev.scales["ostwald_ripening_rate"]
 	if !ok || rate.Value <= 0 {
 		return Target{}, "no ripening rate computed", false
 	}
 	// LSW rate is proportional to the solubility of the dispersed phase.
-	allowed := 7 * c.radius * c.radius * c.radius / c.shelfLife * 1e27
-	return Target{"particles.solubility_mol_m3", "<=", c.droplet.solubility * allowed / rate.Value, "mol/m^3"},
+	allowed := 7 * c.Radius * c.Radius * c.Radius / c.ShelfLife * 1e27
+	return Target{"particles.solubility_mol_m3", "<=", c.Droplet.Solubility * allowed / rate.Value, "mol/m^3"},
 		"time to double the diameter by LSW ripening >= shelf life; an inhibitor lowers the effective solubility (Kabalnov 2001)", true
 }
 
 func viscosityCriterion(ev *evaluation) string {
-	return fmt.Sprintf("relative viscosity <= %g (Krieger-Dougherty on the effective volume fraction)", ev.c.criteria.maxRelViscosity)
+	return fmt.Sprintf("relative viscosity <= %g (Krieger-Dougherty on the effective volume fraction)", ev.cond.Criteria.MaxRelViscosity)
 }
 
 func solveVolumeFraction(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	phiMax := ev.f.Number("max_packing_fraction")
-	phiEff := ev.f.Number("effective_volume_fraction")
+	c := ev.cond
+	phiMax := ev.facts.Number("max_packing_fraction")
+	phiEff := ev.facts.Number("effective_volume_fraction")
 	if math.IsNaN(phiMax) || phiEff <= 0 {
 		return Target{}, viscosityCriterion(ev), false
 	}
-	effMax := physics.MaxVolumeFractionForViscosity(c.criteria.maxRelViscosity, phiMax, physics.DefaultIntrinsicViscosity)
-	return Target{"particles.volume_fraction", "<=", effMax * c.phi / phiEff, "1"}, viscosityCriterion(ev), true
+	effMax := physics.MaxVolumeFractionForViscosity(c.Criteria.MaxRelViscosity, phiMax, physics.DefaultIntrinsicViscosity)
+	return Target{"particles.volume_fraction", "<=", effMax * c.VolumeFraction / phiEff, "1"}, viscosityCriterion(ev), true
 }
 
 // solveSizeSpan finds the maximum packing fraction the viscosity criterion
 // needs, then the log-normal span whose packing reaches it.
 func solveSizeSpan(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	phiEff := ev.f.Number("effective_volume_fraction")
+	c := ev.cond
+	phiEff := ev.facts.Number("effective_volume_fraction")
 	crit := viscosityCriterion(ev) + ", by a wider log-normal distribution"
 	kd := func(phim float64) float64 {
-		return physics.KriegerDougherty(phiEff, phim, physics.DefaultIntrinsicViscosity) - c.criteria.maxRelViscosity
+		return physics.KriegerDougherty(phiEff, phim, physics.DefaultIntrinsicViscosity) - c.Criteria.MaxRelViscosity
 	}
 	top := physics.MaxPackingCap * 0.999
 	if math.IsNaN(phiEff) || phiEff >= top || kd(top) > 0 {
@@ -104,7 +104,7 @@ func solveSizeSpan(ev *evaluation) (Target, string, bool) {
 		need = x
 	}
 	packing := func(span float64) float64 {
-		classes, err := physics.LogNormalFromSpan(2*c.radius, span, physics.DefaultLogNormalClasses)
+		classes, err := physics.LogNormalFromSpan(2*c.Radius, span, physics.DefaultLogNormalClasses)
 		if err != nil {
 			return math.NaN()
 		}
@@ -121,11 +121,11 @@ func solveSizeSpan(ev *evaluation) (Target, string, bool) {
 }
 
 func solveStorageTemperature(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	if math.IsNaN(c.steric.cloudK) {
+	c := ev.cond
+	if math.IsNaN(c.Steric.CloudK) {
 		return Target{}, "no cloud point stated", false
 	}
-	return Target{"storage.temperature_c", "<=", c.steric.cloudK - physics.CelsiusZero - cloudPointMarginK, "degC"},
+	return Target{"storage.temperature_c", "<=", c.Steric.CloudK - physics.CelsiusZero - cloudPointMarginK, "degC"},
 		fmt.Sprintf("storage at least %g K below the stabiliser's cloud point", cloudPointMarginK), true
 }
 
@@ -133,14 +133,14 @@ func solveStorageTemperature(ev *evaluation) (Target, string, bool) {
 // Brownian ones and, when there is a barrier, the work of shear across one
 // Debye length below the barrier height.
 func solveProcessShear(ev *evaluation) (Target, string, bool) {
-	c := ev.c
-	kT := physics.Boltzmann * c.storageTempK
-	d := 2 * c.radius
-	g := 2 * kT / (c.liquid.viscosity * d * d * d)
+	c := ev.cond
+	kT := physics.Boltzmann * c.StorageTempK
+	d := 2 * c.Radius
+	g := 2 * kT / (c.Liquid.Viscosity * d * d * d)
 	crit := "orthokinetic over perikinetic collision rate <= 1"
 	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 && ev.pair.Kappa > 0 {
-		width := 1 / math.Max(ev.pair.Kappa, 1/c.radius)
-		byBarrier := b.Value * kT / (6 * math.Pi * c.liquid.viscosity * c.radius * c.radius * width)
+		width := 1 / math.Max(ev.pair.Kappa, 1/c.Radius)
+		byBarrier := b.Value * kT / (6 * math.Pi * c.Liquid.Viscosity * c.Radius * c.Radius * width)
 		if byBarrier > g {
 			g, crit = byBarrier, "work of shear across one Debye length below the energy barrier"
 		}

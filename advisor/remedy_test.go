@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/physics"
 )
 
@@ -25,36 +26,36 @@ func evaluated(t *testing.T, name string) (*Engine, *evaluation) {
 // solver's tolerance): the targets are inverses, not rules of thumb.
 func TestRemedyTargetsInvertThePhysics(t *testing.T) {
 	t.Parallel()
-	kT := func(ev *evaluation) float64 { return physics.Boltzmann * ev.c.storageTempK }
+	kT := func(ev *evaluation) float64 { return physics.Boltzmann * ev.cond.StorageTempK }
 
 	// Settling: a 2.5 um rutile slurry. The size target is set by Perrin's
 	// barometric law (gravitational length = container height), the
 	// viscosity target by hindered Stokes settling.
 	_, ev := evaluated(t, "gravity_settling.json")
-	c := ev.c
-	drho := c.particleDensity - c.liquid.density
+	c := ev.cond
+	drho := c.ParticleDensity - c.Liquid.Density
 	if tg, _, ok := solveParticleSize(ev); !ok {
 		t.Error("no size target")
-	} else if lg := physics.GravitationalLength(tg.Value*0.5e-9, drho, c.storageTempK); math.Abs(lg/c.height-1) > 5e-3 {
-		t.Errorf("size target %v nm: gravitational length %v m, want the container height %v m", tg.Value, lg, c.height)
+	} else if lg := physics.GravitationalLength(tg.Value*0.5e-9, drho, c.StorageTempK); math.Abs(lg/c.Height-1) > 5e-3 {
+		t.Errorf("size target %v nm: gravitational length %v m, want the container height %v m", tg.Value, lg, c.Height)
 	}
 	if tg, _, ok := solveViscosity(ev); !ok {
 		t.Error("no viscosity target")
 	} else {
-		v := physics.StokesVelocity(c.radius, drho, tg.Value*1e-3) * physics.RichardsonZakiFactor(c.phi, physics.RichardsonZakiExponentLowRe)
-		if got := physics.ClearLayer(v, c.shelfLife, c.height); math.Abs(got/c.maxClear-1) > 5e-3 {
-			t.Errorf("viscosity target %v mPa s: clear layer %v m, want %v m", tg.Value, got, c.maxClear)
+		v := physics.StokesVelocity(c.Radius, drho, tg.Value*1e-3) * physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
+		if got := physics.ClearLayer(v, c.ShelfLife, c.Height); math.Abs(got/c.MaxClear-1) > 5e-3 {
+			t.Errorf("viscosity target %v mPa s: clear layer %v m, want %v m", tg.Value, got, c.MaxClear)
 		}
 	}
 	if tg, _, ok := solveYieldStress(ev); !ok {
 		t.Error("no yield-stress target")
-	} else if y := physics.YieldNumber(tg.Value, c.radius, drho); math.Abs(y/physics.BerisCriticalYieldNumber-1) > 5e-3 {
+	} else if y := physics.YieldNumber(tg.Value, c.Radius, drho); math.Abs(y/physics.BerisCriticalYieldNumber-1) > 5e-3 {
 		t.Errorf("yield stress target %v Pa: yield number %v, want 0.143", tg.Value, y)
 	}
 	if tg, _, ok := solveStericThickness(ev); !ok {
 		t.Error("no steric target")
-	} else if v := ev.vdwOnly.Energy(2*tg.Value*1e-9) / kT(ev); math.Abs(math.Abs(v)/c.criteria.maxStericKT-1) > 2e-2 {
-		t.Errorf("layer target %v nm: vdW at contact %v kT, want -%v kT", tg.Value, v, c.criteria.maxStericKT)
+	} else if v := ev.vdwOnly.Energy(2*tg.Value*1e-9) / kT(ev); math.Abs(math.Abs(v)/c.Criteria.MaxStericKT-1) > 2e-2 {
+		t.Errorf("layer target %v nm: vdW at contact %v kT, want -%v kT", tg.Value, v, c.Criteria.MaxStericKT)
 	}
 
 	// Salt: the ionic-strength target leaves the pair exactly at the edge
@@ -76,11 +77,11 @@ func TestRemedyTargetsInvertThePhysics(t *testing.T) {
 	if tg, _, ok := solveVolumeFraction(ev); !ok {
 		t.Error("no volume-fraction target")
 	} else {
-		c := ev.c
-		eff := tg.Value * ev.f.Number("effective_volume_fraction") / c.phi
-		got := physics.KriegerDougherty(eff, ev.f.Number("max_packing_fraction"), physics.DefaultIntrinsicViscosity)
-		if math.Abs(got/c.criteria.maxRelViscosity-1) > 1e-2 {
-			t.Errorf("volume fraction target %v: relative viscosity %v, want %v", tg.Value, got, c.criteria.maxRelViscosity)
+		c := ev.cond
+		eff := tg.Value * ev.facts.Number("effective_volume_fraction") / c.VolumeFraction
+		got := physics.KriegerDougherty(eff, ev.facts.Number("max_packing_fraction"), physics.DefaultIntrinsicViscosity)
+		if math.Abs(got/c.Criteria.MaxRelViscosity-1) > 1e-2 {
+			t.Errorf("volume fraction target %v: relative viscosity %v, want %v", tg.Value, got, c.Criteria.MaxRelViscosity)
 		}
 	}
 }
@@ -111,24 +112,24 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 	for _, name := range []string{"electrostatic_screening.json", "electrostatic_screening_2.json",
 		"low_surface_charge.json", "multivalent_ions.json", "multivalent_ions_2.json", "coalescence.json"} {
 		_, ev := evaluated(t, name)
-		c := ev.c
+		c := ev.cond
 		if checkIonicStrengthRoot(t, name, ev) {
 			checked[0]++
 		}
 		if checkPotentialRoot(t, name, ev) {
 			checked[1]++
 		}
-		if c.multivalentSalt != "" {
+		if c.MultivalentSalt != "" {
 			tg, _, ok := solveMultivalent(ev)
-			other := c.ionicStrength - c.multivalentIonicShare*c.multivalentConc
+			other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 			exact := func(conc float64) float64 {
-				return stabilityMargin(ev, ev.withIonicStrength(math.Max(other+c.multivalentIonicShare*conc, ionicStrengthFloor(ev))))
+				return stabilityMargin(ev, ev.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(ev))))
 			}
 			checked[2]++
-			root, found := physics.FindRoot(exact, 0, c.multivalentConc, 1e-12)
+			root, found := physics.FindRoot(exact, 0, c.MultivalentConc, 1e-12)
 			if !ok || !found {
 				t.Errorf("%s: multivalent target %v (%v), exact root found %v", name, tg.Value, ok, found)
-			} else if d := tg.Value - root; d > 1e-12 || d < -2*multivalentTol*c.multivalentConc-1e-3*root {
+			} else if d := tg.Value - root; d > 1e-12 || d < -2*multivalentTol*c.MultivalentConc-1e-3*root {
 				t.Errorf("%s: multivalent target %g mM, exact root %g mM", name, tg.Value, root)
 			}
 		}
@@ -145,11 +146,11 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 func checkIonicStrengthRoot(t *testing.T, name string, ev *evaluation) bool {
 	t.Helper()
 	I, ok := largestAcceptableIonicStrength(ev)
-	if !ok || I >= ev.c.ionicStrength {
+	if !ok || I >= ev.cond.IonicStrength {
 		return false
 	}
 	exact := func(logI float64) float64 { return stabilityMargin(ev, ev.withIonicStrength(math.Pow(10, logI))) }
-	root, found := physics.FindRoot(exact, math.Log10(ionicStrengthFloor(ev)), math.Log10(ev.c.ionicStrength), 1e-9)
+	root, found := physics.FindRoot(exact, math.Log10(ionicStrengthFloor(ev)), math.Log10(ev.cond.IonicStrength), 1e-9)
 	if d := math.Log10(I) - root; !found || d > 0 || d < -2*ionicStrengthTol {
 		t.Errorf("%s: ionic strength %g mM, exact root %g mM", name, I, math.Pow(10, root))
 	}
@@ -187,7 +188,7 @@ func TestShieldingMarginIsContinuous(t *testing.T) {
 	if !ok {
 		t.Fatal("no potential target")
 	}
-	kT := physics.Boltzmann * ev.c.storageTempK
+	kT := physics.Boltzmann * ev.cond.StorageTempK
 	for _, f := range []float64{0.999, 1.001} {
 		p := ev.pair
 		p.Potential = math.Copysign(f*psi, ev.pair.Potential)
@@ -210,7 +211,7 @@ func TestZeroBarrierCriterionKeepsHalfLife(t *testing.T) {
 	s := benchSample(t, "electrostatic_screening.json")
 	zeta, zero := 20.0, 0.0
 	s.Particles.ZetaMV = &zeta
-	s.Criteria = &Criteria{MinBarrierKT: &zero}
+	s.Criteria = &input.Criteria{MinBarrierKT: &zero}
 	ev, err := e.evaluate(s)
 	if err != nil {
 		t.Fatal(err)
@@ -239,7 +240,7 @@ func TestRemedyWithoutPeakEstimate(t *testing.T) {
 		"medium":{"liquid":"water","temperature_c":25,"ph":3.8,"electrolytes":[{"formula":"NaNO3","concentration_mM":60}]},
 		"storage":{"container_height_mm":250,"shelf_life_days":365},
 		"observation":{"age_days":10,"clear_layer_mm":100,"sediment_redisperses":true}}`
-	var s Sample
+	var s input.Sample
 	if err := json.Unmarshal([]byte(sample), &s); err != nil {
 		t.Fatal(err)
 	}
@@ -328,7 +329,7 @@ func TestAnchoredSearchesSweep(t *testing.T) {
 						s.Particles.DiameterNm, s.Particles.ZetaMV, s.Particles.VolumeFraction = &d, &zeta, &phi
 						s.Medium.Electrolytes[0].ConcentrationMM = &salt
 						if layer > 0 {
-							s.Stabilizer = &Stabilizer{LayerThicknessNm: &layer}
+							s.Stabilizer = &input.Stabilizer{LayerThicknessNm: &layer}
 						}
 						ev, err := e.evaluate(s)
 						if err != nil {

@@ -1,5 +1,7 @@
 package advisor
 
+import "colloidtriage/advisor/input"
+
 // Report is the answer to one Sample. It carries no NaN or infinity: values
 // that can leave float64's range are reported as log10 scales, and a scale
 // that is unbounded for this sample (say, a gravitational length at exact
@@ -13,7 +15,7 @@ type Report struct {
 	Cautions    []string          `json:"cautions"`
 	Assumptions []string          `json:"assumptions"`
 	Models      map[string]string `json:"models"`
-	Inputs      Sample            `json:"inputs"`
+	Inputs      input.Sample      `json:"inputs"`
 }
 
 // Versions identifies the engine and the rule set that produced a report.

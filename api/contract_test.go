@@ -31,6 +31,7 @@ import (
 	"go.yaml.in/yaml/v3"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/rule"
 	"colloidtriage/openapi"
 )
@@ -709,14 +710,14 @@ func objectParts(s *openapi3.Schema) []*openapi3.Schema {
 	return out
 }
 
-// TestContractSampleFields: every field of advisor.Sample is in the
+// TestContractSampleFields: every field of input.Sample is in the
 // document with its type, its unit and exactly the range, enum, length,
 // item limits and requiredness of its validate tag, no other field is, and
 // every request object refuses unknown members as the decoder does.
 func TestContractSampleFields(t *testing.T) {
 	t.Parallel()
 	c := contractDoc(t)
-	checkStruct(t, reflect.TypeOf(advisor.Sample{}), c.schema(t, "Sample"), "")
+	checkStruct(t, reflect.TypeOf(input.Sample{}), c.schema(t, "Sample"), "")
 }
 
 func checkStruct(t *testing.T, typ reflect.Type, s *openapi3.Schema, at string) {

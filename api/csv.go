@@ -14,9 +14,9 @@ import (
 	"strings"
 	"sync"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 const typeInvalidCSV = "/problems/invalid-csv"
@@ -95,11 +95,11 @@ type pathStep struct {
 }
 
 // csvColumns maps every column name to its leaf, read once from the json,
-// unit and validate tags of advisor.Sample, so the CSV contract follows the
+// unit and validate tags of input.Sample, so the CSV contract follows the
 // JSON one without a second list to keep in step.
 var csvColumns = sync.OnceValue(func() map[string]csvColumn {
 	out := map[string]csvColumn{}
-	addColumns(out, reflect.TypeOf(advisor.Sample{}), "", nil, "")
+	addColumns(out, reflect.TypeOf(input.Sample{}), "", nil, "")
 	return out
 })
 
@@ -172,7 +172,7 @@ func maxItems(validate string) int {
 //
 //	sample_id;symptom;particles.material;particles.diameter_nm;particles.zeta_mV;medium.electrolytes.0.formula;medium.electrolytes.0.concentration_mM
 //
-// Every leaf of advisor.Sample is a column (testdata/batch/README.md lists
+// Every leaf of input.Sample is a column (testdata/batch/README.md lists
 // them); an index may go up to the array's item limit less one. A header
 // with an unknown, repeated or empty column is refused whole (400) before
 // any row is read, and so is a body that does not parse as CSV.
@@ -232,7 +232,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 		if len(rec) != len(cols) {
 			e.err = newProblem(http.StatusBadRequest, typeInvalidCSV, "A row has the wrong number of fields",
 				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
-				advisor.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
+				input.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
 		} else {
 			e.raw, e.err = csvSample(cols, rec, d)
 		}
@@ -248,18 +248,18 @@ func csvHeader(header []string) ([]csvColumn, int, error) {
 	cols := make([]csvColumn, len(header))
 	seen := map[string]bool{}
 	idCol := -1
-	var problems []advisor.FieldProblem
+	var problems []input.FieldProblem
 	for j, name := range header {
 		name = strings.TrimSpace(name)
 		ptr := "/header/" + strconv.Itoa(j)
 		col, ok := known[name]
 		switch {
 		case name == "":
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: "empty column name"})
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: "empty column name"})
 		case seen[name]:
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: fmt.Sprintf("column %q appears twice", name)})
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: fmt.Sprintf("column %q appears twice", name)})
 		case !ok:
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: unknownColumn(name, known),
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: unknownColumn(name, known),
 				Valid: "the dotted path of a sample field, e.g. particles.diameter_nm or medium.electrolytes.0.formula"})
 		}
 		seen[name] = true
@@ -308,7 +308,7 @@ func allEmpty(rec []string) bool {
 // does not parse is reported, with its pointer relative to the sample.
 func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 	root := map[string]any{}
-	var problems []advisor.FieldProblem
+	var problems []input.FieldProblem
 	for j, cell := range rec {
 		cell = strings.TrimSpace(cell)
 		if cell == "" {
@@ -316,7 +316,7 @@ func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 		}
 		v, reason := parseCell(cell, cols[j].kind, d)
 		if reason != "" {
-			problems = append(problems, advisor.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].unit})
+			problems = append(problems, input.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].unit})
 			continue
 		}
 		setPath(root, cols[j].path, v)

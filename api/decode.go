@@ -11,9 +11,9 @@ import (
 	"reflect"
 	"strings"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 // decodeJSON reads one JSON value from the request body into v, strictly:
@@ -58,7 +58,7 @@ func unmarshalStrict(body []byte, v any) error {
 	}
 	if p, bad := checkMembers(body, reflect.TypeOf(v)); bad {
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A member is not part of the contract", p.reason,
-			advisor.FieldProblem{Pointer: p.pointer, Reason: p.reason})
+			input.FieldProblem{Pointer: p.pointer, Reason: p.reason})
 	}
 	return nil
 }
@@ -79,7 +79,7 @@ func jsonProblem(err error, body []byte, target reflect.Type) error {
 		}
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "A field has the wrong type",
 			fmt.Sprintf("expected %s, got JSON %s", kind, typ.Value),
-			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
+			input.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
 	case errors.Is(err, io.EOF) || len(bytes.TrimSpace(body)) == 0:
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is empty", "send a JSON object")
 	case errors.Is(err, io.ErrUnexpectedEOF):
@@ -91,7 +91,7 @@ func jsonProblem(err error, body []byte, target reflect.Type) error {
 		}
 		return newProblem(http.StatusBadRequest, typeInvalidJSON, "Unknown field",
 			"the field "+name+" is not part of the contract (see /openapi.json); check its spelling and unit suffix",
-			advisor.FieldProblem{Pointer: name, Reason: "unknown field"})
+			input.FieldProblem{Pointer: name, Reason: "unknown field"})
 	}
 	return newProblem(http.StatusBadRequest, typeInvalidJSON, "The request body is not valid JSON", "")
 }

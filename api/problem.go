@@ -4,21 +4,21 @@ import (
 	"errors"
 	"net/http"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 // Problem is an RFC 9457 problem detail. Errors lists the offending fields
 // as JSON pointers with the expected unit and the valid range.
 type Problem struct {
-	Type      string                 `json:"type"`
-	Title     string                 `json:"title"`
-	Status    int                    `json:"status"`
-	Detail    string                 `json:"detail,omitempty"`
-	Instance  string                 `json:"instance,omitempty"`
-	RequestID string                 `json:"request_id,omitempty"`
-	Errors    []advisor.FieldProblem `json:"errors,omitempty"`
+	Type      string               `json:"type"`
+	Title     string               `json:"title"`
+	Status    int                  `json:"status"`
+	Detail    string               `json:"detail,omitempty"`
+	Instance  string               `json:"instance,omitempty"`
+	RequestID string               `json:"request_id,omitempty"`
+	Errors    []input.FieldProblem `json:"errors,omitempty"`
 }
 
 // Problem types; relative URIs resolve against the service's own address.
@@ -36,7 +36,7 @@ type problemError struct{ p Problem }
 
 func (e *problemError) Error() string { return e.p.Title + ": " + e.p.Detail }
 
-func newProblem(status int, typ, title, detail string, fields ...advisor.FieldProblem) *problemError {
+func newProblem(status int, typ, title, detail string, fields ...input.FieldProblem) *problemError {
 	return &problemError{Problem{Type: typ, Title: title, Status: status, Detail: detail, Errors: fields}}
 }
 
@@ -44,7 +44,7 @@ func newProblem(status int, typ, title, detail string, fields ...advisor.FieldPr
 // never serialised.
 func problemFor(err error) Problem {
 	var pe *problemError
-	var ie *advisor.InputError
+	var ie *input.Error
 	var he *echo.HTTPError
 	switch {
 	case errors.As(err, &pe):

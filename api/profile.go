@@ -9,6 +9,7 @@ import (
 	"github.com/labstack/echo/v4"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 )
 
 // svgContentType is the media type of the interaction-profile chart.
@@ -35,7 +36,7 @@ func (h *handlers) interactionProfile(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	var s advisor.Sample
+	var s input.Sample
 	if err := decodeJSON(c, &s); err != nil {
 		return err
 	}
@@ -72,7 +73,7 @@ func profilePoints(c echo.Context) (int, error) {
 		return 0, newProblem(http.StatusBadRequest, typeInvalidQuery, "A query parameter is invalid",
 			"the query parameter points must be an integer from "+strconv.Itoa(advisor.ProfilePointsMin)+
 				" to "+strconv.Itoa(advisor.ProfilePointsMax),
-			advisor.FieldProblem{Pointer: "?points", Reason: "not an integer in range", Unit: "1", Valid: valid})
+			input.FieldProblem{Pointer: "?points", Reason: "not an integer in range", Unit: "1", Valid: valid})
 	}
 	return n, nil
 }

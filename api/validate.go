@@ -7,9 +7,9 @@ import (
 	"regexp"
 	"strings"
 
-	"github.com/go-playground/validator/v10"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/go-playground/validator/v10"
 )
 
 // fieldRule is what the contract says about one request field: its unit and
@@ -35,7 +35,7 @@ func newSampleValidator() *sampleValidator {
 		return name
 	})
 	sv := &sampleValidator{v: v, rules: map[string]fieldRule{}}
-	sv.collect(reflect.TypeOf(advisor.Sample{}), "")
+	sv.collect(reflect.TypeOf(input.Sample{}), "")
 	return sv
 }
 
@@ -96,7 +96,7 @@ var index = regexp.MustCompile(`\[(\d+)\]`)
 
 // validate checks a decoded sample against its tags and returns a problem
 // naming every offending field.
-func (sv *sampleValidator) validate(s *advisor.Sample) error {
+func (sv *sampleValidator) validate(s *input.Sample) error {
 	err := sv.v.Struct(s)
 	if err == nil {
 		return nil
@@ -105,13 +105,13 @@ func (sv *sampleValidator) validate(s *advisor.Sample) error {
 	if !errors.As(err, &ves) {
 		return err
 	}
-	fields := make([]advisor.FieldProblem, 0, len(ves))
+	fields := make([]input.FieldProblem, 0, len(ves))
 	for _, fe := range ves {
 		ns := fe.Namespace()
 		_, ns, _ = strings.Cut(ns, ".") // drop the root type name
 		ptr := "/" + strings.ReplaceAll(index.ReplaceAllString(ns, ".$1"), ".", "/")
 		rule := sv.rules[index.ReplaceAllString("/"+strings.ReplaceAll(ns, ".", "/"), "/*")]
-		fields = append(fields, advisor.FieldProblem{Pointer: ptr, Reason: reason(fe), Unit: rule.unit, Valid: rule.valid})
+		fields = append(fields, input.FieldProblem{Pointer: ptr, Reason: reason(fe), Unit: rule.unit, Valid: rule.valid})
 	}
 	return newProblem(422, typeInvalidSample, "The sample has invalid fields",
 		fmt.Sprintf("%d field(s) out of range or missing", len(fields)), fields...)

@@ -10,6 +10,7 @@ import (
 	"testing/fstest"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/rule"
 	"colloidtriage/rules"
 )
@@ -73,11 +74,11 @@ func TestConditionOutsideSubset(t *testing.T) {
 		t.Fatal(err)
 	}
 	for _, age := range []float64{4, 3} {
-		var s advisor.Sample
+		var s input.Sample
 		if err := json.Unmarshal(data, &s); err != nil {
 			t.Fatal(err)
 		}
-		s.Observation = &advisor.Observation{AgeDays: &age}
+		s.Observation = &input.Observation{AgeDays: &age}
 		rep, err := eng.Triage(&s)
 		if err != nil {
 			t.Fatal(err)

@@ -1,10 +1,10 @@
-package advisor
+package input
 
 import "strings"
 
-// InputError is a sample that is well-formed but physically invalid or
+// Error is a sample that is well-formed but physically invalid or
 // inconsistent. Each problem names the field as a JSON pointer.
-type InputError struct {
+type Error struct {
 	Problems []FieldProblem
 }
 
@@ -17,7 +17,7 @@ type FieldProblem struct {
 	Valid   string `json:"valid,omitempty"`
 }
 
-func (e *InputError) Error() string {
+func (e *Error) Error() string {
 	parts := make([]string, len(e.Problems))
 	for i, p := range e.Problems {
 		parts[i] = p.Pointer + ": " + p.Reason
@@ -25,11 +25,11 @@ func (e *InputError) Error() string {
 	return "invalid sample: " + strings.Join(parts, "; ")
 }
 
-func (e *InputError) add(pointer, reason, unit, valid string) {
+func (e *Error) add(pointer, reason, unit, valid string) {
 	e.Problems = append(e.Problems, FieldProblem{pointer, reason, unit, valid})
 }
 
-func (e *InputError) orNil() error {
+func (e *Error) orNil() error {
 	if e == nil || len(e.Problems) == 0 {
 		return nil
 	}

@@ -1,8 +1,9 @@
-package advisor
+package input
 
 import (
 	"math"
 
+	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
@@ -11,27 +12,27 @@ import (
 // temperature. Overrides hold at the medium temperature; when storage is
 // elsewhere they are carried over by the library liquid's own temperature
 // dependence.
-func (e *Engine) resolveLiquid(m *Medium, mediumT, storageT float64, tempField string, bad *InputError, n *notes) liquidState {
+func resolveLiquid(lib *library.Library, m *Medium, mediumT, storageT float64, tempField string, bad *Error, n *Notes) LiquidState {
 	key := m.Liquid
 	if key == "" {
 		key = defaultLiquid
-		n.add("medium.liquid not given: water assumed")
+		n.Add("medium.liquid not given: water assumed")
 	}
-	lib, ok := e.lib.Liquids[key]
+	liquid, ok := lib.Liquids[key]
 	if !ok {
-		bad.add("/medium/liquid", "unknown liquid", "", "one of: "+joinKeys(e.lib.LiquidKeys()))
-		return liquidState{key: key}
+		bad.add("/medium/liquid", "unknown liquid", "", "one of: "+joinKeys(lib.LiquidKeys()))
+		return LiquidState{Key: key}
 	}
-	atStorage, err := e.liquidAt(lib, storageT, tempField, n)
+	atStorage, err := liquidAt(liquid, storageT, tempField, n)
 	if err != nil {
-		bad.Problems = append(bad.Problems, err.(*InputError).Problems...)
-		return liquidState{key: key}
+		bad.Problems = append(bad.Problems, err.(*Error).Problems...)
+		return LiquidState{Key: key}
 	}
 	atMedium := atStorage
 	if mediumT != storageT {
-		if atMedium, err = e.liquidAt(lib, mediumT, "/medium/temperature_c", n); err != nil {
-			bad.Problems = append(bad.Problems, err.(*InputError).Problems...)
-			return liquidState{key: key}
+		if atMedium, err = liquidAt(liquid, mediumT, "/medium/temperature_c", n); err != nil {
+			bad.Problems = append(bad.Problems, err.(*Error).Problems...)
+			return LiquidState{Key: key}
 		}
 	}
 	st := atStorage
@@ -43,15 +44,15 @@ func (e *Engine) resolveLiquid(m *Medium, mediumT, storageT float64, tempField s
 		if mediumT == storageT {
 			return v
 		}
-		n.add("medium.%s given at %g degC, carried to the storage temperature %g degC with the temperature dependence of %s",
+		n.Add("medium.%s given at %g degC, carried to the storage temperature %g degC with the temperature dependence of %s",
 			name, mediumT, storageT, key)
 		return v * fromLib / atMed
 	}
-	st.density = carry(m.DensityKgM3, 1, atStorage.density, atMedium.density, "density_kg_m3")
-	st.viscosity = carry(m.ViscosityMPaS, 1e-3, atStorage.viscosity, atMedium.viscosity, "viscosity_mPa_s")
-	st.epsR = carry(m.Permittivity, 1, atStorage.epsR, atMedium.epsR, "relative_permittivity")
+	st.Density = carry(m.DensityKgM3, 1, atStorage.Density, atMedium.Density, "density_kg_m3")
+	st.Viscosity = carry(m.ViscosityMPaS, 1e-3, atStorage.Viscosity, atMedium.Viscosity, "viscosity_mPa_s")
+	st.Permittivity = carry(m.Permittivity, 1, atStorage.Permittivity, atMedium.Permittivity, "relative_permittivity")
 	if m.RefractiveIndex != nil {
-		st.refrIndex = *m.RefractiveIndex
+		st.RefractiveIndex = *m.RefractiveIndex
 	}
 	return st
 }
@@ -70,7 +71,7 @@ func joinKeys(keys []string) string {
 // resolveElectrolyte sums the ions of the stated salts (or takes the stated
 // ionic strength or its estimate from conductivity), adds H+ or OH- outside
 // pH 4-10, and floors aqueous media at the autoionisation of water.
-func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
+func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 	var ions []physics.Ion
 	for i, el := range m.Electrolytes {
 		conc := *el.ConcentrationMM // mM = mol/m^3
@@ -103,11 +104,11 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 	case len(m.Electrolytes) > 0:
 	case m.IonicStrengthMM != nil:
 		ions = append(ions, monovalent(*m.IonicStrengthMM)...)
-		n.add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
+		n.Add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
 	case m.ConductivityUSCm != nil:
 		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
 		ions = append(ions, monovalent(is)...)
-		n.add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
+		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
 			number.Quantity(is, "mM"))
 	}
 	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
@@ -117,20 +118,20 @@ func resolveElectrolyte(m *Medium, c *conditions, bad *InputError, n *notes) {
 		pair := physics.IonsFromPH(*m.PH)
 		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
 		ions = append(ions, monovalent(excess)...)
-		n.text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
+		n.Text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
 			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
 	}
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
-		n.add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
+		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}
-	c.ions = ions
-	c.ionicStrength = physics.IonicStrength(ions)
-	if c.liquid.aqueous && c.ionicStrength < autoionisationMolM3 {
-		c.ionicStrength = autoionisationMolM3
-		n.add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(autoionisationMolM3, "mM"))
+	c.Ions = ions
+	c.IonicStrength = physics.IonicStrength(ions)
+	if c.Liquid.Aqueous && c.IonicStrength < AutoionisationMolM3 {
+		c.IonicStrength = AutoionisationMolM3
+		n.Add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(AutoionisationMolM3, "mM"))
 	}
-	if !c.liquid.aqueous && c.ionicStrength > 0 {
-		n.add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
+	if !c.Liquid.Aqueous && c.IonicStrength > 0 {
+		n.Add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
 	}
 }
 
@@ -140,55 +141,55 @@ func monovalent(conc float64) []physics.Ion {
 
 // noteMultivalent remembers the most concentrated salt with an ion of
 // valence above 1, for the multivalent-ion cause and its remedy.
-func noteMultivalent(c *conditions, label string, pair [2]physics.Ion, conc float64) {
+func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64) {
 	multi := pair[0].Valence > 1 || pair[1].Valence < -1
-	if multi && conc > 0 && conc >= c.multivalentConc {
-		c.multivalentSalt, c.multivalentConc = label, conc
-		c.multivalentIonicShare = physics.IonicStrength(pair[:]) / conc
+	if multi && conc > 0 && conc >= c.MultivalentConc {
+		c.MultivalentSalt, c.MultivalentConc = label, conc
+		c.MultivalentIonicShare = physics.IonicStrength(pair[:]) / conc
 	}
 }
 
 // resolveZeta chooses the surface potential for the double layer: measured
 // zeta, zeta from mobility by Henry's equation, or an estimate from pH and
 // the isoelectric point, in that order.
-func resolveZeta(p *Particles, c *conditions, n *notes) {
-	kappa := physics.DebyeKappa(c.ionicStrength, c.liquid.epsR, c.storageTempK)
+func resolveZeta(p *Particles, c *Conditions, n *Notes) {
+	kappa := physics.DebyeKappa(c.IonicStrength, c.Liquid.Permittivity, c.StorageTempK)
 	switch {
 	case p.ZetaMV != nil && p.Mobility != nil:
-		c.zeta, c.zetaSource = *p.ZetaMV*1e-3, "measured"
-		n.add("both zeta_mV and mobility given: the measured zeta_mV is used")
+		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
+		n.Add("both zeta_mV and mobility given: the measured zeta_mV is used")
 	case p.ZetaMV != nil:
-		c.zeta, c.zetaSource = *p.ZetaMV*1e-3, "measured"
+		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
 	case p.Mobility != nil:
 		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
-		model := effectiveModels(c.models).ZetaFromMobility
+		model := EffectiveModels(c.Models).ZetaFromMobility
 		var how string
 		switch model {
 		case "smoluchowski":
-			c.henry, how = 1.5, "Smoluchowski's limit (thin double layer, f = 1.5)"
+			c.Henry, how = 1.5, "Smoluchowski's limit (thin double layer, f = 1.5)"
 		case "huckel":
-			c.henry, how = 1, "Hueckel's limit (thick double layer, f = 1)"
+			c.Henry, how = 1, "Hueckel's limit (thick double layer, f = 1)"
 		case "henry_exact":
-			c.henry, how = physics.HenrySwanFurst(kappa*c.radius), "Henry's equation with the exact f(kappa a) of Swan & Furst (2012)"
+			c.Henry, how = physics.HenrySwanFurst(kappa*c.Radius), "Henry's equation with the exact f(kappa a) of Swan & Furst (2012)"
 		default:
-			c.henry, how = physics.HenryOhshima(kappa*c.radius), "Henry's equation with Ohshima's (1994) closed form of f(kappa a)"
+			c.Henry, how = physics.HenryOhshima(kappa*c.Radius), "Henry's equation with Ohshima's (1994) closed form of f(kappa a)"
 		}
-		c.zeta = physics.ZetaHenry(mu, c.liquid.viscosity, c.liquid.epsR, c.henry)
-		c.zetaSource = "mobility"
-		n.add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.zeta*1e3, "mV"), how, c.henry)
-	case !math.IsNaN(c.iep) && !math.IsNaN(c.ph):
-		c.zeta = physics.SurfacePotentialFromPH(c.ph, c.iep, c.storageTempK)
-		c.zetaSource = "estimated"
-		n.add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
-			number.Quantity(c.zeta*1e3, "mV"), c.ph, c.iep)
+		c.Zeta = physics.ZetaHenry(mu, c.Liquid.Viscosity, c.Liquid.Permittivity, c.Henry)
+		c.ZetaSource = "mobility"
+		n.Add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.Zeta*1e3, "mV"), how, c.Henry)
+	case !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH):
+		c.Zeta = physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK)
+		c.ZetaSource = "estimated"
+		n.Add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
+			number.Quantity(c.Zeta*1e3, "mV"), c.PH, c.IsoelectricPH)
 	default:
-		n.add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")
+		n.Add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")
 	}
 	surfaceSign := 0
-	if c.zeta > 0 {
+	if c.Zeta > 0 {
 		surfaceSign = 1
-	} else if c.zeta < 0 {
+	} else if c.Zeta < 0 {
 		surfaceSign = -1
 	}
-	c.counterValence = physics.CounterIonValence(c.ions, surfaceSign)
+	c.CounterValence = physics.CounterIonValence(c.Ions, surfaceSign)
 }

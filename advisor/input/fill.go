@@ -1,4 +1,4 @@
-package advisor
+package input
 
 import (
 	"fmt"
@@ -14,26 +14,26 @@ import (
 // temperature is rejected.
 const extrapolationMarginK = 10.0
 
-// liquidAt returns a library liquid's properties at tempC, or an InputError
+// liquidAt returns a library liquid's properties at tempC, or an Error
 // on field when the temperature is too far outside its sourced range.
-func (e *Engine) liquidAt(l library.Liquid, tempC float64, field string, n *notes) (liquidState, error) {
+func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidState, error) {
 	T := physics.Kelvin(tempC)
 	lo := math.Max(l.MinTempK-extrapolationMarginK, library.LiquidMinTempK)
 	hi := math.Min(l.MaxTempK+extrapolationMarginK, library.LiquidMaxTempK)
 	if !(T >= lo && T <= hi) {
-		bad := &InputError{}
+		bad := &Error{}
 		bad.add(field, fmt.Sprintf("outside the range in which the properties of %s are known", l.Name), "degC",
 			fmt.Sprintf("%g <= value <= %g", number.Round(lo-physics.CelsiusZero, 4), number.Round(hi-physics.CelsiusZero, 4)))
-		return liquidState{}, bad
+		return LiquidState{}, bad
 	}
 	p, lines := l.Properties(T)
 	for _, line := range lines {
-		n.text(line)
+		n.Text(line)
 	}
-	st := liquidState{key: l.Key, density: p.Density, viscosity: p.Viscosity, epsR: p.RelativePermittivity,
-		refrIndex: p.RefractiveIndex, aqueous: l.Aqueous, flammable: l.Flammable, flashPointC: math.NaN()}
+	st := LiquidState{Key: l.Key, Density: p.Density, Viscosity: p.Viscosity, Permittivity: p.RelativePermittivity,
+		RefractiveIndex: p.RefractiveIndex, Aqueous: l.Aqueous, Flammable: l.Flammable, FlashPointC: math.NaN()}
 	if l.FlashPointC != nil {
-		st.flashPointC = l.FlashPointC.Value
+		st.FlashPointC = l.FlashPointC.Value
 	}
 	return st, nil
 }
@@ -45,15 +45,15 @@ type materialProps struct {
 	density, refrIndex, epsR, iep, hamakerWater float64
 }
 
-func (e *Engine) resolveMaterial(p *Particles, bad *InputError) (materialProps, bool) {
+func resolveMaterial(lib *library.Library, p *Particles, bad *Error) (materialProps, bool) {
 	none := materialProps{density: math.NaN(), refrIndex: math.NaN(), epsR: math.NaN(), iep: math.NaN(),
 		hamakerWater: math.NaN()}
 	if p.Material == "" {
 		return none, false
 	}
-	m, ok := e.lib.Materials[p.Material]
+	m, ok := lib.Materials[p.Material]
 	if !ok {
-		bad.add("/particles/material", "unknown material", "", "one of: "+joinKeys(e.lib.MaterialKeys()))
+		bad.add("/particles/material", "unknown material", "", "one of: "+joinKeys(lib.MaterialKeys()))
 		return none, false
 	}
 	out := materialProps{kind: m.Kind, phase: m.Phase, density: m.Density.Value,

@@ -1,4 +1,4 @@
-package advisor
+package input
 
 // Sample is one complaint as a user states it: the batch's specification, its
 // storage and what was observed. Field names carry their units; optional
