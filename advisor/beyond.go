@@ -7,11 +7,6 @@ import (
 	"colloidtriage/physics"
 )
 
-// depletionOnsetKT is the depth of a depletion well at which flocculation
-// is usually seen, a few kT (common practice; cf. Vrij 1976, Pure Appl.
-// Chem. 48:471).
-const depletionOnsetKT = 2.0
-
 // addLayers puts an effective steric layer and free-polymer depletion into
 // the pair before its energy curve is searched.
 func (ev *evaluation) addLayers() {
@@ -43,7 +38,7 @@ func (ev *evaluation) computeBeyondDLVO() {
 		ev.addLayers()
 	}
 	if c.Steric.Present {
-		v := ev.vdwOnly.Energy(2 * c.Steric.Thickness)
+		v := ev.vanDerWaalsOnly.Energy(2 * c.Steric.Thickness)
 		ev.set("steric_contact_energy", v/kT, "van der Waals energy at h = 2 x layer thickness")
 		if !ev.stericEffective() {
 			ev.notes.Add("steric layer counted as collapsed: solvent not good or storage at or above the cloud point")

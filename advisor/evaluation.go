@@ -6,6 +6,7 @@ import (
 
 	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
 	"colloidtriage/advisor/rule"
 	"colloidtriage/physics"
 )
@@ -19,19 +20,30 @@ type evaluation struct {
 	notes  *input.Notes
 	models map[string]string
 
-	pair    physics.Pair // the interaction of two median particles, when evaluable
-	hasPair bool
-	vdwOnly physics.Pair // the same pair without double layer, for steric checks
+	pair            physics.Pair // the interaction of two median particles, when evaluable
+	hasPair         bool
+	vanDerWaalsOnly physics.Pair // the same pair without double layer, for steric checks
 
 	hasBarrier  bool    // the pair as specified has an energy barrier
-	lastBarrier float64 // separation of the last barrier found while solving remedies, a warm start
+	lastBarrier float64 // separation of the last barrier found, a warm start
 
-	stabilityText string // stabilityCriterion, written once per triage
+	remedies *remedy.Case // built on the first remedy, see remedyCase
+}
 
-	acceptablePotential struct { // solved once per triage, shared by two remedies
-		done, ok bool
-		psi      float64
+// remedyCase is the evaluation as the remedy solvers see it, built on the
+// first call and shared by every remedy of the triage.
+func (ev *evaluation) remedyCase() *remedy.Case {
+	if ev.remedies == nil {
+		ev.remedies = &remedy.Case{Cond: ev.cond, Facts: ev.facts, Reported: ev.reported,
+			Pair: ev.pair, HasPair: ev.hasPair, VanDerWaalsOnly: ev.vanDerWaalsOnly, HasBarrier: ev.hasBarrier, LastBarrier: ev.lastBarrier}
 	}
+	return ev.remedies
+}
+
+// reported returns a scale as the report gives it.
+func (ev *evaluation) reported(name string) (float64, bool) {
+	s, ok := ev.scales[name]
+	return s.Value, ok
 }
 
 // scaleIndex holds the declared scales by name.

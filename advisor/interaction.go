@@ -33,8 +33,8 @@ func (ev *evaluation) computeInteraction() {
 	ev.pair = physics.Pair{Radius: c.Radius, Hamaker: c.Hamaker, Kappa: kappa, EpsR: c.Liquid.Permittivity, TempK: T,
 		Valence: max(c.CounterValence, 1)}
 	ev.chooseModels()
-	ev.vdwOnly = ev.pair
-	ev.vdwOnly.Potential, ev.vdwOnly.Kappa = 0, 0
+	ev.vanDerWaalsOnly = ev.pair
+	ev.vanDerWaalsOnly.Potential, ev.vanDerWaalsOnly.Kappa = 0, 0
 	if math.IsNaN(c.Zeta) {
 		return
 	}

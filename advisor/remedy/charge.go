@@ -1,4 +1,4 @@
-package advisor
+package remedy
 
 import (
 	"fmt"
@@ -16,20 +16,20 @@ import (
 // the ionic strength falls or the surface potential rises, so a bracketed
 // root of the smaller margin is the target.
 
-func stabilityCriterion(ev *evaluation) string {
-	if ev.stabilityText == "" {
-		ev.stabilityText = "energy barrier >= " + number.Shortest(ev.cond.Criteria.MinBarrierKT) + " kT and aggregation half-life >= " +
-			number.Shortest(ev.cond.Criteria.HalfLifeRatio) + " x shelf life"
+func stabilityCriterion(cs *Case) string {
+	if cs.stabilityText == "" {
+		cs.stabilityText = "energy barrier >= " + number.Shortest(cs.Cond.Criteria.MinBarrierKT) + " kT and aggregation half-life >= " +
+			number.Shortest(cs.Cond.Criteria.HalfLifeRatio) + " x shelf life"
 	}
-	return ev.stabilityText
+	return cs.stabilityText
 }
 
 // stabilityMargin is the smaller of the barrier margin (kT) and the
 // half-life margin (decades) of a pair, or for a pair with steric layers
 // the larger of that and the energy at layer contact (kT; see
 // stabilityMarginSlope); >= 0 means acceptable.
-func stabilityMargin(ev *evaluation, p physics.Pair) float64 {
-	m, _ := stabilityMarginSlope(ev, p, exactLog10W)
+func stabilityMargin(cs *Case, p physics.Pair) float64 {
+	m, _ := stabilityMarginSlope(cs, p, exactLog10W)
 	return m
 }
 
@@ -47,7 +47,7 @@ func exactLog10W(p physics.Pair, b physics.Extremum) float64 {
 // the estimate is within 2e-4 decades, so the remedies search on it and
 // check their answer with one quadrature.
 type peakAnchor struct {
-	ev  *evaluation
+	cs  *Case
 	gap float64
 	// last is the last exact point, whose gap is worked out only when an
 	// estimate follows it: a search that stops at its check never needs it.
@@ -66,7 +66,7 @@ func (a *peakAnchor) estimated(p physics.Pair) (margin, slope float64) {
 		}
 		last.pending = false
 	}
-	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
+	return stabilityMarginSlope(a.cs, p, func(p physics.Pair, b physics.Extremum) float64 {
 		return physics.Log10StabilityRatioPeak(p, b, true) + a.gap
 	})
 }
@@ -74,7 +74,7 @@ func (a *peakAnchor) estimated(p physics.Pair) (margin, slope float64) {
 // exact is the margin on the quadrature; it renews the gap for the
 // estimates that follow.
 func (a *peakAnchor) exact(p physics.Pair) (margin, slope float64) {
-	return stabilityMarginSlope(a.ev, p, func(p physics.Pair, b physics.Extremum) float64 {
+	return stabilityMarginSlope(a.cs, p, func(p physics.Pair, b physics.Extremum) float64 {
 		w := exactLog10W(p, b)
 		a.last.pair, a.last.barrier, a.last.log10W, a.last.pending = p, b, w, true
 		return w
@@ -89,8 +89,8 @@ func (a *peakAnchor) exact(p physics.Pair) (margin, slope float64) {
 // of solve's answer: the root is then within two steps. Otherwise solve
 // repeats on the renewed estimate; after three rounds, or when the
 // estimate finds nothing, solve runs on the exact margin.
-func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve func(margin func(x float64) float64) (float64, bool), toward float64) (float64, bool) {
-	a := peakAnchor{ev: ev}
+func anchoredRoot(cs *Case, pairAt func(x float64) physics.Pair, solve func(margin func(x float64) float64) (float64, bool), toward float64) (float64, bool) {
+	a := peakAnchor{cs: cs}
 	estimated := func(x float64) float64 {
 		m, _ := a.estimated(pairAt(x))
 		return m
@@ -109,7 +109,7 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 			return held, true
 		}
 	}
-	return solve(func(x float64) float64 { return stabilityMargin(ev, pairAt(x)) })
+	return solve(func(x float64) float64 { return stabilityMargin(cs, pairAt(x)) })
 }
 
 // stabilityMarginSlope is stabilityMargin, with log10 W from log10W, and an
@@ -132,14 +132,14 @@ func anchoredRoot(ev *evaluation, pairAt func(x float64) physics.Pair, solve fun
 // so continuous across the onset of shielding, where a search would
 // otherwise meet a step, and the contact energy's slope is exact:
 // LogKappaSlope at layer contact.
-func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
+func stabilityMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope float64) {
 	if p.StericThickness == 0 {
-		return dlvoMarginSlope(ev, p, log10W)
+		return dlvoMarginSlope(cs, p, log10W)
 	}
-	kT := physics.Boltzmann * ev.cond.StorageTempK
+	kT := physics.Boltzmann * cs.Cond.StorageTempK
 	contact := 2 * p.StericThickness
 	byContact, contactSlope := p.Energy(contact)/kT, p.LogKappaSlope(contact)/kT*math.Ln10/2
-	m, s := dlvoMarginSlope(ev, p, log10W)
+	m, s := dlvoMarginSlope(cs, p, log10W)
 	switch {
 	case m >= byContact:
 		return m, s
@@ -150,15 +150,15 @@ func stabilityMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (marg
 }
 
 // dlvoMarginSlope is stabilityMarginSlope without steric layers.
-func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, slope float64) {
-	c := ev.cond
+func dlvoMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope float64) {
+	c := cs.Cond
 	kT := physics.Boltzmann * c.StorageTempK
 	barrier, barrierSlope := 0.0, 0.0
-	b := p.BarrierNear(ev.lastBarrier)
+	b := p.BarrierNear(cs.LastBarrier)
 	if b.Found {
 		barrier = b.Energy / kT
 		barrierSlope = p.LogKappaSlope(b.Separation) / kT * math.Ln10 / 2
-		ev.lastBarrier = b.Separation
+		cs.LastBarrier = b.Separation
 	}
 	byBarrier := barrier - c.Criteria.MinBarrierKT
 	if !b.Found && byBarrier < 0 {
@@ -180,15 +180,15 @@ func dlvoMarginSlope(ev *evaluation, p physics.Pair, log10W log10WAt) (margin, s
 	return byHalfLife, barrierSlope/math.Ln10 - 0.5
 }
 
-func (ev *evaluation) withIonicStrength(I float64) physics.Pair {
-	p := ev.pair
-	p.Kappa = physics.DebyeKappa(I, ev.cond.Liquid.Permittivity, ev.cond.StorageTempK)
+func (cs *Case) withIonicStrength(I float64) physics.Pair {
+	p := cs.Pair
+	p.Kappa = physics.DebyeKappa(I, cs.Cond.Liquid.Permittivity, cs.Cond.StorageTempK)
 	return p
 }
 
 // ionicStrengthFloor is the lowest ionic strength a remedy may ask for.
-func ionicStrengthFloor(ev *evaluation) float64 {
-	if ev.cond.Liquid.Aqueous {
+func ionicStrengthFloor(cs *Case) float64 {
+	if cs.Cond.Liquid.Aqueous {
 		return input.AutoionisationMolM3
 	}
 	return 1e-6
@@ -217,17 +217,17 @@ const ionicStrengthTol = 1e-3
 // exact margin is >= 0 and within the tolerance of the root (by the local
 // slope); otherwise the gap is renewed there and the search repeated. A few
 // rounds without an answer fall back to Newton steps on the exact margin.
-func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
-	c := ev.cond
-	floor := ionicStrengthFloor(ev)
+func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
+	c := cs.Cond
+	floor := ionicStrengthFloor(cs)
 	kT := physics.Boltzmann * c.StorageTempK
 	top := c.IonicStrength
-	if !ev.hasBarrier && ev.pair.StericThickness == 0 {
+	if !cs.HasBarrier && cs.Pair.StericThickness == 0 {
 		// No barrier at the present ionic strength: the margin has no slope
 		// there, so the search starts where the barrier meets its criterion.
 		// With steric layers the margin is the contact energy there, which
 		// has a slope, and the layers may shield the pair above that point.
-		I, ok := physics.CriticalIonicStrength(ev.pair, c.Criteria.MinBarrierKT*kT, ev.lastBarrier)
+		I, ok := physics.CriticalIonicStrength(cs.Pair, c.Criteria.MinBarrierKT*kT, cs.LastBarrier)
 		switch {
 		case !ok && I == 0:
 			return 0, false
@@ -239,10 +239,10 @@ func largestAcceptableIonicStrength(ev *evaluation) (float64, bool) {
 		return 0, false
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
-	a := peakAnchor{ev: ev}
-	exact := func(logI float64) (float64, float64) { return a.exact(ev.withIonicStrength(math.Pow(10, logI))) }
+	a := peakAnchor{cs: cs}
+	exact := func(logI float64) (float64, float64) { return a.exact(cs.withIonicStrength(math.Pow(10, logI))) }
 	aimed := func(logI float64) (float64, float64) {
-		m, slope := a.estimated(ev.withIonicStrength(math.Pow(10, logI)))
+		m, slope := a.estimated(cs.withIonicStrength(math.Pow(10, logI)))
 		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
 	}
 	x := hi
@@ -332,68 +332,68 @@ func secantRefined(f func(float64) (float64, float64)) func(float64) (float64, f
 	}
 }
 
-func solveIonicStrength(ev *evaluation) (Target, string, bool) {
-	if !ev.hasPair {
+func solveIonicStrength(cs *Case) (Target, string, bool) {
+	if !cs.HasPair {
 		return Target{}, "no surface potential known", false
 	}
-	I, ok := largestAcceptableIonicStrength(ev)
+	I, ok := largestAcceptableIonicStrength(cs)
 	if !ok {
-		return Target{}, stabilityCriterion(ev) + ": not reached even at the lowest ionic strength", false
+		return Target{}, stabilityCriterion(cs) + ": not reached even at the lowest ionic strength", false
 	}
-	return Target{"medium.ionic_strength_mM", "<=", I, "mM"}, stabilityCriterion(ev), true
+	return Target{"medium.ionic_strength_mM", "<=", I, "mM"}, stabilityCriterion(cs), true
 }
 
-func solveSurfaceCharge(ev *evaluation) (Target, string, bool) {
-	psi, ok := smallestAcceptablePotential(ev)
+func solveSurfaceCharge(cs *Case) (Target, string, bool) {
+	psi, ok := smallestAcceptablePotential(cs)
 	if !ok {
-		return Target{}, stabilityCriterion(ev) + ": not reached below 200 mV at this ionic strength", false
+		return Target{}, stabilityCriterion(cs) + ": not reached below 200 mV at this ionic strength", false
 	}
-	return Target{"|particles.zeta_mV|", ">=", psi * 1e3, "mV"}, stabilityCriterion(ev), true
+	return Target{"|particles.zeta_mV|", ">=", psi * 1e3, "mV"}, stabilityCriterion(cs), true
 }
 
 // smallestAcceptablePotential solves stabilityMargin = 0 on |psi| between
 // the present potential and 200 mV, keeping the sign of the surface.
 // The answer is kept for the rest of the triage: raise_surface_charge and
 // move_ph_from_iep both need it.
-func smallestAcceptablePotential(ev *evaluation) (float64, bool) {
-	if m := &ev.acceptablePotential; !m.done && ev.hasPair {
+func smallestAcceptablePotential(cs *Case) (float64, bool) {
+	if m := &cs.acceptablePotential; !m.done && cs.HasPair {
 		sign := -1.0 // as potentialWhere: the surface keeps its sign
-		if ev.pair.Potential > 0 {
+		if cs.Pair.Potential > 0 {
 			sign = 1
 		}
 		withPotential := func(psi float64) physics.Pair {
-			p := ev.pair
+			p := cs.Pair
 			p.Potential = sign * psi
 			return p
 		}
 		solve := func(margin func(psi float64) float64) (float64, bool) {
-			return potentialWhere(ev, func(p physics.Pair) float64 { return margin(math.Abs(p.Potential)) })
+			return potentialWhere(cs, func(p physics.Pair) float64 { return margin(math.Abs(p.Potential)) })
 		}
-		m.psi, m.ok = anchoredRoot(ev, withPotential, solve, potentialTol)
+		m.psi, m.ok = anchoredRoot(cs, withPotential, solve, potentialTol)
 		m.done = true
 	}
-	return ev.acceptablePotential.psi, ev.acceptablePotential.ok
+	return cs.acceptablePotential.psi, cs.acceptablePotential.ok
 }
 
 // potentialWhere finds the smallest |psi| in [0, 200 mV] at which margin, a
 // function growing with |psi|, reaches zero; the surface keeps its sign.
-func potentialWhere(ev *evaluation, margin func(p physics.Pair) float64) (float64, bool) {
-	if !ev.hasPair {
+func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, bool) {
+	if !cs.HasPair {
 		return 0, false
 	}
 	sign := -1.0
-	if ev.pair.Potential > 0 {
+	if cs.Pair.Potential > 0 {
 		sign = 1
 	}
 	at := func(psi float64) float64 {
-		p := ev.pair
+		p := cs.Pair
 		p.Potential = sign * psi
 		return margin(p)
 	}
 	// Bracket from the present potential by steps of 1.5 before iterating,
 	// so that few margins are evaluated far from the answer.
 	const top, bottom = 0.2, 0.002
-	start := math.Min(math.Max(math.Abs(ev.pair.Potential), 2*bottom), top)
+	start := math.Min(math.Max(math.Abs(cs.Pair.Potential), 2*bottom), top)
 	lo, hi := start, start
 	mLo := at(start)
 	mHi := mLo
@@ -428,14 +428,14 @@ const potentialTol = 1e-5
 // solvePH finds the pH at which the surface-potential estimate reaches the
 // needed potential, anchored to the measured zeta at the present pH when
 // there is one (the estimate's shape, the measurement's scale).
-func solvePH(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
+func solvePH(cs *Case) (Target, string, bool) {
+	c := cs.Cond
 	if math.IsNaN(c.IsoelectricPH) {
 		return Target{}, "isoelectric point unknown", false
 	}
-	psi, ok := smallestAcceptablePotential(ev)
+	psi, ok := smallestAcceptablePotential(cs)
 	if !ok {
-		return Target{}, stabilityCriterion(ev) + ": not reachable by pH alone at this ionic strength", false
+		return Target{}, stabilityCriterion(cs) + ": not reachable by pH alone at this ionic strength", false
 	}
 	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
 	if c.ZetaSource != "estimated" && !math.IsNaN(c.PH) {
@@ -454,26 +454,26 @@ func solvePH(ev *evaluation) (Target, string, bool) {
 	}
 	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
 	if !ok {
-		return Target{}, stabilityCriterion(ev) + ": the needed potential is not reached between pH 0 and 14" + anchor, false
+		return Target{}, stabilityCriterion(cs) + ": the needed potential is not reached between pH 0 and 14" + anchor, false
 	}
-	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(ev) + anchor, true
+	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(cs) + anchor, true
 }
 
 // multivalentTol is the relative accuracy of the multivalent-salt target.
 const multivalentTol = 1e-4
 
-func solveMultivalent(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
-	if c.MultivalentSalt == "" || !ev.hasPair {
+func solveMultivalent(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	if c.MultivalentSalt == "" || !cs.HasPair {
 		return Target{}, "no multivalent salt stated", false
 	}
 	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	withConc := func(conc float64) physics.Pair {
-		return ev.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(ev)))
+		return cs.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
 	}
-	crit := stabilityCriterion(ev) + "; counter-ion valence kept (conservative)"
+	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
 	conc := c.MultivalentConc
-	a := peakAnchor{ev: ev}
+	a := peakAnchor{cs: cs}
 	if m, _ := a.estimated(withConc(conc)); m >= 0 {
 		if m, _ = a.exact(withConc(conc)); m >= 0 {
 			return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
@@ -491,7 +491,7 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 		}
 		return physics.FindRootFrom(margin, 0, conc, without, present, multivalentTol*c.MultivalentConc)
 	}
-	conc, ok := anchoredRoot(ev, withConc, solve, -multivalentTol*c.MultivalentConc)
+	conc, ok := anchoredRoot(cs, withConc, solve, -multivalentTol*c.MultivalentConc)
 	conc = math.Max(conc, 0) // a root within the tolerance of none at all
 	switch {
 	case !reached:
@@ -507,13 +507,13 @@ func solveMultivalent(ev *evaluation) (Target, string, bool) {
 // flocculation, where zeta is brought near zero by flocculating ions).
 const looseFlocBarrierKT = 5.0
 
-func solveControlledFlocculation(ev *evaluation) (Target, string, bool) {
-	kT := physics.Boltzmann * ev.cond.StorageTempK
+func solveControlledFlocculation(cs *Case) (Target, string, bool) {
+	kT := physics.Boltzmann * cs.Cond.StorageTempK
 	// Each barrier is searched from the last one found (Pair.BarrierNear, as
 	// in stabilityMarginSlope): the maximum reached from there, which for a
 	// curve with two maxima need not be Pair.Barrier's highest.
-	near := ev.lastBarrier
-	psi, ok := potentialWhere(ev, func(p physics.Pair) float64 {
+	near := cs.LastBarrier
+	psi, ok := potentialWhere(cs, func(p physics.Pair) float64 {
 		if b := p.BarrierNear(near); b.Found {
 			near = b.Separation
 			return b.Energy/kT - looseFlocBarrierKT

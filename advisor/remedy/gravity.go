@@ -1,4 +1,4 @@
-package advisor
+package remedy
 
 import (
 	"fmt"
@@ -14,32 +14,32 @@ import (
 // acceptance criterion, so the hindered speed must stay below
 // maxClear/shelfLife.
 
-func clearLayerCriterion(ev *evaluation) string {
-	return "clear layer at the end of a " + number.Shortest(ev.cond.ShelfLife/input.Day) + " d shelf life <= " +
-		number.Quantity(ev.cond.MaxClear*1e3, "mm") + " (hindered Stokes settling)"
+func clearLayerCriterion(cs *Case) string {
+	return "clear layer at the end of a " + number.Shortest(cs.Cond.ShelfLife/input.Day) + " d shelf life <= " +
+		number.Quantity(cs.Cond.MaxClear*1e3, "mm") + " (hindered Stokes settling)"
 }
 
 // allowedStokesSpeed is the largest isolated-particle Stokes speed, m/s,
 // that meets the clear-layer criterion at the sample's volume fraction.
-func allowedStokesSpeed(ev *evaluation) float64 {
-	c := ev.cond
+func allowedStokesSpeed(cs *Case) float64 {
+	c := cs.Cond
 	return c.MaxClear / c.ShelfLife / physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
 }
 
-func solveParticleSize(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
+func solveParticleSize(cs *Case) (Target, string, bool) {
+	c := cs.Cond
 	drho := math.Abs(c.ParticleDensity - c.Liquid.Density)
 	if drho == 0 {
 		return Target{}, "density already matched", false
 	}
-	d := math.Sqrt(18 * c.Liquid.Viscosity * allowedStokesSpeed(ev) / (drho * physics.StandardGravity))
+	d := math.Sqrt(18 * c.Liquid.Viscosity * allowedStokesSpeed(cs) / (drho * physics.StandardGravity))
 	// Particles whose gravitational length reaches the container height
 	// never leave a clear layer, however long they stand: at sedimentation
 	// equilibrium the top holds at least 1/e of the bottom's concentration
 	// (Perrin's barometric profile).
 	kT := physics.Boltzmann * c.StorageTempK
 	brownian := 2 * math.Cbrt(3*kT/(4*math.Pi*drho*physics.StandardGravity*c.Height))
-	crit := clearLayerCriterion(ev)
+	crit := clearLayerCriterion(cs)
 	if brownian > d {
 		d = brownian
 		crit = "gravitational length >= container height, so Brownian motion keeps the particles up (Perrin); " +
@@ -58,10 +58,10 @@ const (
 
 // solveDensityMatch matches the liquid to solid particles, and the droplets
 // (by a weighting agent) to the liquid for emulsions and foams.
-func solveDensityMatch(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
-	maxDrho := 9 * c.Liquid.Viscosity * allowedStokesSpeed(ev) / (2 * c.Radius * c.Radius * physics.StandardGravity)
-	crit := clearLayerCriterion(ev)
+func solveDensityMatch(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	maxDrho := 9 * c.Liquid.Viscosity * allowedStokesSpeed(cs) / (2 * c.Radius * c.Radius * physics.StandardGravity)
+	crit := clearLayerCriterion(cs)
 	if c.Phase != "solid" {
 		if c.ParticleDensity < c.Liquid.Density {
 			return Target{"particles.density_kg_m3", ">=", c.Liquid.Density - maxDrho, "kg/m^3"},
@@ -80,16 +80,16 @@ func solveDensityMatch(ev *evaluation) (Target, string, bool) {
 	return t, crit, true
 }
 
-func solveViscosity(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
+func solveViscosity(cs *Case) (Target, string, bool) {
+	c := cs.Cond
 	drho := math.Abs(c.ParticleDensity - c.Liquid.Density)
-	eta := 2 * c.Radius * c.Radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(ev))
+	eta := 2 * c.Radius * c.Radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(cs))
 	return Target{"medium.viscosity_mPa_s", ">=", eta * 1e3, "mPa s"},
-		clearLayerCriterion(ev) + "; the low-shear viscosity is what counts", true
+		clearLayerCriterion(cs) + "; the low-shear viscosity is what counts", true
 }
 
-func solveYieldStress(ev *evaluation) (Target, string, bool) {
-	c := ev.cond
+func solveYieldStress(cs *Case) (Target, string, bool) {
+	c := cs.Cond
 	largest := c.Radius
 	if c.Classes != nil {
 		largest = c.Classes[len(c.Classes)-1].Diameter / 2
