@@ -1,8 +1,8 @@
 // Package rules holds colloidtriage's knowledge base as data: the rule files
-// (*.rules.yaml), the catalogue of symptoms, causes, remedies and scales
+// (*.rules.yaml), the catalogue of symptoms, causes and remedies
 // (catalog.yaml), and the materials and liquids library (library/*.yaml).
-// Everything is embedded in the binary; package advisor parses, checks and
-// compiles it once at start-up.
+// Everything is embedded in the binary; packages advisor/rule and
+// advisor/library parse, check and compile it once at start-up.
 package rules
 
 import "embed"
