@@ -14,6 +14,7 @@ import (
 	"testing"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/rules"
 )
 
@@ -70,7 +71,7 @@ func demoCases(t *testing.T) []demoCase {
 
 // loadDemo decodes a scenario strictly: an unknown field is an error, as at
 // the API's edge.
-func loadDemo(t *testing.T, path string) *advisor.Sample {
+func loadDemo(t *testing.T, path string) *input.Sample {
 	t.Helper()
 	data, err := os.ReadFile(path)
 	if err != nil {
@@ -78,7 +79,7 @@ func loadDemo(t *testing.T, path string) *advisor.Sample {
 	}
 	dec := json.NewDecoder(bytes.NewReader(data))
 	dec.DisallowUnknownFields()
-	var s advisor.Sample
+	var s input.Sample
 	if err := dec.Decode(&s); err != nil {
 		t.Fatalf("%s: %v", path, err)
 	}

@@ -1,13 +1,15 @@
 package advisor
 
 import (
-	"cmp"
 	"io/fs"
 	"math"
-	"slices"
 	"strings"
 
-	"github.com/expr-lang/expr/vm"
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/library"
+	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
+	"colloidtriage/advisor/rule"
 )
 
 // EngineVersion identifies this build of the engine in every report.
@@ -17,12 +19,12 @@ const EngineVersion = "0.1.0"
 // safe for concurrent use: a triage reads the engine and writes only its own
 // evaluation.
 type Engine struct {
-	rules *RuleSet
-	lib   *Library
+	rules *rule.Set
+	lib   *library.Library
 }
 
 // NewEngine builds an engine from a compiled rule set and a loaded library.
-func NewEngine(rules *RuleSet, lib *Library) *Engine {
+func NewEngine(rules *rule.Set, lib *library.Library) *Engine {
 	return &Engine{rules: rules, lib: lib}
 }
 
@@ -30,11 +32,11 @@ func NewEngine(rules *RuleSet, lib *Library) *Engine {
 // files and its library, as in rules.FS) plus any site packs, loads the
 // library, and builds the engine.
 func LoadEngine(builtin fs.FS, packs ...fs.FS) (*Engine, error) {
-	rs, err := LoadRuleSet(builtin, packs...)
+	rs, err := rule.Load(vocabulary, builtin, packs...)
 	if err != nil {
 		return nil, err
 	}
-	lib, err := LoadLibrary(builtin)
+	lib, err := library.Load(builtin)
 	if err != nil {
 		return nil, err
 	}
@@ -42,15 +44,15 @@ func LoadEngine(builtin fs.FS, packs ...fs.FS) (*Engine, error) {
 }
 
 // RuleSet returns the engine's compiled rule set.
-func (e *Engine) RuleSet() *RuleSet { return e.rules }
+func (e *Engine) RuleSet() *rule.Set { return e.rules }
 
 // Library returns the engine's materials and liquids library.
-func (e *Engine) Library() *Library { return e.lib }
+func (e *Engine) Library() *library.Library { return e.lib }
 
 // Triage computes the scales of a validated sample, ranks the causes of its
-// symptom and solves the remedies' targets. It returns an *InputError when
+// symptom and solves the remedies' targets. It returns an *input.Error when
 // the sample is physically inconsistent.
-func (e *Engine) Triage(s *Sample) (*Report, error) {
+func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, err
@@ -63,28 +65,40 @@ func (e *Engine) Triage(s *Sample) (*Report, error) {
 		Scales:      ev.scales,
 		Causes:      causes,
 		Cautions:    cautions(ev),
-		Assumptions: ev.n.list,
+		Assumptions: ev.notes.List(),
 		Models:      ev.models,
-		Inputs:      understood(s, ev.c),
+		Inputs:      input.Understood(s, ev.cond),
 	}, nil
 }
 
 // Scales computes only the physics of a sample, without rules.
-func (e *Engine) Scales(s *Sample) (map[string]Scale, []string, map[string]string, error) {
+func (e *Engine) Scales(s *input.Sample) (map[string]Scale, []string, map[string]string, error) {
 	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, nil, nil, err
 	}
-	return ev.scales, ev.n.list, ev.models, nil
+	return ev.scales, ev.notes.List(), ev.models, nil
 }
 
-func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
-	ev := &evaluation{n: &notes{list: make([]string, 0, 32)}, scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), f: newFacts()}
-	c, err := e.resolve(s, ev.n)
+// RemedyCase evaluates a validated sample as Triage does and returns the
+// case its remedies are solved on, so that a target can be put back into
+// the forward physics and checked. It returns an *input.Error when the
+// sample is physically inconsistent.
+func (e *Engine) RemedyCase(s *input.Sample) (*remedy.Case, error) {
+	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, err
 	}
-	ev.c = c
+	return ev.remedyCase(), nil
+}
+
+func (e *Engine) evaluate(s *input.Sample) (*evaluation, error) {
+	ev := &evaluation{notes: input.NewNotes(32), scales: make(map[string]Scale, len(scaleSpecs)), models: make(map[string]string, 8), facts: e.rules.NewFacts()}
+	c, err := input.Resolve(s, e.lib, ev.notes)
+	if err != nil {
+		return nil, err
+	}
+	ev.cond = c
 	ev.inputFacts()
 	ev.computeGravity()
 	ev.computeInteraction()
@@ -92,100 +106,40 @@ func (e *Engine) evaluate(s *Sample) (*evaluation, error) {
 	return ev, nil
 }
 
-type causeScore struct {
-	id    string
-	cf    float64
-	fired []*rule
-	order int
-}
-
-// rank runs the rules of the sample's symptom, combines their certainty
-// factors per cause, runs the after_causes rules with the top score known,
-// and returns the causes with a positive score, best first.
+// rank ranks the causes of the sample's symptom (see rule.Set.Rank) and
+// writes each with its evidence, explanation and remedies.
 func (e *Engine) rank(ev *evaluation) []Cause {
-	scores := map[string]*causeScore{}
-	var machine vm.VM
-	run := func(after bool) {
-		var env map[string]any // for the expression machine, built on first need
-		for i := range e.rules.rules {
-			r := &e.rules.rules[i]
-			if r.AfterCauses != after || !r.appliesTo(ev.c.symptom) {
-				continue
-			}
-			var out bool
-			if r.cond != nil {
-				out = r.cond(ev.f)
-			} else {
-				if env == nil {
-					env = ev.f.env(after)
-				}
-				var err error
-				if out, err = runRule(&machine, r.program, env); err != nil {
-					continue
-				}
-			}
-			if !out {
-				continue
-			}
-			cs := scores[r.Cause]
-			if cs == nil {
-				cs = &causeScore{id: r.Cause, order: len(scores)}
-				scores[r.Cause] = cs
-			}
-			cs.cf = combineCertainty(cs.cf, r.Certainty)
-			cs.fired = append(cs.fired, r)
-		}
-	}
-	run(false)
-	top := 0.0
-	for _, cs := range scores {
-		top = math.Max(top, cs.cf)
-	}
-	ev.f.setNumber(topCauseScore, top)
-	run(true)
-
-	list := make([]*causeScore, 0, len(scores))
-	for _, cs := range scores {
-		if cs.cf > 0 {
-			list = append(list, cs)
-		}
-	}
-	slices.SortFunc(list, func(a, b *causeScore) int {
-		if a.cf != b.cf {
-			return cmp.Compare(b.cf, a.cf)
-		}
-		return strings.Compare(a.id, b.id)
-	})
-	out := make([]Cause, len(list))
-	for i, cs := range list {
+	scores := e.rules.Rank(ev.facts, ev.cond.Symptom)
+	out := make([]Cause, len(scores))
+	for i, cs := range scores {
 		out[i] = e.cause(ev, cs, i+1)
 	}
 	return out
 }
 
-func (e *Engine) cause(ev *evaluation, cs *causeScore, rank int) Cause {
-	entry, _ := find(e.rules.Catalog.Causes, cs.id)
+func (e *Engine) cause(ev *evaluation, cs *rule.Score, rank int) Cause {
+	entry, _ := e.rules.Catalog.Cause(cs.Cause)
 	evidence, remedies, text := 0, 0, 0
-	for _, r := range cs.fired {
+	for _, r := range cs.Fired {
 		evidence += len(r.Evidence)
 		remedies += len(r.Remedies)
 		text += len(r.Explain) + 17 // a placeholder's name is about as long as its value
 	}
-	c := Cause{ID: cs.id, Rank: rank, Score: math.Round(cs.cf*1000) / 1000, Title: entry.Title,
+	c := Cause{ID: cs.Cause, Rank: rank, Score: math.Round(cs.Certainty*1000) / 1000, Title: entry.Title,
 		Evidence: make([]Evidence, 0, evidence), Remedies: make([]Remedy, 0, remedies)}
 	var explanation strings.Builder
 	explanation.Grow(text)
-	for i, r := range cs.fired {
+	for i, r := range cs.Fired {
 		if i > 0 {
 			explanation.WriteByte(' ')
 		}
-		r.writeExplanation(&explanation, ev.f)
+		r.WriteExplanation(&explanation, ev.facts)
 		for _, name := range r.Evidence {
-			v := ev.f.number(name)
+			v := ev.facts.Number(name)
 			if hasEvidence(c.Evidence, name) || math.IsNaN(v) || math.IsInf(v, 0) {
 				continue
 			}
-			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: roundSignificant(v, 6), Unit: factIndex[name].Unit, Test: r.When})
+			c.Evidence = append(c.Evidence, Evidence{Scale: name, Value: number.Round(v, 6), Unit: ev.facts.Unit(name), Test: r.When})
 		}
 		if r.Certainty < 0 {
 			continue

@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"colloidtriage/advisor/input"
 	"colloidtriage/rules"
 )
 
@@ -18,20 +19,20 @@ func benchEngine(b testing.TB) *Engine {
 	return e
 }
 
-func benchSample(b testing.TB, name string) *Sample {
+func benchSample(b testing.TB, name string) *input.Sample {
 	b.Helper()
 	data, err := os.ReadFile("../testdata/demo/" + name)
 	if err != nil {
 		b.Fatal(err)
 	}
-	var s Sample
+	var s input.Sample
 	if err := json.Unmarshal(data, &s); err != nil {
 		b.Fatal(err)
 	}
 	return &s
 }
 
-func benchTriage(b *testing.B, s *Sample) {
+func benchTriage(b *testing.B, s *input.Sample) {
 	e := benchEngine(b)
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -65,7 +66,7 @@ func BenchmarkTriageTwentyClasses(b *testing.B) {
 	for i := 0; i < 20; i++ {
 		f := float64(i+1) / 20
 		s.Particles.SizeDistribution = append(s.Particles.SizeDistribution,
-			SizeClass{DiameterNm: d50 * (0.3 + 1.4*f), VolumeFraction: 0.05})
+			input.SizeClass{DiameterNm: d50 * (0.3 + 1.4*f), VolumeFraction: 0.05})
 	}
 	benchTriage(b, s)
 }

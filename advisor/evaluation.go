@@ -4,38 +4,53 @@ import (
 	"math"
 	"strings"
 
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
+	"colloidtriage/advisor/rule"
 	"colloidtriage/physics"
 )
 
 // evaluation is the working state of one triage: the resolved conditions,
 // the facts the rules see, the scales reported, and the notes made.
 type evaluation struct {
-	c      *conditions
-	f      facts
+	cond   *input.Conditions
+	facts  rule.Facts
 	scales map[string]Scale
-	n      *notes
+	notes  *input.Notes
 	models map[string]string
 
-	pair    physics.Pair // the interaction of two median particles, when evaluable
-	hasPair bool
-	vdwOnly physics.Pair // the same pair without double layer, for steric checks
+	pair            physics.Pair // the interaction of two median particles, when evaluable
+	hasPair         bool
+	vanDerWaalsOnly physics.Pair // the same pair without double layer, for steric checks
 
 	hasBarrier  bool    // the pair as specified has an energy barrier
-	lastBarrier float64 // separation of the last barrier found while solving remedies, a warm start
+	lastBarrier float64 // separation of the last barrier found, a warm start
 
-	stabilityText string // stabilityCriterion, written once per triage
-
-	acceptablePotential struct { // solved once per triage, shared by two remedies
-		done, ok bool
-		psi      float64
-	}
+	remedies *remedy.Case // built on the first remedy, see remedyCase
 }
 
-// scaleIndex holds the declared scales, each with its slot among the facts.
-var scaleIndex = func() map[string]declaredFact {
-	m := map[string]declaredFact{}
+// remedyCase is the evaluation as the remedy solvers see it, built on the
+// first call and shared by every remedy of the triage.
+func (ev *evaluation) remedyCase() *remedy.Case {
+	if ev.remedies == nil {
+		ev.remedies = &remedy.Case{Cond: ev.cond, Facts: ev.facts, Reported: ev.reported,
+			Pair: ev.pair, HasPair: ev.hasPair, VanDerWaalsOnly: ev.vanDerWaalsOnly, HasBarrier: ev.hasBarrier, LastBarrier: ev.lastBarrier}
+	}
+	return ev.remedies
+}
+
+// reported returns a scale as the report gives it.
+func (ev *evaluation) reported(name string) (float64, bool) {
+	s, ok := ev.scales[name]
+	return s.Value, ok
+}
+
+// scaleIndex holds the declared scales by name.
+var scaleIndex = func() map[string]ScaleSpec {
+	m := make(map[string]ScaleSpec, len(scaleSpecs))
 	for _, s := range scaleSpecs {
-		m[s.Name] = factIndex[s.Name]
+		m[s.Name] = s
 	}
 	return m
 }()
@@ -48,54 +63,14 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 	if !ok {
 		panic("advisor: undeclared scale " + name)
 	}
-	ev.f.num[spec.slot] = v
+	ev.facts.SetNumber(name, v)
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
-			ev.n.add("%s is unbounded for this sample and is not reported as a number", name)
+			ev.notes.Add("%s is unbounded for this sample and is not reported as a number", name)
 		}
 		return
 	}
-	ev.scales[name] = Scale{Value: roundSignificant(v, 6), Unit: spec.Unit, Basis: basis}
-}
-
-// roundSignificant keeps n significant digits so that reports do not pretend
-// a precision the models do not have, and stay byte-identical across runs.
-func roundSignificant(v float64, n int) float64 { return roundDigits(v, n, math.Round) }
-
-// roundDigits keeps n significant digits of v, rounding the scaled value
-// with round (math.Round, Floor or Ceil). A value already at n digits but
-// for its last bit stays as it is; one that cannot be scaled is returned
-// unchanged.
-func roundDigits(v float64, n int, round func(float64) float64) float64 {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return v
-	}
-	p := math.Pow10(n - decimalCeil(math.Abs(v)))
-	scaled := v * p
-	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Abs(scaled) {
-		scaled = nearest
-	}
-	r := round(scaled) / p
-	if math.IsInf(r, 0) || math.IsNaN(r) {
-		return v
-	}
-	return r
-}
-
-// decimalCeil is the smallest d with 10^d >= a, for finite a > 0: the
-// ceiling of log10 a, found from the binary exponent (log10 2 =
-// 0.30103...) and settled on math.Pow10's exact table instead of a
-// logarithm.
-func decimalCeil(a float64) int {
-	_, e := math.Frexp(a) // a in [2^(e-1), 2^e)
-	d := int(math.Floor(float64(e-1) * math.Log10E * math.Ln2))
-	for math.Pow10(d) < a {
-		d++
-	}
-	for math.Pow10(d-1) >= a {
-		d--
-	}
-	return d
+	ev.scales[name] = Scale{Value: number.Round(v, 6), Unit: spec.Unit, Basis: basis}
 }
 
 // modelChoice is a model the report names: its key in the report's models,
@@ -121,43 +96,43 @@ var (
 // model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(m modelChoice) {
 	ev.models[m.key] = m.text
-	ev.n.text(m.note)
+	ev.notes.Text(m.note)
 }
 
 func (ev *evaluation) inputFacts() {
-	c, f := ev.c, ev.f
-	f.setText("symptom", c.symptom)
-	f.setText("phase", c.phase)
-	f.setNumber("volume_fraction", c.phi)
-	f.setNumber("shelf_life_days", c.shelfLife/day)
-	f.setNumber("container_height_mm", c.height*1e3)
-	f.setNumber("max_clear_layer_mm", c.maxClear*1e3)
-	f.setNumber("storage_temperature_c", c.storageTempK-physics.CelsiusZero)
-	f.setNumber("observed_clear_layer_mm", c.observed.clearLayer*1e3)
-	f.setNumber("age_days", c.observed.age/day)
-	f.setText("sediment_redisperses", c.observed.redisperses)
-	f.setNumber("viscosity_change_percent", c.observed.viscosityChange)
-	f.setNumber("size_growth_percent", c.observed.sizeGrowth)
-	f.setFlag("zeta_measured", c.zetaSource == "measured" || c.zetaSource == "mobility")
-	f.setFlag("has_electrolyte", c.ionicStrength > 0)
-	f.setNumber("ph", c.ph)
-	f.setNumber("isoelectric_ph", c.iep)
-	f.setFlag("has_steric_layer", c.steric.present)
-	f.setNumber("steric_thickness_nm", nanOr(c.steric.present, c.steric.thickness*1e9))
-	if c.steric.hasQuality {
-		f.setText("solvent_quality", c.steric.quality.String())
+	c, f := ev.cond, ev.facts
+	f.SetText("symptom", c.Symptom)
+	f.SetText("phase", c.Phase)
+	f.SetNumber("volume_fraction", c.VolumeFraction)
+	f.SetNumber("shelf_life_days", c.ShelfLife/input.Day)
+	f.SetNumber("container_height_mm", c.Height*1e3)
+	f.SetNumber("max_clear_layer_mm", c.MaxClear*1e3)
+	f.SetNumber("storage_temperature_c", c.StorageTempK-physics.CelsiusZero)
+	f.SetNumber("observed_clear_layer_mm", c.Observed.ClearLayer*1e3)
+	f.SetNumber("age_days", c.Observed.Age/input.Day)
+	f.SetText("sediment_redisperses", c.Observed.Redisperses)
+	f.SetNumber("viscosity_change_percent", c.Observed.ViscosityChange)
+	f.SetNumber("size_growth_percent", c.Observed.SizeGrowth)
+	f.SetFlag("zeta_measured", c.ZetaSource == "measured" || c.ZetaSource == "mobility")
+	f.SetFlag("has_electrolyte", c.IonicStrength > 0)
+	f.SetNumber("ph", c.PH)
+	f.SetNumber("isoelectric_ph", c.IsoelectricPH)
+	f.SetFlag("has_steric_layer", c.Steric.Present)
+	f.SetNumber("steric_thickness_nm", nanOr(c.Steric.Present, c.Steric.Thickness*1e9))
+	if c.Steric.HasQuality {
+		f.SetText("solvent_quality", c.Steric.Quality.String())
 	}
-	f.setNumber("cloud_point_c", c.steric.cloudK-physics.CelsiusZero)
-	f.setNumber("free_polymer_g_L", nanOr(c.freePolymer.present, c.freePolymer.concentration))
-	f.setNumber("adsorbing_coverage", nanOr(c.adsorbing.present, c.adsorbing.coverage))
-	f.setNumber("adsorbing_molar_mass_kg_mol", nanOr(c.adsorbing.present, c.adsorbing.molarMass))
-	f.setNumber("shear_rate_per_s", c.shear)
-	f.setNumber("yield_stress_pa", c.yieldStress)
-	f.setNumber("min_barrier_kT", c.criteria.minBarrierKT)
-	f.setNumber("half_life_to_shelf_life", c.criteria.halfLifeRatio)
-	f.setFlag("has_size_distribution", c.classes != nil)
-	f.setNumber("max_relative_viscosity", c.criteria.maxRelViscosity)
-	f.setNumber("max_steric_contact_kT", c.criteria.maxStericKT)
+	f.SetNumber("cloud_point_c", c.Steric.CloudK-physics.CelsiusZero)
+	f.SetNumber("free_polymer_g_L", nanOr(c.FreePolymer.Present, c.FreePolymer.Concentration))
+	f.SetNumber("adsorbing_coverage", nanOr(c.Adsorbing.Present, c.Adsorbing.Coverage))
+	f.SetNumber("adsorbing_molar_mass_kg_mol", nanOr(c.Adsorbing.Present, c.Adsorbing.MolarMass))
+	f.SetNumber("shear_rate_per_s", c.Shear)
+	f.SetNumber("yield_stress_pa", c.YieldStress)
+	f.SetNumber("min_barrier_kT", c.Criteria.MinBarrierKT)
+	f.SetNumber("half_life_to_shelf_life", c.Criteria.HalfLifeRatio)
+	f.SetFlag("has_size_distribution", c.Classes != nil)
+	f.SetNumber("max_relative_viscosity", c.Criteria.MaxRelViscosity)
+	f.SetNumber("max_steric_contact_kT", c.Criteria.MaxStericKT)
 }
 
 func nanOr(ok bool, v float64) float64 {

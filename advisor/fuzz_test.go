@@ -16,6 +16,7 @@ import (
 	"github.com/go-playground/validator/v10"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/rules"
 )
 
@@ -23,7 +24,7 @@ import (
 // edge would accept: a demo scenario edited by a fuzzed program of
 // (field, number) pairs, each number folded into the field's valid range
 // from its validate tag, then checked with the same validator settings as
-// package api. Neither may panic; an error must be an *advisor.InputError
+// package api. Neither may panic; an error must be an *input.Error
 // naming fields; a report must marshal with encoding/json, which refuses
 // NaN and infinities.
 //
@@ -68,7 +69,7 @@ func FuzzTriage(f *testing.F) {
 }
 
 // guarded runs one engine call; a panic or a hang fails the test.
-func guarded(t *testing.T, eng *advisor.Engine, s *advisor.Sample, call func() (any, error)) (result any, err error) {
+func guarded(t *testing.T, eng *advisor.Engine, s *input.Sample, call func() (any, error)) (result any, err error) {
 	t.Helper()
 	start := time.Now()
 	defer func() {
@@ -86,10 +87,10 @@ func guarded(t *testing.T, eng *advisor.Engine, s *advisor.Sample, call func() (
 // instrumentation: a call that takes longer hangs for a client.
 const slowCall = time.Second
 
-func checkTriageResult(t *testing.T, s *advisor.Sample, result any, err error) {
+func checkTriageResult(t *testing.T, s *input.Sample, result any, err error) {
 	t.Helper()
 	if err != nil {
-		var ie *advisor.InputError
+		var ie *input.Error
 		if !errors.As(err, &ie) || len(ie.Problems) == 0 {
 			t.Fatalf("error %T %v for %s", err, err, sampleJSON(s))
 		}
@@ -105,17 +106,17 @@ func checkTriageResult(t *testing.T, s *advisor.Sample, result any, err error) {
 	}
 }
 
-func sampleJSON(s *advisor.Sample) string {
+func sampleJSON(s *input.Sample) string {
 	b, _ := json.Marshal(s)
 	return string(b)
 }
 
-func cloneSample(t *testing.T, s *advisor.Sample) *advisor.Sample {
+func cloneSample(t *testing.T, s *input.Sample) *input.Sample {
 	b, err := json.Marshal(s)
 	if err != nil {
 		t.Fatal(err)
 	}
-	var out advisor.Sample
+	var out input.Sample
 	if err := json.Unmarshal(b, &out); err != nil {
 		t.Fatal(err)
 	}
@@ -130,18 +131,18 @@ func fuzzOp(op uint8, x float64) []byte {
 	return b
 }
 
-func fuzzDemos(f *testing.F) []*advisor.Sample {
+func fuzzDemos(f *testing.F) []*input.Sample {
 	files, err := filepath.Glob("../testdata/demo/*.json")
 	if err != nil || len(files) == 0 {
 		f.Fatalf("no demo scenarios: %v", err)
 	}
-	out := make([]*advisor.Sample, len(files))
+	out := make([]*input.Sample, len(files))
 	for i, name := range files {
 		b, err := os.ReadFile(name)
 		if err != nil {
 			f.Fatal(err)
 		}
-		out[i] = &advisor.Sample{}
+		out[i] = &input.Sample{}
 		if err := json.Unmarshal(b, out[i]); err != nil {
 			f.Fatalf("%s: %v", name, err)
 		}
@@ -160,7 +161,7 @@ func fuzzValidator() *validator.Validate {
 	return v
 }
 
-// fuzzField is one settable leaf of advisor.Sample: the struct field
+// fuzzField is one settable leaf of input.Sample: the struct field
 // indices leading to it (a slice is entered at an element chosen by the
 // number), and how a number becomes a valid value.
 type fuzzField struct {
@@ -172,7 +173,7 @@ type fuzzField struct {
 	choices []string // for strings: the values to pick from
 }
 
-// fuzzFields lists every leaf of advisor.Sample by reflection: numbers with
+// fuzzFields lists every leaf of input.Sample by reflection: numbers with
 // their ranges, enumerations with their values, library keys and salt
 // formulas for the free-text names.
 func fuzzFields(eng *advisor.Engine) []fuzzField {
@@ -233,7 +234,7 @@ func fuzzFields(eng *advisor.Engine) []fuzzField {
 			out = append(out, ff)
 		}
 	}
-	walk(reflect.TypeOf(advisor.Sample{}), nil)
+	walk(reflect.TypeOf(input.Sample{}), nil)
 	return out
 }
 

@@ -3,6 +3,8 @@ package advisor
 import (
 	"math"
 
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -10,40 +12,40 @@ import (
 // curve's barrier and secondary minimum, and the aggregation kinetics of two
 // median particles, when a surface potential is known.
 func (ev *evaluation) computeInteraction() {
-	c := ev.c
-	T := c.storageTempK
+	c := ev.cond
+	T := c.StorageTempK
 	kT := physics.Boltzmann * T
-	kappa := physics.DebyeKappa(c.ionicStrength, c.liquid.epsR, T)
-	ev.set("ionic_strength", c.ionicStrength, "1/2 sum c z^2 over the stated ions")
+	kappa := physics.DebyeKappa(c.IonicStrength, c.Liquid.Permittivity, T)
+	ev.set("ionic_strength", c.IonicStrength, "1/2 sum c z^2 over the stated ions")
 	ev.set("debye_length", 1/kappa*1e9, "Debye-Hueckel: kappa^2 = 2 NA e^2 I/(eps0 epsr kT)")
 	if kappa > 0 {
-		ev.set("kappa_a", kappa*c.radius, "median radius over Debye length")
+		ev.set("kappa_a", kappa*c.Radius, "median radius over Debye length")
 	}
-	ev.set("counter_ion_valence", float64(c.counterValence), "largest valence of the ions opposite in sign to the surface")
-	ev.set("hamaker_constant", c.hamaker*1e21, "request, library or Tabor-Winterton estimate (see assumptions)")
-	if !math.IsNaN(c.iep) && !math.IsNaN(c.ph) {
-		ev.set("ph_distance_from_iep", math.Abs(c.ph-c.iep), "|pH - isoelectric pH|")
+	ev.set("counter_ion_valence", float64(c.CounterValence), "largest valence of the ions opposite in sign to the surface")
+	ev.set("hamaker_constant", c.Hamaker*1e21, "request, library or Tabor-Winterton estimate (see assumptions)")
+	if !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH) {
+		ev.set("ph_distance_from_iep", math.Abs(c.PH-c.IsoelectricPH), "|pH - isoelectric pH|")
 	}
-	if !math.IsNaN(c.henry) {
-		ev.set("henry_function", c.henry, "Henry's function used to convert mobility to zeta (see assumptions)")
+	if !math.IsNaN(c.Henry) {
+		ev.set("henry_function", c.Henry, "Henry's function used to convert mobility to zeta (see assumptions)")
 	}
 
-	ev.pair = physics.Pair{Radius: c.radius, Hamaker: c.hamaker, Kappa: kappa, EpsR: c.liquid.epsR, TempK: T,
-		Valence: max(c.counterValence, 1)}
+	ev.pair = physics.Pair{Radius: c.Radius, Hamaker: c.Hamaker, Kappa: kappa, EpsR: c.Liquid.Permittivity, TempK: T,
+		Valence: max(c.CounterValence, 1)}
 	ev.chooseModels()
-	ev.vdwOnly = ev.pair
-	ev.vdwOnly.Potential, ev.vdwOnly.Kappa = 0, 0
-	if math.IsNaN(c.zeta) {
+	ev.vanDerWaalsOnly = ev.pair
+	ev.vanDerWaalsOnly.Potential, ev.vanDerWaalsOnly.Kappa = 0, 0
+	if math.IsNaN(c.Zeta) {
 		return
 	}
-	ev.set("zeta_potential", c.zeta*1e3, "zeta potential ("+c.zetaSource+"), used as the diffuse-layer potential")
-	ev.pair.Potential = c.zeta
+	ev.set("zeta_potential", c.Zeta*1e3, "zeta potential ("+c.ZetaSource+"), used as the diffuse-layer potential")
+	ev.pair.Potential = c.Zeta
 	ev.addLayers()
 	ev.hasPair = true
 
 	if shielded(ev.pair) {
-		ev.n.add("the steric layers stop the pair where the total energy is still repulsive (%s at layer contact): there is no well to aggregate into, so the barrier, stability ratio and half-life are unbounded",
-			formatQuantity(ev.pair.Energy(2*ev.pair.StericThickness)/kT, "kT"))
+		ev.notes.Add("the steric layers stop the pair where the total energy is still repulsive (%s at layer contact): there is no well to aggregate into, so the barrier, stability ratio and half-life are unbounded",
+			number.Quantity(ev.pair.Energy(2*ev.pair.StericThickness)/kT, "kT"))
 		ev.set("energy_barrier", math.Inf(1), "")
 		ev.set("log10_stability_ratio", math.Inf(1), "")
 		ev.set("log10_aggregation_half_life_days", math.Inf(1), "")
@@ -69,7 +71,7 @@ func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {
 		ev.set("secondary_minimum", m.Energy/kT, "minimum of the total energy beyond the barrier")
 		ev.set("secondary_minimum_position", m.Separation*1e9, "separation at the secondary minimum")
 	} else {
-		ev.f.setNumber("secondary_minimum", 0)
+		ev.facts.SetNumber("secondary_minimum", 0)
 	}
 }
 
@@ -78,23 +80,6 @@ func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {
 // Fuchs' capture at the wall does not apply (Napper 1983, ch. 2).
 func shielded(p physics.Pair) bool {
 	return p.StericThickness > 0 && p.Energy(2*p.StericThickness) >= 0
-}
-
-// effectiveModels fills the model choices a request left open with the defaults.
-func effectiveModels(req *Models) Models {
-	m := Models{VanDerWaals: "hamaker_exact", DoubleLayer: "linear_superposition", ZetaFromMobility: "henry_ohshima"}
-	if req != nil {
-		if req.ZetaFromMobility != "" {
-			m.ZetaFromMobility = req.ZetaFromMobility
-		}
-		if req.VanDerWaals != "" {
-			m.VanDerWaals = req.VanDerWaals
-		}
-		if req.DoubleLayer != "" {
-			m.DoubleLayer = req.DoubleLayer
-		}
-	}
-	return m
 }
 
 // vanDerWaalsModels and doubleLayerModels describe the model choices of a
@@ -111,7 +96,7 @@ var (
 )
 
 func (ev *evaluation) chooseModels() {
-	m := effectiveModels(ev.c.models)
+	m := input.EffectiveModels(ev.cond.Models)
 	ev.pair.Retarded = m.VanDerWaals == "retarded_gregory"
 	ev.pair.ConstantPotential = m.DoubleLayer == "constant_potential"
 	vdw, okVdW := vanDerWaalsModels[m.VanDerWaals]
@@ -130,17 +115,17 @@ func (ev *evaluation) chooseModels() {
 // kinetics reports the Fuchs stability ratio and the Smoluchowski half-lives
 // as logarithms, so that very stable sols never overflow.
 func (ev *evaluation) kinetics(barrier physics.Extremum) {
-	c := ev.c
+	c := ev.cond
 	log10W := physics.Log10StabilityRatioWith(ev.pair, barrier, true)
-	n0 := physics.NumberDensity(c.phi, c.radius)
-	rapid := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, 0)
-	slow := physics.Log10HalfLife(c.liquid.viscosity, c.storageTempK, n0, log10W)
+	n0 := physics.NumberDensity(c.VolumeFraction, c.Radius)
+	rapid := physics.Log10HalfLife(c.Liquid.Viscosity, c.StorageTempK, n0, 0)
+	slow := physics.Log10HalfLife(c.Liquid.Viscosity, c.StorageTempK, n0, log10W)
 	ev.set("log10_stability_ratio", log10W, "Fuchs integral with Honig hydrodynamics over the total energy")
 	ev.set("rapid_aggregation_half_life", math.Pow(10, rapid), "Smoluchowski 3 eta/(4 kT N0), median particles")
-	ev.set("log10_aggregation_half_life_days", slow-math.Log10(day), "log10(W x rapid half-life / 1 d)")
-	ev.set("log10_half_life_over_shelf_life", slow-math.Log10(c.shelfLife), "log10 of half-life over shelf life")
-	if c.shear > 0 {
-		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.shear, 2*c.radius, c.liquid.viscosity, c.storageTempK),
+	ev.set("log10_aggregation_half_life_days", slow-math.Log10(input.Day), "log10(W x rapid half-life / 1 d)")
+	ev.set("log10_half_life_over_shelf_life", slow-math.Log10(c.ShelfLife), "log10 of half-life over shelf life")
+	if c.Shear > 0 {
+		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
 			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
 	}
 }
@@ -149,26 +134,17 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 // the chosen model vanishes and reports it as a concentration of the salt
 // type present (its ionic strength per mole).
 func (ev *evaluation) criticalCoagulation() {
-	c := ev.c
-	z := max(c.counterValence, 1)
-	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.zeta) / (4 * physics.Boltzmann * c.storageTempK))
-	ev.set("ccc_high_potential", physics.CCCHighPotential(c.hamaker, gamma, c.liquid.epsR, c.storageTempK, z),
+	c := ev.cond
+	z := max(c.CounterValence, 1)
+	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.Zeta) / (4 * physics.Boltzmann * c.StorageTempK))
+	ev.set("ccc_high_potential", physics.CCCHighPotential(c.Hamaker, gamma, c.Liquid.Permittivity, c.StorageTempK, z),
 		"Derjaguin-Landau-Verwey-Overbeek closed form for a z:z salt, -A a/(12 h) attraction, linear superposition")
 	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0, ev.lastBarrier)
 	if !ok {
 		return
 	}
-	perMole := c.ionicStrengthPerMole()
+	perMole := c.IonicStrengthPerMole()
 	ev.set("critical_coagulation_concentration", iCrit/perMole,
 		"ionic strength at which the barrier vanishes (numerical, chosen model), as concentration of the salt type present")
-	ev.set("ionic_strength_over_ccc", c.ionicStrength/iCrit, "ionic strength over its critical value")
-}
-
-// ionicStrengthPerMole is the ionic strength one mole of the dominant salt
-// adds: 1 for 1:1, 3 for 2:1 or 1:2, 4 for 2:2, 6 for 3:1.
-func (c *conditions) ionicStrengthPerMole() float64 {
-	if c.multivalentSalt == "" || c.multivalentConc == 0 {
-		return 1
-	}
-	return c.multivalentIonicShare
+	ev.set("ionic_strength_over_ccc", c.IonicStrength/iCrit, "ionic strength over its critical value")
 }

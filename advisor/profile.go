@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -83,18 +85,18 @@ const (
 )
 
 // zetaNeeded is the problem of a sample whose double layer cannot be set up.
-var zetaNeeded = FieldProblem{Pointer: "/particles/zeta_mV",
+var zetaNeeded = input.FieldProblem{Pointer: "/particles/zeta_mV",
 	Reason: "needed for the interaction profile: give zeta_mV, mobility_um_cm_per_V_s, or medium.ph with " +
 		"particles.isoelectric_ph or a material with an isoelectric point",
 	Unit: "mV", Valid: "-300 <= value <= 300"}
 
 // Profile evaluates a validated sample as Triage does and returns the
 // interaction energy curve of two median particles on points log-spaced
-// separations (physics.SeparationGrid). It returns an *InputError when the
+// separations (physics.SeparationGrid). It returns an *input.Error when the
 // sample is inconsistent or no surface potential is known. It panics when
 // points is outside [ProfilePointsMin, ProfilePointsMax] (the caller checks
 // the request).
-func (e *Engine) Profile(s *Sample, points int) (*Profile, error) {
+func (e *Engine) Profile(s *input.Sample, points int) (*Profile, error) {
 	if points < ProfilePointsMin || points > ProfilePointsMax {
 		panic(fmt.Sprintf("advisor: Profile needs %d to %d points, got %d", ProfilePointsMin, ProfilePointsMax, points))
 	}
@@ -103,7 +105,7 @@ func (e *Engine) Profile(s *Sample, points int) (*Profile, error) {
 		return nil, err
 	}
 	if !ev.hasPair {
-		return nil, &InputError{Problems: []FieldProblem{zetaNeeded}}
+		return nil, &input.Error{Problems: []input.FieldProblem{zetaNeeded}}
 	}
 	p := ev.profile(points)
 	p.SampleID = s.SampleID
@@ -118,20 +120,20 @@ func (ev *evaluation) profile(points int) *Profile {
 	kT := physics.Boltzmann * pair.TempK
 	grid := physics.SeparationGrid(pair, points)
 	depletion := pair.DepletionRange > 0 && pair.DepletionDensity > 0
-	notes := append([]string(nil), ev.n.list...)
+	notes := append([]string(nil), ev.notes.List()...)
 	note := func(format string, args ...any) { notes = append(notes, fmt.Sprintf(format, args...)) }
 
 	pts, skipped := samplePoints(pair, grid, depletion)
 
 	lo, hi := grid[0], grid[len(grid)-1]
-	contact, contactBy := "Born/hydration cut-off, "+formatQuantity(lo*1e9, "nm"), ContactBorn
+	contact, contactBy := "Born/hydration cut-off, "+number.Quantity(lo*1e9, "nm"), ContactBorn
 	if 2*pair.StericThickness > physics.MinimumSeparation {
-		contact = "hard wall of the steric layers at twice their thickness, " + formatQuantity(lo*1e9, "nm")
+		contact = "hard wall of the steric layers at twice their thickness, " + number.Quantity(lo*1e9, "nm")
 		contactBy = ContactSteric
 	}
 	note("interaction profile: two median particles, %d separations log-spaced from the closest approach (%s) "+
 		"to %s (the largest of 50 nm, 30 Debye lengths capped at 10 radii, 3 depletion ranges and 10 times the start)",
-		points, contact, formatQuantity(hi*1e9, "nm"))
+		points, contact, number.Quantity(hi*1e9, "nm"))
 	note("energies in kT at the storage temperature, kT = %.4g J", kT)
 	if pair.Kappa == 0 {
 		note("no electrolyte: no double layer, the profile is attraction only")
@@ -141,8 +143,8 @@ func (ev *evaluation) profile(points int) *Profile {
 	}
 
 	out := &Profile{
-		Units: ProfileUnits{Separation: "nm", Energy: "kT", KTZJ: roundSignificant(kT*1e21, 6),
-			TemperatureC: roundSignificant(pair.TempK-physics.CelsiusZero, 6)},
+		Units: ProfileUnits{Separation: "nm", Energy: "kT", KTZJ: number.Round(kT*1e21, 6),
+			TemperatureC: number.Round(pair.TempK-physics.CelsiusZero, 6)},
 		Pair:   ev.profilePair(lo, contactBy),
 		Points: pts,
 		Models: map[string]string{"van_der_waals": ev.models["van_der_waals"], "double_layer": ev.models["double_layer"],
@@ -156,8 +158,8 @@ func (ev *evaluation) profile(points int) *Profile {
 	if b.Found {
 		// The golden-section search ends within a relative 1e-5 of the
 		// start when the maximum sits there.
-		out.Barrier = &ProfileExtremum{EnergyKT: roundSignificant(b.Energy/kT, 6),
-			SeparationNm: roundSignificant(b.Separation*1e9, 6), AtClosestApproach: b.Separation <= lo*(1+1e-4)}
+		out.Barrier = &ProfileExtremum{EnergyKT: number.Round(b.Energy/kT, 6),
+			SeparationNm: number.Round(b.Separation*1e9, 6), AtClosestApproach: b.Separation <= lo*(1+1e-4)}
 		if out.Barrier.AtClosestApproach {
 			note("the total energy is highest at the closest approach: the barrier given is the energy at contact")
 		}
@@ -165,8 +167,8 @@ func (ev *evaluation) profile(points int) *Profile {
 		note("the total energy has no maximum above 0 kT inside the range: no barrier to aggregation")
 	}
 	if m.Found {
-		out.SecondaryMinimum = &ProfileExtremum{EnergyKT: roundSignificant(m.Energy/kT, 6),
-			SeparationNm: roundSignificant(m.Separation*1e9, 6)}
+		out.SecondaryMinimum = &ProfileExtremum{EnergyKT: number.Round(m.Energy/kT, 6),
+			SeparationNm: number.Round(m.Separation*1e9, 6)}
 	}
 	return out
 }
@@ -184,14 +186,14 @@ func samplePoints(pair physics.Pair, grid []float64, depletion bool) (pts []Prof
 	pts = make([]ProfilePoint, 0, len(grid))
 	for i, h := range grid {
 		vdw, edl, dep := pair.Parts(h)
-		pt := ProfilePoint{SeparationNm: roundSignificant(h*1e9, 6), TotalKT: roundSignificant((vdw+edl+dep)/kT, 6),
-			VanDerWaalsKT: roundSignificant(vdw/kT, 6), DoubleLayerKT: roundSignificant(edl/kT, 6)}
+		pt := ProfilePoint{SeparationNm: number.Round(h*1e9, 6), TotalKT: number.Round((vdw+edl+dep)/kT, 6),
+			VanDerWaalsKT: number.Round(vdw/kT, 6), DoubleLayerKT: number.Round(edl/kT, 6)}
 		if !finite(pt.TotalKT, pt.VanDerWaalsKT, pt.DoubleLayerKT, dep/kT) {
 			skipped++
 			continue
 		}
 		if depletion {
-			depletionKT[i] = roundSignificant(dep/kT, 6)
+			depletionKT[i] = number.Round(dep/kT, 6)
 			pt.DepletionKT = &depletionKT[i]
 		}
 		pts = append(pts, pt)
@@ -201,15 +203,15 @@ func samplePoints(pair physics.Pair, grid []float64, depletion bool) (pts []Prof
 
 func (ev *evaluation) profilePair(closest float64, by string) ProfilePair {
 	p := ev.pair
-	pp := ProfilePair{RadiusNm: roundSignificant(p.Radius*1e9, 6), HamakerZJ: roundSignificant(p.Hamaker*1e21, 6),
-		ZetaMV: roundSignificant(p.Potential*1e3, 6), CounterIonValence: max(p.Valence, 1),
-		ClosestApproachNm: roundSignificant(closest*1e9, 6), ClosestApproachBy: by}
+	pp := ProfilePair{RadiusNm: number.Round(p.Radius*1e9, 6), HamakerZJ: number.Round(p.Hamaker*1e21, 6),
+		ZetaMV: number.Round(p.Potential*1e3, 6), CounterIonValence: max(p.Valence, 1),
+		ClosestApproachNm: number.Round(closest*1e9, 6), ClosestApproachBy: by}
 	if p.Kappa > 0 {
-		v := roundSignificant(1/p.Kappa*1e9, 6)
+		v := number.Round(1/p.Kappa*1e9, 6)
 		pp.DebyeLengthNm = &v
 	}
 	if p.DepletionRange > 0 && p.DepletionDensity > 0 {
-		v := roundSignificant(p.DepletionRange*1e9, 6)
+		v := number.Round(p.DepletionRange*1e9, 6)
 		pp.DepletionRangeNm = &v
 	}
 	return pp

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/physics"
 	"colloidtriage/rules"
 )
@@ -22,17 +23,19 @@ func profileEngine(t testing.TB) *advisor.Engine {
 
 func ptr[T any](v T) *T { return &v }
 
+func relErr(got, want float64) float64 { return math.Abs(got-want) / math.Abs(want) }
+
 // referenceSample is the REFERENCES.md interaction case: a = 100 nm,
 // A = 1e-20 J, psi = -25 mV, 1 mM NaCl, 25 degC, with the relative
 // permittivity 78.4 that the reference values use.
-func referenceSample(diameterNm, zetaMV, saltMM float64) *advisor.Sample {
-	return &advisor.Sample{
+func referenceSample(diameterNm, zetaMV, saltMM float64) *input.Sample {
+	return &input.Sample{
 		SampleID: "ref-dlvo",
 		Symptom:  "flocculation",
-		Particles: advisor.Particles{DiameterNm: ptr(diameterNm), DensityKgM3: ptr(1050.0), HamakerZJ: ptr(10.0),
+		Particles: input.Particles{DiameterNm: ptr(diameterNm), DensityKgM3: ptr(1050.0), HamakerZJ: ptr(10.0),
 			ZetaMV: ptr(zetaMV)},
-		Medium: advisor.Medium{Permittivity: ptr(78.4),
-			Electrolytes: []advisor.Electrolyte{{Formula: "NaCl", ConcentrationMM: ptr(saltMM)}}},
+		Medium: input.Medium{Permittivity: ptr(78.4),
+			Electrolytes: []input.Electrolyte{{Formula: "NaCl", ConcentrationMM: ptr(saltMM)}}},
 	}
 }
 
@@ -190,7 +193,7 @@ func TestProfileDepletion(t *testing.T) {
 	t.Parallel()
 	s := referenceSample(200, -25, 1)
 	const molarMass = 100.0
-	s.Medium.FreePolymer = &advisor.FreePolymer{ConcentrationGL: ptr(2.387324e22 * molarMass / physics.Avogadro),
+	s.Medium.FreePolymer = &input.FreePolymer{ConcentrationGL: ptr(2.387324e22 * molarMass / physics.Avogadro),
 		RadiusGyrationNm: ptr(10.0), MolarMassKgMol: ptr(molarMass)}
 	pr, err := profileEngine(t).Profile(s, advisor.ProfilePointsMax)
 	if err != nil {
@@ -231,9 +234,9 @@ func TestProfileNeedsSurfacePotential(t *testing.T) {
 	s := referenceSample(200, -25, 1)
 	s.Particles.ZetaMV = nil
 	_, err := profileEngine(t).Profile(s, advisor.ProfilePointsDefault)
-	var ie *advisor.InputError
+	var ie *input.Error
 	if !errors.As(err, &ie) || len(ie.Problems) != 1 || ie.Problems[0].Pointer != "/particles/zeta_mV" || ie.Problems[0].Unit != "mV" {
-		t.Fatalf("got %v, want an InputError naming /particles/zeta_mV", err)
+		t.Fatalf("got %v, want an *input.Error naming /particles/zeta_mV", err)
 	}
 }
 
@@ -269,7 +272,7 @@ func BenchmarkProfile(b *testing.B) {
 func TestProfileStericWall(t *testing.T) {
 	t.Parallel()
 	s := referenceSample(200, -40, 10)
-	s.Stabilizer = &advisor.Stabilizer{LayerThicknessNm: ptr(3.0), SolventQuality: "good"}
+	s.Stabilizer = &input.Stabilizer{LayerThicknessNm: ptr(3.0), SolventQuality: "good"}
 	pr, err := profileEngine(t).Profile(s, advisor.ProfilePointsDefault)
 	if err != nil {
 		t.Fatal(err)
@@ -293,7 +296,7 @@ func TestProfileStericWall(t *testing.T) {
 func TestProfileWithoutElectrolyte(t *testing.T) {
 	t.Parallel()
 	s := referenceSample(200, -40, 0)
-	s.Medium = advisor.Medium{Liquid: "toluene"}
+	s.Medium = input.Medium{Liquid: "toluene"}
 	pr, err := profileEngine(t).Profile(s, advisor.ProfilePointsDefault)
 	if err != nil {
 		t.Fatal(err)

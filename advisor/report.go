@@ -1,5 +1,10 @@
 package advisor
 
+import (
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/remedy"
+)
+
 // Report is the answer to one Sample. It carries no NaN or infinity: values
 // that can leave float64's range are reported as log10 scales, and a scale
 // that is unbounded for this sample (say, a gravitational length at exact
@@ -13,7 +18,7 @@ type Report struct {
 	Cautions    []string          `json:"cautions"`
 	Assumptions []string          `json:"assumptions"`
 	Models      map[string]string `json:"models"`
-	Inputs      Sample            `json:"inputs"`
+	Inputs      input.Sample      `json:"inputs"`
 }
 
 // Versions identifies the engine and the rule set that produced a report.
@@ -50,16 +55,8 @@ type Evidence struct {
 
 // Remedy is one fix, with its computed target when the physics gives one.
 type Remedy struct {
-	ID        string  `json:"id"`
-	Action    string  `json:"action"`
-	Target    *Target `json:"target,omitempty"`
-	Criterion string  `json:"criterion,omitempty"`
-}
-
-// Target is a quantitative goal: quantity op value unit, e.g. "diameter_nm <= 420 nm".
-type Target struct {
-	Quantity string  `json:"quantity"`
-	Op       string  `json:"op"`
-	Value    float64 `json:"value"`
-	Unit     string  `json:"unit"`
+	ID        string         `json:"id"`
+	Action    string         `json:"action"`
+	Target    *remedy.Target `json:"target,omitempty"`
+	Criterion string         `json:"criterion,omitempty"`
 }

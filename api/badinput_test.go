@@ -15,10 +15,10 @@ import (
 	"testing"
 	"time"
 
+	"colloidtriage/advisor/input"
+
 	"github.com/labstack/echo/v4"
 	"github.com/rs/zerolog"
-
-	"colloidtriage/advisor"
 )
 
 // Bad and extreme input against the HTTP routes (issue 7). The contract
@@ -65,7 +65,7 @@ func mustJSON(v any) string {
 	return string(b)
 }
 
-// tagField is one leaf field of advisor.Sample reached through JSON names;
+// tagField is one leaf field of input.Sample reached through JSON names;
 // a slice on the way is entered at its element 0.
 type tagField struct {
 	steps   []tagStep
@@ -79,7 +79,7 @@ type tagStep struct {
 	typ   reflect.Type // the struct type this step leads to
 }
 
-// sampleFields lists every leaf field of advisor.Sample by reflection, so
+// sampleFields lists every leaf field of input.Sample by reflection, so
 // that a field added to the contract is covered without editing this file.
 func sampleFields() []tagField {
 	var out []tagField
@@ -107,7 +107,7 @@ func sampleFields() []tagField {
 			out = append(out, tagField{steps: steps, field: f, pointer: p})
 		}
 	}
-	walk(reflect.TypeOf(advisor.Sample{}), nil, "")
+	walk(reflect.TypeOf(input.Sample{}), nil, "")
 	return out
 }
 
@@ -230,7 +230,7 @@ func requiredMembers(t reflect.Type, leaf string) map[string]any {
 			m[name] = midValue(f)
 		}
 	}
-	if t == reflect.TypeOf(advisor.Electrolyte{}) {
+	if t == reflect.TypeOf(input.Electrolyte{}) {
 		if strings.HasSuffix(leaf, "_valence") {
 			m["cation_valence"], m["anion_valence"] = 1, 1
 		} else {
@@ -247,7 +247,7 @@ func formatNumber(v any) string {
 	return fmt.Sprint(v)
 }
 
-// generatedBadCases derives, for every field of advisor.Sample, a value of
+// generatedBadCases derives, for every field of input.Sample, a value of
 // the wrong JSON type and, for every bounded numeric field, the values just
 // outside its range and the absurd magnitudes +-1e308.
 func generatedBadCases() []badCase {

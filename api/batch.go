@@ -16,6 +16,7 @@ import (
 	"github.com/labstack/echo/v4"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 )
 
 // batchBodyLimit is the body limit of the batch route, 64,000,000 bytes:
@@ -173,7 +174,7 @@ func jsonEntries(body []byte) ([]batchEntry, error) {
 	}
 	if req.Samples == nil {
 		return nil, fail(samplesMissing,
-			`send {"samples": [sample, ...]}`, advisor.FieldProblem{Pointer: "/samples", Reason: "required"})
+			`send {"samples": [sample, ...]}`, input.FieldProblem{Pointer: "/samples", Reason: "required"})
 	}
 	entries := make([]batchEntry, len(*req.Samples))
 	for i, raw := range *req.Samples {
@@ -244,7 +245,7 @@ func (h *handlers) triageEntry(i int, e batchEntry, base pointerBase) (item batc
 	if e.err != nil {
 		return failedItem(item, e.err, i, base)
 	}
-	var s advisor.Sample
+	var s input.Sample
 	err := notAnObject(e.raw)
 	if err == nil {
 		err = unmarshalStrict(e.raw, &s)
@@ -275,7 +276,7 @@ func notAnObject(raw []byte) error {
 		return nil
 	}
 	return fail(sampleNotObject,
-		"each sample must be a JSON object", advisor.FieldProblem{Pointer: "", Reason: "wrong type: expected object"})
+		"each sample must be a JSON object", input.FieldProblem{Pointer: "", Reason: "wrong type: expected object"})
 }
 
 // lenientSampleID reads sample_id from an item that failed strict decoding,
@@ -294,7 +295,7 @@ func lenientSampleID(raw []byte) string {
 // to the request body.
 func failedItem(item batchItem, err error, i int, base pointerBase) batchItem {
 	p := problemFor(err)
-	fields := make([]advisor.FieldProblem, len(p.Errors))
+	fields := make([]input.FieldProblem, len(p.Errors))
 	for j, f := range p.Errors {
 		f.Pointer = base(i, f.Pointer)
 		fields[j] = f

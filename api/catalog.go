@@ -6,10 +6,11 @@ import (
 	"github.com/labstack/echo/v4"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/rule"
 )
 
 type catalogResponse struct {
-	*advisor.Catalog
+	*rule.Catalog
 	Scales []advisor.ScaleSpec `json:"scales"`
 }
 
@@ -18,9 +19,9 @@ func (h *handlers) catalog(c echo.Context) error {
 }
 
 type rulesResponse struct {
-	Hash  string             `json:"hash"`
-	Files []string           `json:"files"`
-	Rules []advisor.RuleInfo `json:"rules"`
+	Hash  string      `json:"hash"`
+	Files []string    `json:"files"`
+	Rules []rule.Info `json:"rules"`
 }
 
 func (h *handlers) rules(c echo.Context) error {

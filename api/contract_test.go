@@ -26,9 +26,11 @@ import (
 	"github.com/getkin/kin-openapi/routers/gorillamux"
 	"github.com/labstack/echo/v4"
 	gommonbytes "github.com/labstack/gommon/bytes"
-	"gopkg.in/yaml.v3"
+	"go.yaml.in/yaml/v3"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/rule"
 	"colloidtriage/openapi"
 )
 
@@ -623,7 +625,7 @@ func enumStrings(t testing.TB, s *openapi3.Schema) []string {
 	return out
 }
 
-func entryIDs(entries []advisor.Entry) []string {
+func entryIDs(entries []rule.Entry) []string {
 	out := make([]string, len(entries))
 	for i, e := range entries {
 		out[i] = e.ID
@@ -707,12 +709,12 @@ func objectParts(s *openapi3.Schema) []*openapi3.Schema {
 }
 
 // TestContractSampleFields: every member of the sample's contract (read
-// from advisor.Sample's tags) is in the document with its type, unit,
+// from input.Sample's tags) is in the document with its type, unit,
 // range, enum, length, item limits and requiredness, no other member is,
 // and every request object refuses unknown members as the decoder does.
 func TestContractSampleFields(t *testing.T) {
 	t.Parallel()
-	checkObject(t, contractOf(reflect.TypeOf(advisor.Sample{})), contractDoc(t).schema(t, "Sample"), "")
+	checkObject(t, contractOf(reflect.TypeOf(input.Sample{})), contractDoc(t).schema(t, "Sample"), "")
 }
 
 // fixed is what the contract fixes about one member, written alike for

@@ -14,9 +14,9 @@ import (
 	"strings"
 	"sync"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 // csvDialect is a CSV file's field delimiter and decimal separator.
@@ -96,7 +96,7 @@ type pathStep struct {
 // to keep in step.
 var csvColumns = sync.OnceValue(func() map[string]csvColumn {
 	out := map[string]csvColumn{}
-	addColumns(out, contractOf(reflect.TypeOf(advisor.Sample{})), "", nil)
+	addColumns(out, contractOf(reflect.TypeOf(input.Sample{})), "", nil)
 	return out
 })
 
@@ -147,7 +147,7 @@ func addColumns(out map[string]csvColumn, n *node, column string, path []pathSte
 //
 //	sample_id;symptom;particles.material;particles.diameter_nm;particles.zeta_mV;medium.electrolytes.0.formula;medium.electrolytes.0.concentration_mM
 //
-// Every leaf of advisor.Sample is a column (testdata/batch/README.md lists
+// Every leaf of input.Sample is a column (testdata/batch/README.md lists
 // them); an index may go up to the array's item limit less one. A header
 // with an unknown, repeated or empty column is refused whole (400) before
 // any row is read, and so is a body that does not parse as CSV.
@@ -207,7 +207,7 @@ func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
 		if len(rec) != len(cols) {
 			e.err = fail(csvRowLength,
 				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
-				advisor.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
+				input.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
 		} else {
 			e.raw, e.err = csvSample(cols, rec, d)
 		}
@@ -223,18 +223,18 @@ func csvHeader(header []string) ([]csvColumn, int, error) {
 	cols := make([]csvColumn, len(header))
 	seen := map[string]bool{}
 	idCol := -1
-	var problems []advisor.FieldProblem
+	var problems []input.FieldProblem
 	for j, name := range header {
 		name = strings.TrimSpace(name)
 		ptr := "/header/" + strconv.Itoa(j)
 		col, ok := known[name]
 		switch {
 		case name == "":
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: "empty column name"})
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: "empty column name"})
 		case seen[name]:
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: fmt.Sprintf("column %q appears twice", name)})
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: fmt.Sprintf("column %q appears twice", name)})
 		case !ok:
-			problems = append(problems, advisor.FieldProblem{Pointer: ptr, Reason: unknownColumn(name, known),
+			problems = append(problems, input.FieldProblem{Pointer: ptr, Reason: unknownColumn(name, known),
 				Valid: "the dotted path of a sample field, e.g. particles.diameter_nm or medium.electrolytes.0.formula"})
 		}
 		seen[name] = true
@@ -283,7 +283,7 @@ func allEmpty(rec []string) bool {
 // does not parse is reported, with its pointer relative to the sample.
 func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 	root := map[string]any{}
-	var problems []advisor.FieldProblem
+	var problems []input.FieldProblem
 	for j, cell := range rec {
 		cell = strings.TrimSpace(cell)
 		if cell == "" {
@@ -291,7 +291,7 @@ func csvSample(cols []csvColumn, rec []string, d csvDialect) ([]byte, error) {
 		}
 		v, reason := parseCell(cell, cols[j].leaf.kind, d)
 		if reason != "" {
-			problems = append(problems, advisor.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].leaf.unit})
+			problems = append(problems, input.FieldProblem{Pointer: jsonPointer(cols[j].path), Reason: reason, Unit: cols[j].leaf.unit})
 			continue
 		}
 		setPath(root, cols[j].path, v)

@@ -11,9 +11,9 @@ import (
 	"reflect"
 	"strings"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 // decodeJSON reads one JSON value from the request body into v, strictly:
@@ -57,7 +57,7 @@ func unmarshalStrict(body []byte, v any) error {
 	}
 	if p, bad := checkMembers(body, contractOf(reflect.TypeOf(v))); bad {
 		return fail(memberOffContract, p.reason,
-			advisor.FieldProblem{Pointer: p.pointer, Reason: p.reason})
+			input.FieldProblem{Pointer: p.pointer, Reason: p.reason})
 	}
 	return nil
 }
@@ -78,7 +78,7 @@ func jsonProblem(err error, body []byte, target *node) error {
 		}
 		return fail(fieldWrongType,
 			fmt.Sprintf("expected %s, got JSON %s", kind, typ.Value),
-			advisor.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
+			input.FieldProblem{Pointer: ptr, Reason: "wrong type: expected " + kind})
 	case errors.Is(err, io.EOF) || len(bytes.TrimSpace(body)) == 0:
 		return fail(bodyEmpty, "send a JSON object")
 	case errors.Is(err, io.ErrUnexpectedEOF):
@@ -90,7 +90,7 @@ func jsonProblem(err error, body []byte, target *node) error {
 		}
 		return fail(fieldUnknown,
 			"the field "+name+" is not part of the contract (see /openapi.json); check its spelling and unit suffix",
-			advisor.FieldProblem{Pointer: name, Reason: "unknown field"})
+			input.FieldProblem{Pointer: name, Reason: "unknown field"})
 	}
 	return fail(jsonInvalid, "")
 }

@@ -4,21 +4,21 @@ import (
 	"errors"
 	"net/http"
 
-	"github.com/labstack/echo/v4"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/labstack/echo/v4"
 )
 
 // Problem is an RFC 9457 problem detail. Errors lists the offending fields
 // as JSON pointers with the expected unit and the valid range.
 type Problem struct {
-	Type      string                 `json:"type"`
-	Title     string                 `json:"title"`
-	Status    int                    `json:"status"`
-	Detail    string                 `json:"detail,omitempty"`
-	Instance  string                 `json:"instance,omitempty"`
-	RequestID string                 `json:"request_id,omitempty"`
-	Errors    []advisor.FieldProblem `json:"errors,omitempty"`
+	Type      string               `json:"type"`
+	Title     string               `json:"title"`
+	Status    int                  `json:"status"`
+	Detail    string               `json:"detail,omitempty"`
+	Instance  string               `json:"instance,omitempty"`
+	RequestID string               `json:"request_id,omitempty"`
+	Errors    []input.FieldProblem `json:"errors,omitempty"`
 }
 
 // Problem types; relative URIs resolve against the service's own address.
@@ -108,13 +108,13 @@ var problemKinds = [kindCount]problemClass{
 type problemError struct {
 	kind   kind
 	detail string
-	fields []advisor.FieldProblem
+	fields []input.FieldProblem
 }
 
 func (e *problemError) Error() string { return problemKinds[e.kind].title + ": " + e.detail }
 
 // fail reports a failure of kind k.
-func fail(k kind, detail string, fields ...advisor.FieldProblem) error {
+func fail(k kind, detail string, fields ...input.FieldProblem) error {
 	return &problemError{kind: k, detail: detail, fields: fields}
 }
 
@@ -128,7 +128,7 @@ func (e *problemError) problem() Problem {
 // the limit) is a plain HTTP status, of type about:blank.
 func problemFor(err error) Problem {
 	var pe *problemError
-	var ie *advisor.InputError
+	var ie *input.Error
 	var he *echo.HTTPError
 	switch {
 	case errors.As(err, &pe):

@@ -9,6 +9,7 @@ import (
 	"github.com/labstack/echo/v4"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 )
 
 // svgContentType is the media type of the interaction-profile chart.
@@ -32,7 +33,7 @@ func (h *handlers) interactionProfile(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	var s advisor.Sample
+	var s input.Sample
 	if err := decodeJSON(c, &s); err != nil {
 		return err
 	}
@@ -69,7 +70,7 @@ func profilePoints(c echo.Context) (int, error) {
 		return 0, fail(queryInvalid,
 			"the query parameter points must be an integer from "+strconv.Itoa(advisor.ProfilePointsMin)+
 				" to "+strconv.Itoa(advisor.ProfilePointsMax),
-			advisor.FieldProblem{Pointer: "?points", Reason: "not an integer in range", Unit: "1", Valid: valid})
+			input.FieldProblem{Pointer: "?points", Reason: "not an integer in range", Unit: "1", Valid: valid})
 	}
 	return n, nil
 }

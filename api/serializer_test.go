@@ -10,6 +10,7 @@ import (
 	gojson "github.com/goccy/go-json"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 )
 
 // TestEncoderMatchesStdlib: the response encoder writes the bytes
@@ -34,7 +35,7 @@ func TestEncoderMatchesStdlib(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		var s advisor.Sample
+		var s input.Sample
 		if err := json.Unmarshal(data, &s); err != nil {
 			t.Fatal(err)
 		}

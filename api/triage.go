@@ -6,6 +6,7 @@ import (
 	"github.com/labstack/echo/v4"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 )
 
 // idempotencyKeyHeader is echoed into the report so a LIMS can match retries.
@@ -18,8 +19,8 @@ type triageResponse struct {
 }
 
 // readSample decodes and validates one sample from the request body.
-func (h *handlers) readSample(c echo.Context) (*advisor.Sample, error) {
-	var s advisor.Sample
+func (h *handlers) readSample(c echo.Context) (*input.Sample, error) {
+	var s input.Sample
 	if err := decodeJSON(c, &s); err != nil {
 		return nil, err
 	}
@@ -55,7 +56,7 @@ type scalesResponse struct {
 
 // scales computes the physics only; a symptom is not needed.
 func (h *handlers) scales(c echo.Context) error {
-	var s advisor.Sample
+	var s input.Sample
 	if err := decodeJSON(c, &s); err != nil {
 		return err
 	}

@@ -11,6 +11,7 @@ import (
 	"testing"
 
 	"colloidtriage/advisor"
+	"colloidtriage/advisor/input"
 	"colloidtriage/openapi"
 	"colloidtriage/rules"
 )
@@ -119,10 +120,10 @@ func TestTriageDeterministic(t *testing.T) {
 }
 
 type problemBody struct {
-	Type   string                 `json:"type"`
-	Title  string                 `json:"title"`
-	Status int                    `json:"status"`
-	Errors []advisor.FieldProblem `json:"errors"`
+	Type   string               `json:"type"`
+	Title  string               `json:"title"`
+	Status int                  `json:"status"`
+	Errors []input.FieldProblem `json:"errors"`
 }
 
 func TestTriageBadInput(t *testing.T) {

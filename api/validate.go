@@ -7,9 +7,9 @@ import (
 	"regexp"
 	"strings"
 
-	"github.com/go-playground/validator/v10"
+	"colloidtriage/advisor/input"
 
-	"colloidtriage/advisor"
+	"github.com/go-playground/validator/v10"
 )
 
 // sampleValidator validates samples with JSON field names; the sample's
@@ -28,14 +28,14 @@ func newSampleValidator() *sampleValidator {
 		}
 		return name
 	})
-	return &sampleValidator{v: v, contract: contractOf(reflect.TypeOf(advisor.Sample{}))}
+	return &sampleValidator{v: v, contract: contractOf(reflect.TypeOf(input.Sample{}))}
 }
 
 var index = regexp.MustCompile(`\[(\d+)\]`)
 
 // validate checks a decoded sample against its tags and returns a problem
 // naming every offending field.
-func (sv *sampleValidator) validate(s *advisor.Sample) error {
+func (sv *sampleValidator) validate(s *input.Sample) error {
 	err := sv.v.Struct(s)
 	if err == nil {
 		return nil
@@ -44,7 +44,7 @@ func (sv *sampleValidator) validate(s *advisor.Sample) error {
 	if !errors.As(err, &ves) {
 		return err
 	}
-	fields := make([]advisor.FieldProblem, 0, len(ves))
+	fields := make([]input.FieldProblem, 0, len(ves))
 	for _, fe := range ves {
 		ns := fe.Namespace()
 		_, ns, _ = strings.Cut(ns, ".") // drop the root type name
@@ -53,7 +53,7 @@ func (sv *sampleValidator) validate(s *advisor.Sample) error {
 		if n := sv.contract.at(ptr); n != nil {
 			unit, valid, alternative = n.unit, n.valid, n.alternative
 		}
-		fields = append(fields, advisor.FieldProblem{Pointer: ptr, Reason: reason(fe, alternative), Unit: unit, Valid: valid})
+		fields = append(fields, input.FieldProblem{Pointer: ptr, Reason: reason(fe, alternative), Unit: unit, Valid: valid})
 	}
 	return fail(fieldsInvalid,
 		fmt.Sprintf("%d field(s) out of range or missing", len(fields)), fields...)

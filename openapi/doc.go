@@ -7,7 +7,7 @@ import (
 	_ "embed"
 	"encoding/json"
 
-	"gopkg.in/yaml.v3"
+	"go.yaml.in/yaml/v3"
 )
 
 //go:embed openapi.yaml

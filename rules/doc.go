@@ -2,8 +2,8 @@
 // (*.rules.yaml), the catalogue of symptoms, causes and remedies
 // (catalog.yaml; the scales are declared in code, beside the physics that
 // computes them), and the materials and liquids library (library/*.yaml).
-// Everything is embedded in the binary; the advisor parses, checks and
-// compiles it once at start-up.
+// Everything is embedded in the binary; packages advisor/rule and
+// advisor/library parse, check and compile it once at start-up.
 package rules
 
 import "embed"

@@ -1,0 +1,128 @@
+package input
+
+import "colloidtriage/physics"
+
+// Conditions is a Sample resolved into SI values at the storage
+// temperature, every gap filled from the library or a documented default.
+// Numbers that stay unknown are NaN and never reach a report.
+type Conditions struct {
+	Symptom        string
+	Product        string
+	Phase          string              // solid, liquid or gas
+	Radius         float64             // m, of the median particle
+	Classes        []physics.SizeClass // nil for a single size; diameters in m
+	VolumeFraction float64
+
+	ParticleDensity float64 // kg/m^3
+	Material        string  // library key or ""
+	MaterialKind    string
+
+	Liquid       LiquidState
+	StorageTempK float64
+
+	Ions                  []physics.Ion
+	IonicStrength         float64 // mol/m^3
+	CounterValence        int
+	MultivalentSalt       string  // formula of the multivalent salt present, if any
+	MultivalentConc       float64 // mol/m^3
+	MultivalentIonicShare float64 // ionic strength per mol/m^3 of that salt
+	Models                *Models
+
+	PH, IsoelectricPH float64
+	Zeta              float64 // V used for the double layer
+	ZetaSource        string  // measured, mobility, estimated or ""
+	Henry             float64 // Henry's function when zeta came from mobility
+	Hamaker           float64 // J
+
+	Steric      StericLayer
+	FreePolymer Depletant
+	Adsorbing   Adsorbed
+	Droplet     Droplet
+
+	Height, ShelfLife, MaxClear float64 // m, s, m
+	Shear                       float64 // 1/s
+	YieldStress                 float64 // Pa
+
+	Observed Observed
+	Criteria Acceptance
+}
+
+// LiquidState is the continuous phase at the storage temperature, in SI
+// units; FlashPointC is in °C, NaN when the liquid has none.
+type LiquidState struct {
+	Key                                               string
+	Density, Viscosity, Permittivity, RefractiveIndex float64
+	Aqueous, Flammable                                bool
+	FlashPointC                                       float64
+}
+
+// StericLayer is the adsorbed layer: thickness in m, cloud point in K (NaN
+// when not stated).
+type StericLayer struct {
+	Present    bool
+	Thickness  float64
+	Quality    physics.SolventQuality
+	HasQuality bool
+	CloudK     float64
+}
+
+// Depletant is the free, non-adsorbing polymer: concentration in g/L,
+// radius of gyration in m, molar mass in kg/mol (NaN when unknown).
+type Depletant struct {
+	Present                                    bool
+	Concentration, RadiusOfGyration, MolarMass float64
+}
+
+// Adsorbed is the adsorbing polymer: molar mass in kg/mol, surface
+// coverage as a fraction.
+type Adsorbed struct {
+	Present             bool
+	MolarMass, Coverage float64
+}
+
+// Droplet holds the properties of a liquid dispersed phase that ripening
+// needs: solubility in mol/m^3, molar volume in m^3/mol, interfacial tension
+// in N/m, molecular diffusivity in the liquid in m^2/s.
+type Droplet struct {
+	Solubility, MolarVolume, Tension, Diffusivity float64
+}
+
+// Observed is what the complaint reports: age in s, clear layer in m,
+// changes in %, NaN when not stated; Redisperses is "yes", "no" or "".
+type Observed struct {
+	Age, ClearLayer, ViscosityChange, SizeGrowth float64
+	Redisperses                                  string
+}
+
+// Acceptance holds the acceptance criteria the remedies are solved for.
+type Acceptance struct {
+	MinBarrierKT, HalfLifeRatio, MaxRelViscosity, MaxStericKT float64
+}
+
+// IonicStrengthPerMole is the ionic strength one mole of the dominant salt
+// adds: 1 for 1:1, 3 for 2:1 or 1:2, 4 for 2:2, 6 for 3:1.
+func (c *Conditions) IonicStrengthPerMole() float64 {
+	if c.MultivalentSalt == "" || c.MultivalentConc == 0 {
+		return 1
+	}
+	return c.MultivalentIonicShare
+}
+
+// Documented defaults of the acceptance criteria and the storage.
+const (
+	defaultTemperatureC    = 25.0
+	defaultLiquid          = "water"
+	defaultVolumeFraction  = 0.05
+	defaultContainerMm     = 100.0
+	defaultShelfLifeDays   = 365.0
+	defaultClearLayerShare = 0.02 // of the container height
+	defaultMinBarrierKT    = 15.0
+	defaultHalfLifeRatio   = 10.0
+	defaultMaxRelViscosity = 10.0
+	defaultMaxStericKT     = 1.0
+	defaultHamakerJ        = 1e-20
+)
+
+// AutoionisationMolM3 is the ionic strength of neutral water from its own
+// H+ and OH- at 25 °C, mol/m^3: the floor of every aqueous medium.
+const AutoionisationMolM3 = 1e-4

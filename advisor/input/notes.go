@@ -1,0 +1,25 @@
+package input
+
+import (
+	"fmt"
+)
+
+// Notes collects the assumptions of one triage in the order they were made:
+// every default, library fill, estimate and model choice.
+type Notes struct{ list []string }
+
+// NewNotes returns an empty list with room for n notes.
+func NewNotes(n int) *Notes { return &Notes{list: make([]string, 0, n)} }
+
+// Add adds a note formatted as by fmt.Sprintf.
+func (n *Notes) Add(format string, args ...any) {
+	n.list = append(n.list, fmt.Sprintf(format, args...))
+}
+
+// Text adds a note already written out; the frequent notes are built by
+// concatenation with number.Shortest, which spares fmt's formatting.
+func (n *Notes) Text(s string) { n.list = append(n.list, s) }
+
+// List returns the notes in the order they were made (the list itself, not
+// a copy).
+func (n *Notes) List() []string { return n.list }

@@ -1,0 +1,195 @@
+package input
+
+import (
+	"math"
+
+	"colloidtriage/advisor/library"
+	"colloidtriage/advisor/number"
+	"colloidtriage/physics"
+)
+
+// resolveLiquid finds the properties of the continuous phase at the storage
+// temperature. Overrides hold at the medium temperature; when storage is
+// elsewhere they are carried over by the library liquid's own temperature
+// dependence.
+func resolveLiquid(lib *library.Library, m *Medium, mediumT, storageT float64, tempField string, bad *Error, n *Notes) LiquidState {
+	key := m.Liquid
+	if key == "" {
+		key = defaultLiquid
+		n.Add("medium.liquid not given: water assumed")
+	}
+	liquid, ok := lib.Liquids[key]
+	if !ok {
+		bad.add("/medium/liquid", "unknown liquid", "", "one of: "+joinKeys(lib.LiquidKeys()))
+		return LiquidState{Key: key}
+	}
+	atStorage, err := liquidAt(liquid, storageT, tempField, n)
+	if err != nil {
+		bad.Problems = append(bad.Problems, err.(*Error).Problems...)
+		return LiquidState{Key: key}
+	}
+	atMedium := atStorage
+	if mediumT != storageT {
+		if atMedium, err = liquidAt(liquid, mediumT, "/medium/temperature_c", n); err != nil {
+			bad.Problems = append(bad.Problems, err.(*Error).Problems...)
+			return LiquidState{Key: key}
+		}
+	}
+	st := atStorage
+	carry := func(override *float64, scale, fromLib, atMed float64, name string) float64 {
+		if override == nil {
+			return fromLib
+		}
+		v := *override * scale
+		if mediumT == storageT {
+			return v
+		}
+		n.Add("medium.%s given at %g degC, carried to the storage temperature %g degC with the temperature dependence of %s",
+			name, mediumT, storageT, key)
+		return v * fromLib / atMed
+	}
+	st.Density = carry(m.DensityKgM3, 1, atStorage.Density, atMedium.Density, "density_kg_m3")
+	st.Viscosity = carry(m.ViscosityMPaS, 1e-3, atStorage.Viscosity, atMedium.Viscosity, "viscosity_mPa_s")
+	st.Permittivity = carry(m.Permittivity, 1, atStorage.Permittivity, atMedium.Permittivity, "relative_permittivity")
+	if m.RefractiveIndex != nil {
+		st.RefractiveIndex = *m.RefractiveIndex
+	}
+	return st
+}
+
+func joinKeys(keys []string) string {
+	out := ""
+	for i, k := range keys {
+		if i > 0 {
+			out += ", "
+		}
+		out += k
+	}
+	return out
+}
+
+// resolveElectrolyte sums the ions of the stated salts (or takes the stated
+// ionic strength or its estimate from conductivity), adds H+ or OH- outside
+// pH 4-10, and floors aqueous media at the autoionisation of water.
+func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
+	var ions []physics.Ion
+	for i, el := range m.Electrolytes {
+		conc := *el.ConcentrationMM // mM = mol/m^3
+		switch {
+		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
+			bad.add(pointerf("/medium/electrolytes/%d", i), "give either formula or cation_valence and anion_valence, not both", "", "")
+		case el.Formula != "":
+			salt, err := physics.ParseSalt(el.Formula)
+			if err != nil {
+				bad.add(pointerf("/medium/electrolytes/%d/formula", i), "unknown or unbalanced salt formula", "",
+					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2")
+				continue
+			}
+			pair := salt.Ions(conc)
+			ions = append(ions, pair[:]...)
+			noteMultivalent(c, el.Formula, pair, conc)
+		case el.CationValence != nil && el.AnionValence != nil:
+			pair, err := physics.SymmetricIons(*el.CationValence, *el.AnionValence, conc)
+			if err != nil {
+				bad.add(pointerf("/medium/electrolytes/%d", i), err.Error(), "", "valences 1 to 4")
+				continue
+			}
+			ions = append(ions, pair[:]...)
+			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc)
+		default:
+			bad.add(pointerf("/medium/electrolytes/%d", i), "each electrolyte needs a formula or both valences", "", "")
+		}
+	}
+	switch {
+	case len(m.Electrolytes) > 0:
+	case m.IonicStrengthMM != nil:
+		ions = append(ions, monovalent(*m.IonicStrengthMM)...)
+		n.Add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
+	case m.ConductivityUSCm != nil:
+		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
+		ions = append(ions, monovalent(is)...)
+		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
+			number.Quantity(is, "mM"))
+	}
+	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
+		// The acid or base that set the pH brings its own monovalent
+		// counter-ion, so the ionic strength is that of a 1:1 salt at the
+		// concentration of the excess H+ or OH-.
+		pair := physics.IonsFromPH(*m.PH)
+		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
+		ions = append(ions, monovalent(excess)...)
+		n.Text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
+			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
+	}
+	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
+		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
+	}
+	c.Ions = ions
+	c.IonicStrength = physics.IonicStrength(ions)
+	if c.Liquid.Aqueous && c.IonicStrength < AutoionisationMolM3 {
+		c.IonicStrength = AutoionisationMolM3
+		n.Add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(AutoionisationMolM3, "mM"))
+	}
+	if !c.Liquid.Aqueous && c.IonicStrength > 0 {
+		n.Add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
+	}
+}
+
+func monovalent(conc float64) []physics.Ion {
+	return []physics.Ion{{Valence: 1, Concentration: conc}, {Valence: -1, Concentration: conc}}
+}
+
+// noteMultivalent remembers the most concentrated salt with an ion of
+// valence above 1, for the multivalent-ion cause and its remedy.
+func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64) {
+	multi := pair[0].Valence > 1 || pair[1].Valence < -1
+	if multi && conc > 0 && conc >= c.MultivalentConc {
+		c.MultivalentSalt, c.MultivalentConc = label, conc
+		c.MultivalentIonicShare = physics.IonicStrength(pair[:]) / conc
+	}
+}
+
+// resolveZeta chooses the surface potential for the double layer: measured
+// zeta, zeta from mobility by Henry's equation, or an estimate from pH and
+// the isoelectric point, in that order.
+func resolveZeta(p *Particles, c *Conditions, n *Notes) {
+	kappa := physics.DebyeKappa(c.IonicStrength, c.Liquid.Permittivity, c.StorageTempK)
+	switch {
+	case p.ZetaMV != nil && p.Mobility != nil:
+		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
+		n.Add("both zeta_mV and mobility given: the measured zeta_mV is used")
+	case p.ZetaMV != nil:
+		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
+	case p.Mobility != nil:
+		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
+		model := EffectiveModels(c.Models).ZetaFromMobility
+		var how string
+		switch model {
+		case "smoluchowski":
+			c.Henry, how = 1.5, "Smoluchowski's limit (thin double layer, f = 1.5)"
+		case "huckel":
+			c.Henry, how = 1, "Hueckel's limit (thick double layer, f = 1)"
+		case "henry_exact":
+			c.Henry, how = physics.HenrySwanFurst(kappa*c.Radius), "Henry's equation with the exact f(kappa a) of Swan & Furst (2012)"
+		default:
+			c.Henry, how = physics.HenryOhshima(kappa*c.Radius), "Henry's equation with Ohshima's (1994) closed form of f(kappa a)"
+		}
+		c.Zeta = physics.ZetaHenry(mu, c.Liquid.Viscosity, c.Liquid.Permittivity, c.Henry)
+		c.ZetaSource = "mobility"
+		n.Add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.Zeta*1e3, "mV"), how, c.Henry)
+	case !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH):
+		c.Zeta = physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK)
+		c.ZetaSource = "estimated"
+		n.Add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
+			number.Quantity(c.Zeta*1e3, "mV"), c.PH, c.IsoelectricPH)
+	default:
+		n.Add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")
+	}
+	surfaceSign := 0
+	if c.Zeta > 0 {
+		surfaceSign = 1
+	} else if c.Zeta < 0 {
+		surfaceSign = -1
+	}
+	c.CounterValence = physics.CounterIonValence(c.Ions, surfaceSign)
+}

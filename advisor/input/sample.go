@@ -1,0 +1,124 @@
+package input
+
+// Sample is one complaint as a user states it: the batch's specification, its
+// storage and what was observed. Field names carry their units; optional
+// numbers are pointers so that "not given" differs from zero. The `validate`
+// tags hold the valid ranges (checked once, at the edge, by package api) and
+// the `unit` tags name the unit reported when a value is out of range.
+type Sample struct {
+	SampleID    string       `json:"sample_id,omitempty" validate:"max=128"`
+	Symptom     string       `json:"symptom" validate:"required,oneof=settling caking creaming flocculation viscosity_rise size_growth phase_separation"`
+	Product     string       `json:"product_category,omitempty" validate:"omitempty,oneof=paint ink coating cosmetic food beverage pharmaceutical ceramic agrochemical other"`
+	Particles   Particles    `json:"particles"`
+	Medium      Medium       `json:"medium"`
+	Stabilizer  *Stabilizer  `json:"stabilizer,omitempty"`
+	Storage     Storage      `json:"storage"`
+	Observation *Observation `json:"observation,omitempty"`
+	Criteria    *Criteria    `json:"criteria,omitempty"`
+	Models      *Models      `json:"models,omitempty"`
+}
+
+// Models selects optional physical models; the defaults are named in every report.
+type Models struct {
+	VanDerWaals      string `json:"van_der_waals,omitempty" validate:"omitempty,oneof=hamaker_exact retarded_gregory"`
+	DoubleLayer      string `json:"double_layer,omitempty" validate:"omitempty,oneof=linear_superposition constant_potential"`
+	ZetaFromMobility string `json:"zeta_from_mobility,omitempty" validate:"omitempty,oneof=henry_ohshima henry_exact smoluchowski huckel"`
+}
+
+// Particles describes the dispersed phase.
+type Particles struct {
+	Material          string      `json:"material,omitempty" validate:"max=64"`
+	Phase             string      `json:"phase,omitempty" validate:"omitempty,oneof=solid liquid gas"`
+	DiameterNm        *float64    `json:"diameter_nm,omitempty" validate:"required_without=SizeDistribution,omitempty,gte=0.5,lte=1e7" unit:"nm"`
+	SizeSpan          *float64    `json:"size_span,omitempty" validate:"omitempty,gte=0,lte=5" unit:"1"`
+	SizeDistribution  []SizeClass `json:"size_distribution,omitempty" validate:"omitempty,min=1,max=100,dive"`
+	DensityKgM3       *float64    `json:"density_kg_m3,omitempty" validate:"omitempty,gte=0.05,lte=25000" unit:"kg/m^3"`
+	VolumeFraction    *float64    `json:"volume_fraction,omitempty" validate:"omitempty,gt=0,lt=0.74" unit:"1"`
+	ZetaMV            *float64    `json:"zeta_mV,omitempty" validate:"omitempty,gte=-300,lte=300" unit:"mV"`
+	Mobility          *float64    `json:"mobility_um_cm_per_V_s,omitempty" validate:"omitempty,gte=-20,lte=20" unit:"um cm/(V s)"`
+	IsoelectricPH     *float64    `json:"isoelectric_ph,omitempty" validate:"omitempty,gte=0,lte=14" unit:"pH"`
+	HamakerZJ         *float64    `json:"hamaker_zJ,omitempty" validate:"omitempty,gte=0,lte=1000" unit:"zJ"`
+	RefractiveIndex   *float64    `json:"refractive_index,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
+	Permittivity      *float64    `json:"relative_permittivity,omitempty" validate:"omitempty,gte=1,lte=1e4" unit:"1"`
+	SolubilityMolM3   *float64    `json:"solubility_mol_m3,omitempty" validate:"omitempty,gte=0,lte=1e4" unit:"mol/m^3"`
+	MolarVolumeCm3Mol *float64    `json:"molar_volume_cm3_mol,omitempty" validate:"omitempty,gte=1,lte=5000" unit:"cm^3/mol"`
+	TensionMNm        *float64    `json:"interfacial_tension_mN_m,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"mN/m"`
+}
+
+// SizeClass is one class of an explicit size distribution.
+type SizeClass struct {
+	DiameterNm     float64 `json:"diameter_nm" validate:"gte=0.5,lte=1e7" unit:"nm"`
+	VolumeFraction float64 `json:"volume_fraction" validate:"gt=0,lte=1" unit:"1"`
+}
+
+// Medium describes the continuous phase.
+type Medium struct {
+	Liquid           string        `json:"liquid,omitempty" validate:"max=64"`
+	TemperatureC     *float64      `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
+	DensityKgM3      *float64      `json:"density_kg_m3,omitempty" validate:"omitempty,gte=500,lte=3000" unit:"kg/m^3"`
+	ViscosityMPaS    *float64      `json:"viscosity_mPa_s,omitempty" validate:"omitempty,gte=0.1,lte=1e7" unit:"mPa s"`
+	Permittivity     *float64      `json:"relative_permittivity,omitempty" validate:"omitempty,gte=1,lte=200" unit:"1"`
+	RefractiveIndex  *float64      `json:"refractive_index,omitempty" validate:"omitempty,gte=1,lte=3" unit:"1"`
+	PH               *float64      `json:"ph,omitempty" validate:"omitempty,gte=0,lte=14" unit:"pH"`
+	Electrolytes     []Electrolyte `json:"electrolytes,omitempty" validate:"omitempty,max=20,dive"`
+	IonicStrengthMM  *float64      `json:"ionic_strength_mM,omitempty" validate:"omitempty,gte=0,lte=5000" unit:"mM"`
+	ConductivityUSCm *float64      `json:"conductivity_uS_cm,omitempty" validate:"omitempty,gte=0,lte=300000" unit:"uS/cm"`
+	YieldStressPa    *float64      `json:"yield_stress_Pa,omitempty" validate:"omitempty,gte=0,lte=10000" unit:"Pa"`
+	FreePolymer      *FreePolymer  `json:"free_polymer,omitempty"`
+}
+
+// Electrolyte is one dissolved salt, by formula or by explicit valences.
+type Electrolyte struct {
+	Formula         string   `json:"formula,omitempty" validate:"max=32"`
+	CationValence   *int     `json:"cation_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
+	AnionValence    *int     `json:"anion_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
+	ConcentrationMM *float64 `json:"concentration_mM" validate:"required,gte=0,lte=5000" unit:"mM"`
+}
+
+// FreePolymer is dissolved, non-adsorbing polymer (a depletant).
+type FreePolymer struct {
+	ConcentrationGL  *float64 `json:"concentration_g_L" validate:"required,gte=0,lte=500" unit:"g/L"`
+	RadiusGyrationNm *float64 `json:"radius_of_gyration_nm,omitempty" validate:"omitempty,gte=0.1,lte=1000" unit:"nm"`
+	MolarMassKgMol   *float64 `json:"molar_mass_kg_mol,omitempty" validate:"omitempty,gte=0.1,lte=100000" unit:"kg/mol"`
+}
+
+// Stabilizer describes an adsorbed steric layer and adsorbing polymer.
+type Stabilizer struct {
+	LayerThicknessNm *float64          `json:"layer_thickness_nm,omitempty" validate:"omitempty,gte=0,lte=1000" unit:"nm"`
+	SolventQuality   string            `json:"solvent_quality,omitempty" validate:"omitempty,oneof=good theta poor"`
+	FloryHugginsChi  *float64          `json:"flory_huggins_chi,omitempty" validate:"omitempty,gte=-2,lte=5" unit:"1"`
+	CloudPointC      *float64          `json:"cloud_point_c,omitempty" validate:"omitempty,gte=-20,lte=250" unit:"degC"`
+	AdsorbingPolymer *AdsorbingPolymer `json:"adsorbing_polymer,omitempty"`
+}
+
+// AdsorbingPolymer is a polymer that adsorbs on the particles (a possible bridge).
+type AdsorbingPolymer struct {
+	MolarMassKgMol  *float64 `json:"molar_mass_kg_mol" validate:"required,gte=0.1,lte=100000" unit:"kg/mol"`
+	SurfaceCoverage *float64 `json:"surface_coverage" validate:"required,gte=0,lte=1" unit:"1"`
+}
+
+// Storage is where and how long the product must stay stable.
+type Storage struct {
+	ContainerHeightMm *float64 `json:"container_height_mm,omitempty" validate:"omitempty,gte=1,lte=20000" unit:"mm"`
+	ShelfLifeDays     *float64 `json:"shelf_life_days,omitempty" validate:"omitempty,gte=0.01,lte=36500" unit:"d"`
+	TemperatureC      *float64 `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
+	ShearRatePerS     *float64 `json:"shear_rate_per_s,omitempty" validate:"omitempty,gte=0,lte=1e7" unit:"1/s"`
+	MaxClearLayerMm   *float64 `json:"max_clear_layer_mm,omitempty" validate:"omitempty,gte=0.01,lte=20000" unit:"mm"`
+}
+
+// Observation is what the complaint reports.
+type Observation struct {
+	AgeDays                *float64 `json:"age_days,omitempty" validate:"omitempty,gte=0.001,lte=36500" unit:"d"`
+	ClearLayerMm           *float64 `json:"clear_layer_mm,omitempty" validate:"omitempty,gte=0,lte=20000" unit:"mm"`
+	SedimentRedisperses    *bool    `json:"sediment_redisperses,omitempty"`
+	ViscosityChangePercent *float64 `json:"viscosity_change_percent,omitempty" validate:"omitempty,gte=-100,lte=100000" unit:"%"`
+	SizeGrowthPercent      *float64 `json:"size_growth_percent,omitempty" validate:"omitempty,gte=-100,lte=100000" unit:"%"`
+}
+
+// Criteria overrides the acceptance criteria the remedies are solved for.
+type Criteria struct {
+	MinBarrierKT         *float64 `json:"min_barrier_kT,omitempty" validate:"omitempty,gte=0,lte=200" unit:"kT"`
+	HalfLifeToShelfLife  *float64 `json:"half_life_to_shelf_life,omitempty" validate:"omitempty,gte=1,lte=1e6" unit:"1"`
+	MaxRelativeViscosity *float64 `json:"max_relative_viscosity,omitempty" validate:"omitempty,gt=1,lte=1e4" unit:"1"`
+	MaxStericContactKT   *float64 `json:"max_steric_contact_kT,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"kT"`
+}

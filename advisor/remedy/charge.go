@@ -1,0 +1,528 @@
+package remedy
+
+import (
+	"fmt"
+	"math"
+
+	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/number"
+	"colloidtriage/physics"
+)
+
+// The electrostatic remedies search the quantity the formulator controls
+// until the pair meets both acceptance criteria: a barrier of at least
+// min_barrier_kT and an aggregation half-life of at least
+// half_life_to_shelf_life times the shelf life. Both grow monotonically as
+// the ionic strength falls or the surface potential rises, so a bracketed
+// root of the smaller margin is the target.
+
+func stabilityCriterion(cs *Case) string {
+	if cs.stabilityText == "" {
+		cs.stabilityText = "energy barrier >= " + number.Shortest(cs.Cond.Criteria.MinBarrierKT) + " kT and aggregation half-life >= " +
+			number.Shortest(cs.Cond.Criteria.HalfLifeRatio) + " x shelf life"
+	}
+	return cs.stabilityText
+}
+
+// stabilityMargin is the smaller of the barrier margin (kT) and the
+// half-life margin (decades) of a pair, or for a pair with steric layers
+// the larger of that and the energy at layer contact (kT; see
+// stabilityMarginSlope); >= 0 means acceptable.
+func stabilityMargin(cs *Case, p physics.Pair) float64 {
+	m, _ := stabilityMarginSlope(cs, p, exactLog10W)
+	return m
+}
+
+// log10WAt gives log10 W of a pair at its found barrier.
+type log10WAt func(p physics.Pair, b physics.Extremum) float64
+
+func exactLog10W(p physics.Pair, b physics.Extremum) float64 {
+	return physics.Log10StabilityRatioWith(p, b, true)
+}
+
+// peakAnchor evaluates margins on the peak estimate of log10 W
+// (physics.Log10StabilityRatioPeak: 5 energies about the barrier, against
+// the tens of the quadrature) offset by gap, its difference from the
+// quadrature at the last exact evaluation. For barriers of 15 kT and more
+// the estimate is within 2e-4 decades, so the remedies search on it and
+// check their answer with one quadrature.
+type peakAnchor struct {
+	cs  *Case
+	gap float64
+	// last is the last exact point, whose gap is worked out only when an
+	// estimate follows it: a search that stops at its check never needs it.
+	last struct {
+		pair    physics.Pair
+		barrier physics.Extremum
+		log10W  float64
+		pending bool
+	}
+}
+
+func (a *peakAnchor) estimated(p physics.Pair) (margin, slope float64) {
+	if last := &a.last; last.pending {
+		if gap := last.log10W - physics.Log10StabilityRatioPeak(last.pair, last.barrier, true); !math.IsNaN(gap) {
+			a.gap = gap
+		}
+		last.pending = false
+	}
+	return stabilityMarginSlope(a.cs, p, func(p physics.Pair, b physics.Extremum) float64 {
+		return physics.Log10StabilityRatioPeak(p, b, true) + a.gap
+	})
+}
+
+// exact is the margin on the quadrature; it renews the gap for the
+// estimates that follow.
+func (a *peakAnchor) exact(p physics.Pair) (margin, slope float64) {
+	return stabilityMarginSlope(a.cs, p, func(p physics.Pair, b physics.Extremum) float64 {
+		w := exactLog10W(p, b)
+		a.last.pair, a.last.barrier, a.last.log10W, a.last.pending = p, b, w, true
+		return w
+	})
+}
+
+// anchoredRoot solves a margin for the remedies whose solver needs only
+// margins: solve runs on the estimated margin of pairAt(x), and its answer
+// is checked by the quadrature one step (toward, signed) into the
+// acceptable side, which renews the gap. The answer, that checked point,
+// stands when the estimate so anchored still fails one step the other way
+// of solve's answer: the root is then within two steps. Otherwise solve
+// repeats on the renewed estimate; after three rounds, or when the
+// estimate finds nothing, solve runs on the exact margin.
+func anchoredRoot(cs *Case, pairAt func(x float64) physics.Pair, solve func(margin func(x float64) float64) (float64, bool), toward float64) (float64, bool) {
+	a := peakAnchor{cs: cs}
+	estimated := func(x float64) float64 {
+		m, _ := a.estimated(pairAt(x))
+		return m
+	}
+	for round := 0; round < 3; round++ {
+		x, ok := solve(estimated)
+		if !ok {
+			break
+		}
+		held := x + toward
+		m, _ := a.exact(pairAt(held))
+		if math.IsNaN(m) {
+			break
+		}
+		if m >= 0 && estimated(x-toward) < 0 {
+			return held, true
+		}
+	}
+	return solve(func(x float64) float64 { return stabilityMargin(cs, pairAt(x)) })
+}
+
+// stabilityMarginSlope is stabilityMargin, with log10 W from log10W, and an
+// estimate of its slope in log10 of the ionic strength, for Newton steps:
+// by the envelope theorem the barrier moves by LogKappaSlope ln(10)/2 per
+// decade, and log10 W follows the barrier over kT ln 10, less half a decade
+// for the 1/(kappa a) of W ~ exp(Vmax/kT)/(2 kappa a) (Reerink & Overbeek,
+// Discuss. Faraday Soc. 18 (1954) 74). The half-life margin is taken
+// wherever there is a barrier, also below the barrier criterion, so that a
+// search steps on the criterion that binds from its first point (the
+// half-life one, for most products, well before the barrier reaches its
+// minimum). The margin is NaN where log10W is (the peak estimate where it
+// does not apply) and the barrier criterion holds; where it fails, it is
+// the barrier margin.
+//
+// A pair with steric layers is acceptable once they shield it (the energy
+// at layer contact is >= 0, see shielded), so its margin is the larger of
+// that contact energy in kT and the DLVO margin, shielded or not (a NaN
+// DLVO estimate counts as lower when the pair is shielded). The margin is
+// so continuous across the onset of shielding, where a search would
+// otherwise meet a step, and the contact energy's slope is exact:
+// LogKappaSlope at layer contact.
+func stabilityMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope float64) {
+	if p.StericThickness == 0 {
+		return dlvoMarginSlope(cs, p, log10W)
+	}
+	kT := physics.Boltzmann * cs.Cond.StorageTempK
+	contact := 2 * p.StericThickness
+	byContact, contactSlope := p.Energy(contact)/kT, p.LogKappaSlope(contact)/kT*math.Ln10/2
+	m, s := dlvoMarginSlope(cs, p, log10W)
+	switch {
+	case m >= byContact:
+		return m, s
+	case byContact >= 0 || !math.IsNaN(m):
+		return byContact, contactSlope
+	}
+	return m, s // NaN short of shielding: the search falls back to the quadrature
+}
+
+// dlvoMarginSlope is stabilityMarginSlope without steric layers.
+func dlvoMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope float64) {
+	c := cs.Cond
+	kT := physics.Boltzmann * c.StorageTempK
+	barrier, barrierSlope := 0.0, 0.0
+	b := p.BarrierNear(cs.LastBarrier)
+	if b.Found {
+		barrier = b.Energy / kT
+		barrierSlope = p.LogKappaSlope(b.Separation) / kT * math.Ln10 / 2
+		cs.LastBarrier = b.Separation
+	}
+	byBarrier := barrier - c.Criteria.MinBarrierKT
+	if !b.Found && byBarrier < 0 {
+		return byBarrier, barrierSlope
+	}
+	w := log10W(p, b)
+	switch {
+	case math.IsNaN(w) && byBarrier < 0:
+		return byBarrier, barrierSlope
+	case math.IsNaN(w):
+		return math.NaN(), barrierSlope // no estimate here: the search falls back to the quadrature
+	}
+	n0 := physics.NumberDensity(c.VolumeFraction, c.Radius)
+	log10T := physics.Log10HalfLife(c.Liquid.Viscosity, c.StorageTempK, n0, w)
+	byHalfLife := log10T - math.Log10(c.Criteria.HalfLifeRatio*c.ShelfLife)
+	if byBarrier < byHalfLife {
+		return byBarrier, barrierSlope
+	}
+	return byHalfLife, barrierSlope/math.Ln10 - 0.5
+}
+
+func (cs *Case) withIonicStrength(I float64) physics.Pair {
+	p := cs.Pair
+	p.Kappa = physics.DebyeKappa(I, cs.Cond.Liquid.Permittivity, cs.Cond.StorageTempK)
+	return p
+}
+
+// ionicStrengthFloor is the lowest ionic strength a remedy may ask for.
+func ionicStrengthFloor(cs *Case) float64 {
+	if cs.Cond.Liquid.Aqueous {
+		return input.AutoionisationMolM3
+	}
+	return 1e-6
+}
+
+// ionicStrengthTol is the accuracy of the ionic-strength target in log10 of
+// the ionic strength: 0.23 %, under the three digits reported.
+const ionicStrengthTol = 1e-3
+
+// largestAcceptableIonicStrength finds the largest ionic strength that meets
+// both criteria, the barrier and the half-life, below the present one. The
+// margin is the smaller of the two; with no barrier at present, the search
+// starts at physics.CriticalIonicStrength's answer for the barrier
+// criterion, unless the pair has steric layers, whose contact energy gives
+// the margin a slope at the present ionic strength and may meet the
+// criterion above that answer.
+//
+// The half-life margin is searched on the peak estimate of log10 W
+// (physics.Log10StabilityRatioPeak: 5 energies about the barrier), offset
+// by its gap to the quadrature at the last exact point (none at first; the
+// gap is within 2e-4 decades for barriers of 15 kT and more, against the
+// margin's 0.004-decade window). Newton steps aim at the root of the
+// estimated margin shifted 5/8 of the tolerance into the acceptable side
+// (approachRoot, which stops within about 1/8 of the tolerance of that
+// aim); the point is checked by the quadrature: it is the answer when its
+// exact margin is >= 0 and within the tolerance of the root (by the local
+// slope); otherwise the gap is renewed there and the search repeated. A few
+// rounds without an answer fall back to Newton steps on the exact margin.
+func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
+	c := cs.Cond
+	floor := ionicStrengthFloor(cs)
+	kT := physics.Boltzmann * c.StorageTempK
+	top := c.IonicStrength
+	if !cs.HasBarrier && cs.Pair.StericThickness == 0 {
+		// No barrier at the present ionic strength: the margin has no slope
+		// there, so the search starts where the barrier meets its criterion.
+		// With steric layers the margin is the contact energy there, which
+		// has a slope, and the layers may shield the pair above that point.
+		I, ok := physics.CriticalIonicStrength(cs.Pair, c.Criteria.MinBarrierKT*kT, cs.LastBarrier)
+		switch {
+		case !ok && I == 0:
+			return 0, false
+		case ok && I < top:
+			top = I
+		}
+	}
+	if top < floor {
+		return 0, false
+	}
+	lo, hi := math.Log10(floor), math.Log10(top)
+	a := peakAnchor{cs: cs}
+	exact := func(logI float64) (float64, float64) { return a.exact(cs.withIonicStrength(math.Pow(10, logI))) }
+	aimed := func(logI float64) (float64, float64) {
+		m, slope := a.estimated(cs.withIonicStrength(math.Pow(10, logI)))
+		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
+	}
+	x := hi
+search:
+	for round := 0; round < 3; round++ {
+		next, found := approachRoot(secantRefined(aimed), x, lo, hi, ionicStrengthTol/8)
+		if !found {
+			break search // no estimated root, or no estimate: the exact search decides
+		}
+		x = next
+		m, slope := exact(x)
+		switch {
+		case m >= 0 && x == hi:
+			return top, true
+		case m >= 0 && m < -slope*ionicStrengthTol:
+			return math.Pow(10, x), true
+		case math.IsNaN(m):
+			break search
+		}
+	}
+	hold, fail, ok := physics.FindRootNewton(secantRefined(exact), x, lo, hi, -1, 1, ionicStrengthTol)
+	switch {
+	case ok:
+		return math.Pow(10, hold), true
+	case math.IsNaN(fail):
+		return top, true // acceptable at the barrier criterion's own answer
+	}
+	return 0, false
+}
+
+// approachRoot takes Newton steps, at most a decade each and kept within
+// [lo, hi], on a decreasing margin f from x. It returns the first point
+// whose Newton step to the root is shorter than tol, or the point one step
+// on when the step after that, predicted from the contraction of the last
+// two full (unclamped) steps (Newton's quadratic convergence: the next step
+// is about step^3/previous^2; optimistic for secant slopes, which is why
+// the caller checks), is shorter than tol; or hi when f >= 0 there. found
+// is false at a NaN, a slope that is not negative, a step stopped by lo,
+// or after 12 steps: the caller's checked search then decides. Unlike
+// physics.FindRootNewton it does not close a bracket: the point it returns
+// is checked by the quadrature anyway.
+func approachRoot(f func(float64) (float64, float64), x, lo, hi, tol float64) (root float64, found bool) {
+	previous := 0.0 // the last Newton step, when it was taken in full
+	for range 12 {
+		m, slope := f(x)
+		step := -m / slope
+		switch {
+		case math.IsNaN(m):
+			return x, false
+		case m >= 0 && x == hi:
+			return x, true
+		case !(slope < 0):
+			return x, false
+		case math.Abs(step) < tol:
+			return x, true
+		}
+		next := min(max(x+max(min(step, 1), -1), lo), hi)
+		if next == x {
+			return x, false
+		}
+		unclamped := next == x+step
+		if a := math.Abs(step); unclamped && previous != 0 && a < math.Abs(previous)/2 && a*a*a/(previous*previous) < tol {
+			return next, true
+		}
+		previous = 0 // a clamped step says nothing of the convergence
+		if unclamped {
+			previous = step
+		}
+		x = next
+	}
+	return x, false
+}
+
+// secantRefined wraps a margin and its envelope-theorem slope for
+// approachRoot and physics.FindRootNewton: from the second point on, the
+// secant through the last two points, which also carries the prefactor of
+// W, replaces the slope when it has the expected (negative) sign.
+func secantRefined(f func(float64) (float64, float64)) func(float64) (float64, float64) {
+	lastX, lastF := math.NaN(), math.NaN()
+	return func(x float64) (float64, float64) {
+		v, slope := f(x)
+		if secant := (v - lastF) / (x - lastX); secant < 0 {
+			slope = secant
+		}
+		lastX, lastF = x, v
+		return v, slope
+	}
+}
+
+func solveIonicStrength(cs *Case) (Target, string, bool) {
+	if !cs.HasPair {
+		return Target{}, "no surface potential known", false
+	}
+	I, ok := largestAcceptableIonicStrength(cs)
+	if !ok {
+		return Target{}, stabilityCriterion(cs) + ": not reached even at the lowest ionic strength", false
+	}
+	return Target{"medium.ionic_strength_mM", "<=", I, "mM"}, stabilityCriterion(cs), true
+}
+
+func solveSurfaceCharge(cs *Case) (Target, string, bool) {
+	psi, ok := smallestAcceptablePotential(cs)
+	if !ok {
+		return Target{}, stabilityCriterion(cs) + ": not reached below 200 mV at this ionic strength", false
+	}
+	return Target{"|particles.zeta_mV|", ">=", psi * 1e3, "mV"}, stabilityCriterion(cs), true
+}
+
+// smallestAcceptablePotential solves stabilityMargin = 0 on |psi| between
+// the present potential and 200 mV, keeping the sign of the surface.
+// The answer is kept for the rest of the triage: raise_surface_charge and
+// move_ph_from_iep both need it.
+func smallestAcceptablePotential(cs *Case) (float64, bool) {
+	if m := &cs.acceptablePotential; !m.done && cs.HasPair {
+		sign := -1.0 // as potentialWhere: the surface keeps its sign
+		if cs.Pair.Potential > 0 {
+			sign = 1
+		}
+		withPotential := func(psi float64) physics.Pair {
+			p := cs.Pair
+			p.Potential = sign * psi
+			return p
+		}
+		solve := func(margin func(psi float64) float64) (float64, bool) {
+			return potentialWhere(cs, func(p physics.Pair) float64 { return margin(math.Abs(p.Potential)) })
+		}
+		m.psi, m.ok = anchoredRoot(cs, withPotential, solve, potentialTol)
+		m.done = true
+	}
+	return cs.acceptablePotential.psi, cs.acceptablePotential.ok
+}
+
+// potentialWhere finds the smallest |psi| in [0, 200 mV] at which margin, a
+// function growing with |psi|, reaches zero; the surface keeps its sign.
+func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, bool) {
+	if !cs.HasPair {
+		return 0, false
+	}
+	sign := -1.0
+	if cs.Pair.Potential > 0 {
+		sign = 1
+	}
+	at := func(psi float64) float64 {
+		p := cs.Pair
+		p.Potential = sign * psi
+		return margin(p)
+	}
+	// Bracket from the present potential by steps of 1.5 before iterating,
+	// so that few margins are evaluated far from the answer.
+	const top, bottom = 0.2, 0.002
+	start := math.Min(math.Max(math.Abs(cs.Pair.Potential), 2*bottom), top)
+	lo, hi := start, start
+	mLo := at(start)
+	mHi := mLo
+	if mLo >= 0 {
+		for {
+			if lo /= 1.5; lo <= bottom {
+				lo, mLo = 0, at(0)
+				break
+			}
+			if mLo = at(lo); mLo < 0 {
+				break
+			}
+			hi, mHi = lo, mLo
+		}
+	} else {
+		for {
+			if hi = math.Min(lo*1.5, top); hi == lo {
+				return 0, false // not reached at the top
+			}
+			if mHi = at(hi); mHi >= 0 {
+				break
+			}
+			lo, mLo = hi, mHi
+		}
+	}
+	return physics.FindRootFrom(at, lo, hi, mLo, mHi, potentialTol)
+}
+
+// potentialTol is the accuracy of potential targets, V.
+const potentialTol = 1e-5
+
+// solvePH finds the pH at which the surface-potential estimate reaches the
+// needed potential, anchored to the measured zeta at the present pH when
+// there is one (the estimate's shape, the measurement's scale).
+func solvePH(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	if math.IsNaN(c.IsoelectricPH) {
+		return Target{}, "isoelectric point unknown", false
+	}
+	psi, ok := smallestAcceptablePotential(cs)
+	if !ok {
+		return Target{}, stabilityCriterion(cs) + ": not reachable by pH alone at this ionic strength", false
+	}
+	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
+	if c.ZetaSource != "estimated" && !math.IsNaN(c.PH) {
+		if model := physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK); model*c.Zeta > 0 {
+			scale = c.Zeta / model
+			anchor = "; pH estimate model scaled to the measured zeta at the present pH"
+		}
+	}
+	above := math.IsNaN(c.PH) || c.PH >= c.IsoelectricPH
+	lo, hi, op := c.IsoelectricPH, 14.0, ">="
+	if !above {
+		lo, hi, op = 0, c.IsoelectricPH, "<="
+	}
+	f := func(ph float64) float64 {
+		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.IsoelectricPH, c.StorageTempK)) - psi
+	}
+	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
+	if !ok {
+		return Target{}, stabilityCriterion(cs) + ": the needed potential is not reached between pH 0 and 14" + anchor, false
+	}
+	return Target{"medium.ph", op, ph, "pH"}, stabilityCriterion(cs) + anchor, true
+}
+
+// multivalentTol is the relative accuracy of the multivalent-salt target.
+const multivalentTol = 1e-4
+
+func solveMultivalent(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	if c.MultivalentSalt == "" || !cs.HasPair {
+		return Target{}, "no multivalent salt stated", false
+	}
+	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
+	withConc := func(conc float64) physics.Pair {
+		return cs.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+	}
+	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
+	conc := c.MultivalentConc
+	a := peakAnchor{cs: cs}
+	if m, _ := a.estimated(withConc(conc)); m >= 0 {
+		if m, _ = a.exact(withConc(conc)); m >= 0 {
+			return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+		}
+	}
+	reached := true
+	solve := func(margin func(conc float64) float64) (float64, bool) {
+		without := margin(0)
+		if reached = without >= 0; !reached {
+			return 0, false
+		}
+		present := margin(conc)
+		if present >= 0 {
+			return conc, true // the present concentration is acceptable
+		}
+		return physics.FindRootFrom(margin, 0, conc, without, present, multivalentTol*c.MultivalentConc)
+	}
+	conc, ok := anchoredRoot(cs, withConc, solve, -multivalentTol*c.MultivalentConc)
+	conc = math.Max(conc, 0) // a root within the tolerance of none at all
+	switch {
+	case !reached:
+		return Target{}, crit + ": not reached even without the multivalent salt", false
+	case !ok:
+		return Target{}, crit, false
+	}
+	return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+}
+
+// looseFlocBarrierKT is the barrier below which particles join loose flocs
+// within days rather than years: a few kT (common practice of controlled
+// flocculation, where zeta is brought near zero by flocculating ions).
+const looseFlocBarrierKT = 5.0
+
+func solveControlledFlocculation(cs *Case) (Target, string, bool) {
+	kT := physics.Boltzmann * cs.Cond.StorageTempK
+	// Each barrier is searched from the last one found (Pair.BarrierNear, as
+	// in stabilityMarginSlope): the maximum reached from there, which for a
+	// curve with two maxima need not be Pair.Barrier's highest.
+	near := cs.LastBarrier
+	psi, ok := potentialWhere(cs, func(p physics.Pair) float64 {
+		if b := p.BarrierNear(near); b.Found {
+			near = b.Separation
+			return b.Energy/kT - looseFlocBarrierKT
+		}
+		return -looseFlocBarrierKT
+	})
+	crit := fmt.Sprintf("energy barrier <= %g kT so that particles join loose flocs; bring zeta down with flocculating ions, then confirm by sedimentation volume and redispersion", looseFlocBarrierKT)
+	if !ok {
+		return Target{}, crit + ": no surface potential known or the barrier stays high", false
+	}
+	return Target{"|particles.zeta_mV|", "<=", psi * 1e3, "mV"}, crit, true
+}

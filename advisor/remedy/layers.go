@@ -1,0 +1,154 @@
+package remedy
+
+import (
+	"fmt"
+	"math"
+
+	"colloidtriage/advisor/number"
+	"colloidtriage/physics"
+)
+
+// cloudPointMarginK keeps storage this far below a stabiliser's cloud point
+// (common practice: the layer already thins a few kelvin below it).
+const cloudPointMarginK = 10.0
+
+func stericCriterion(cs *Case) string {
+	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(cs.Cond.Criteria.MaxStericKT) + " kT"
+}
+
+// thickestAdsorbedLayer is about the largest thickness adsorbed polymer or
+// surfactant layers reach (2-20 nm typical, 50 nm for long block
+// copolymers; common practice, cf. Napper 1983).
+const thickestAdsorbedLayer = 50e-9
+
+func solveStericThickness(cs *Case) (Target, string, bool) {
+	d := physics.MinimumStericThickness(cs.VanDerWaalsOnly.EnergyCurve(), cs.Cond.StorageTempK, cs.Cond.Criteria.MaxStericKT)
+	crit := stericCriterion(cs) + "; the layer must stay in good solvent"
+	if d > thickestAdsorbedLayer {
+		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", thickestAdsorbedLayer*1e9)
+	}
+	return Target{"stabilizer.layer_thickness_nm", ">=", d * 1e9, "nm"}, crit, true
+}
+
+func solveEmulsifierLayer(cs *Case) (Target, string, bool) {
+	t, crit, ok := solveStericThickness(cs)
+	return t, crit + "; full coverage of the interface by the emulsifier", ok
+}
+
+func solveSolventQuality(cs *Case) (Target, string, bool) {
+	return Target{"stabilizer.flory_huggins_chi", "<", 0.5, "1"},
+		"better than theta solvent for the stabiliser chains (Napper 1983)", true
+}
+
+// depletionOnsetKT is the depth of a depletion well at which flocculation
+// is usually seen, a few kT (common practice; cf. Vrij 1976, Pure Appl.
+// Chem. 48:471).
+const depletionOnsetKT = 2.0
+
+func solveFreePolymer(cs *Case) (Target, string, bool) {
+	well, ok := cs.Reported("depletion_well")
+	if !ok || well >= 0 {
+		return Target{}, "no depletion well computed", false
+	}
+	// The Asakura-Oosawa energy is proportional to the polymer number density.
+	conc := cs.Cond.FreePolymer.Concentration * depletionOnsetKT / math.Abs(well)
+	return Target{"medium.free_polymer.concentration_g_L", "<=", conc, "g/L"},
+		fmt.Sprintf("depletion well at contact no deeper than %g kT (Asakura-Oosawa)", depletionOnsetKT), true
+}
+
+func solvePolymerDose(cs *Case) (Target, string, bool) {
+	return Target{"stabilizer.adsorbing_polymer.surface_coverage", ">=", physics.BridgingMaxCoverage, "1"},
+		"near-complete coverage leaves no bare surface for bridges (La Mer & Healy 1963)", true
+}
+
+func solveRipeningInhibitor(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	rate, ok := cs.Reported("ostwald_ripening_rate")
+	if !ok || rate <= 0 {
+		return Target{}, "no ripening rate computed", false
+	}
+	// LSW rate is proportional to the solubility of the dispersed phase.
+	allowed := 7 * c.Radius * c.Radius * c.Radius / c.ShelfLife * 1e27
+	return Target{"particles.solubility_mol_m3", "<=", c.Droplet.Solubility * allowed / rate, "mol/m^3"},
+		"time to double the diameter by LSW ripening >= shelf life; an inhibitor lowers the effective solubility (Kabalnov 2001)", true
+}
+
+func viscosityCriterion(cs *Case) string {
+	return fmt.Sprintf("relative viscosity <= %g (Krieger-Dougherty on the effective volume fraction)", cs.Cond.Criteria.MaxRelViscosity)
+}
+
+func solveVolumeFraction(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	phiMax := cs.Facts.Number("max_packing_fraction")
+	phiEff := cs.Facts.Number("effective_volume_fraction")
+	if math.IsNaN(phiMax) || phiEff <= 0 {
+		return Target{}, viscosityCriterion(cs), false
+	}
+	effMax := physics.MaxVolumeFractionForViscosity(c.Criteria.MaxRelViscosity, phiMax, physics.DefaultIntrinsicViscosity)
+	return Target{"particles.volume_fraction", "<=", effMax * c.VolumeFraction / phiEff, "1"}, viscosityCriterion(cs), true
+}
+
+// solveSizeSpan finds the maximum packing fraction the viscosity criterion
+// needs, then the log-normal span whose packing reaches it.
+func solveSizeSpan(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	phiEff := cs.Facts.Number("effective_volume_fraction")
+	crit := viscosityCriterion(cs) + ", by a wider log-normal distribution"
+	kd := func(phim float64) float64 {
+		return physics.KriegerDougherty(phiEff, phim, physics.DefaultIntrinsicViscosity) - c.Criteria.MaxRelViscosity
+	}
+	top := physics.MaxPackingCap * 0.999
+	if math.IsNaN(phiEff) || phiEff >= top || kd(top) > 0 {
+		return Target{}, crit + ": not reachable by packing alone", false
+	}
+	lo := math.Max(phiEff*1.0001, physics.RandomClosePacking*0.5)
+	need := top
+	if kd(lo) <= 0 {
+		need = lo
+	} else if x, ok := physics.FindRoot(kd, lo, top, 1e-5); ok {
+		need = x
+	}
+	packing := func(span float64) float64 {
+		classes, err := physics.LogNormalFromSpan(2*c.Radius, span, physics.DefaultLogNormalClasses)
+		if err != nil {
+			return math.NaN()
+		}
+		return physics.MaxPackingPolydisperse(classes) - need
+	}
+	if packing(0) >= 0 {
+		return Target{"particles.size_span", ">=", 0, "1"}, crit, true
+	}
+	span, ok := physics.FindRoot(packing, 0, 5, 1e-3)
+	if !ok {
+		return Target{}, crit + ": needs a span above 5", false
+	}
+	return Target{"particles.size_span", ">=", span, "1"}, crit, true
+}
+
+func solveStorageTemperature(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	if math.IsNaN(c.Steric.CloudK) {
+		return Target{}, "no cloud point stated", false
+	}
+	return Target{"storage.temperature_c", "<=", c.Steric.CloudK - physics.CelsiusZero - cloudPointMarginK, "degC"},
+		fmt.Sprintf("storage at least %g K below the stabiliser's cloud point", cloudPointMarginK), true
+}
+
+// solveProcessShear keeps shear-driven collisions no more frequent than
+// Brownian ones and, when there is a barrier, the work of shear across one
+// Debye length below the barrier height.
+func solveProcessShear(cs *Case) (Target, string, bool) {
+	c := cs.Cond
+	kT := physics.Boltzmann * c.StorageTempK
+	d := 2 * c.Radius
+	g := 2 * kT / (c.Liquid.Viscosity * d * d * d)
+	crit := "orthokinetic over perikinetic collision rate <= 1"
+	if b, ok := cs.Reported("energy_barrier"); ok && b > 0 && cs.Pair.Kappa > 0 {
+		width := 1 / math.Max(cs.Pair.Kappa, 1/c.Radius)
+		byBarrier := b * kT / (6 * math.Pi * c.Liquid.Viscosity * c.Radius * c.Radius * width)
+		if byBarrier > g {
+			g, crit = byBarrier, "work of shear across one Debye length below the energy barrier"
+		}
+	}
+	return Target{"storage.shear_rate_per_s", "<=", g, "1/s"}, crit, true
+}
