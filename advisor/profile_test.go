@@ -25,7 +25,7 @@ func ptr[T any](v T) *T { return &v }
 
 func relErr(got, want float64) float64 { return math.Abs(got-want) / math.Abs(want) }
 
-// referenceSample is the REFERENCES.md interaction case: a = 100 nm,
+// referenceSample is the testdata/reference/REFERENCES.md interaction case: a = 100 nm,
 // A = 1e-20 J, psi = -25 mV, 1 mM NaCl, 25 degC, with the relative
 // permittivity 78.4 that the reference values use.
 func referenceSample(diameterNm, zetaMV, saltMM float64) *input.Sample {
@@ -60,11 +60,12 @@ func TestProfileReferenceValues(t *testing.T) {
 	}
 	vdw := func(p advisor.ProfilePoint) float64 { return p.VanDerWaalsKT }
 	edl := func(p advisor.ProfilePoint) float64 { return p.DoubleLayerKT }
-	// van der Waals: REFERENCES.md [calc], Hamaker (1937) exact sphere-sphere,
+	// van der Waals: testdata/reference/REFERENCES.md [calc], Hamaker (1937) exact sphere-sphere,
 	// -18.53, -8.68, -2.96, -1.20 kT; testdata/reference/interaction.txt
 	// (interaction.py, scipy) gives the digits used here.
 	// Double layer: interaction.txt [calc], linear superposition with
-	// kappa a = 10.40 (REFERENCES.md's own LSA values carry a 5 % kappa
+	// kappa a = 10.40 (the superseded LSA hand values in
+	// testdata/reference/REFERENCES.md carry a 5 % kappa
 	// error, see physics/doublelayer_test.go).
 	tests := []struct {
 		name string
@@ -90,8 +91,9 @@ func TestProfileReferenceValues(t *testing.T) {
 
 	// Barrier and secondary minimum: interaction.txt [calc] (400-point scan
 	// and scipy bounded Brent on the same published formulas): 43.080083 kT
-	// at 1.892821 nm, minimum -0.013067509 kT at 90.616711 nm. REFERENCES.md's
-	// 42.59 kT at 1.85 nm inherits its kappa error (1.1 % low).
+	// at 1.892821 nm, minimum -0.013067509 kT at 90.616711 nm. The superseded hand values in
+	// testdata/reference/REFERENCES.md,
+	// 42.59 kT at 1.85 nm, inherit the kappa error (1.1 % low).
 	extrema := []struct {
 		name           string
 		got            *advisor.ProfileExtremum
@@ -292,7 +294,7 @@ func TestProfileStericWall(t *testing.T) {
 }
 
 // TestProfileWithoutElectrolyte: a non-aqueous liquid without salt has no
-// double layer (DESIGN.md section 3): the curve is van der Waals alone.
+// double layer: the curve is van der Waals alone.
 func TestProfileWithoutElectrolyte(t *testing.T) {
 	t.Parallel()
 	s := referenceSample(200, -40, 0)

@@ -22,7 +22,7 @@ import (
 )
 
 // Bad and extreme input against the HTTP routes (issue 7). The contract
-// (DESIGN.md §7): bad input gets a 4xx application/problem+json with a
+// (openapi/openapi.yaml): bad input gets a 4xx application/problem+json with a
 // title, field errors name the field as a JSON pointer (RFC 6901), range
 // errors carry the unit and the valid range, and nothing is ever a 5xx.
 

@@ -14,7 +14,7 @@ import (
 	"colloidtriage/physics"
 )
 
-// profileSample is the REFERENCES.md interaction case (a = 100 nm,
+// profileSample is the testdata/reference/REFERENCES.md interaction case (a = 100 nm,
 // A = 1e-20 J, -25 mV, 1 mM NaCl, 25 degC) with the permittivity 78.4 of
 // its reference values, and no symptom.
 const profileSample = `{"sample_id": "ref-dlvo",
@@ -71,8 +71,9 @@ func TestProfileJSON(t *testing.T) {
 	}
 	// [calc] testdata/reference/interaction.txt (interaction.py, scipy):
 	// barrier 43.080083 kT at 1.892821 nm, secondary minimum -0.013067509 kT
-	// at 90.616711 nm. REFERENCES.md's 42.59 kT at 1.85 nm carries the 5 %
-	// kappa error of its LSA values (see physics/doublelayer_test.go).
+	// at 90.616711 nm. The superseded hand values in
+	// testdata/reference/REFERENCES.md, 42.59 kT at 1.85 nm, carry the 5 %
+	// kappa error of the superseded LSA values (see physics/doublelayer_test.go).
 	extrema := []struct {
 		name           string
 		got            *advisor.ProfileExtremum
@@ -218,7 +219,7 @@ func TestProfileSVG(t *testing.T) {
 }
 
 // TestProfileSVGDeterministic: identical input gives byte-identical charts
-// (DESIGN.md section 4).
+// (like every response, given the same rule set).
 func TestProfileSVGDeterministic(t *testing.T) {
 	t.Parallel()
 	h := testServer(t)

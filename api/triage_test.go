@@ -220,7 +220,7 @@ func TestScalesWithoutSymptom(t *testing.T) {
 	if err := json.Unmarshal(rec.Body.Bytes(), &out); err != nil {
 		t.Fatal(err)
 	}
-	// Debye length of 10 mM NaCl at 25 C: 3.04 nm (REFERENCES.md [calc]).
+	// Debye length of 10 mM NaCl at 25 C: 3.04 nm (testdata/reference/REFERENCES.md [calc]).
 	if d := out.Scales["debye_length"].Value; math.Abs(d-3.04) > 0.01 {
 		t.Errorf("debye_length %v, want 3.04 nm", d)
 	}

@@ -6,7 +6,7 @@ import (
 )
 
 // TestBarrierNearAgreesWithBarrier: the warm-started search finds the same
-// maximum as the full scan, from hints near and far (the REFERENCES.md pair,
+// maximum as the full scan, from hints near and far (the testdata/reference/REFERENCES.md pair,
 // a = 100 nm, A = 1e-20 J, -25 mV, at several 1:1 ionic strengths).
 func TestBarrierNearAgreesWithBarrier(t *testing.T) {
 	t.Parallel()

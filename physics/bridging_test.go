@@ -78,7 +78,7 @@ func TestBridgingLikely(t *testing.T) {
 	// Rules of thumb documented on BridgingLikely: La Mer & Healy (1963)
 	// coverage window [pub]; molar mass above ~1e6 g/mol and coil reaching
 	// past the double-layer range [practice]. Debye length 9.6 nm is 1 mM
-	// NaCl (REFERENCES.md [calc]).
+	// NaCl (testdata/reference/REFERENCES.md [calc]).
 	rg := physics.PolymerCoilSize(5000) // 173 nm
 	cases := []struct {
 		name                       string

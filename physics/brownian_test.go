@@ -17,8 +17,8 @@ func TestStokesEinsteinDiffusion(t *testing.T) {
 		// testdata/reference/basics.py: a = 100 nm, water at 25 °C with the
 		// IAPWS viscosity 0.89002 mPa s -> 2.453667e-12 m^2/s [calc].
 		{"100 nm in water 25 °C", 100e-9, physics.WaterViscosity(298.15), 298.15, 2.453667e-12, 1e-6},
-		// Same with eta = 0.8900 mPa s -> 2.453731e-12 m^2/s [calc]; the brief's
-		// "about 2.45e-12".
+		// Same with eta = 0.8900 mPa s -> 2.453731e-12 m^2/s [calc] (the
+		// textbook figure is "about 2.45e-12", Israelachvili 2011 [memory]).
 		{"100 nm, eta 0.8900 mPa s", 100e-9, 0.89e-3, 298.15, 2.453731e-12, 1e-6},
 	}
 	for _, c := range cases {

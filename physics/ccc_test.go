@@ -10,7 +10,7 @@ func TestCCCHighPotential(t *testing.T) {
 	const tempK, epsR = 298.15, 78.5
 	// [calc] testdata/reference/interaction.py: prefactor 3.836857e-39
 	// mol/dm^3 J^2 from V = dV/dh = 0 (and scipy fsolve of the same two
-	// conditions: 383.6857, 5.995089, 0.5263178 mol/m^3); REFERENCES.md:
+	// conditions: 383.6857, 5.995089, 0.5263178 mol/m^3); testdata/reference/REFERENCES.md:
 	// 3.84e-39 gamma^4/(A^2 z^6) mol/dm^3, i.e. 0.384 M, 6.0 mM, 0.53 mM at
 	// A = 1e-19 J, gamma = 1.
 	tests := []struct {

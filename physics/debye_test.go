@@ -27,7 +27,7 @@ func TestDebyeLengthSalts(t *testing.T) {
 		formula         string
 		mM, wantNm, tol float64
 	}{
-		// REFERENCES.md, water at 25 °C [calc], three significant figures.
+		// testdata/reference/REFERENCES.md, water at 25 °C [calc], three significant figures.
 		{"NaCl", 1, 9.61, 1e-3},
 		{"NaCl", 10, 3.04, 1e-3},
 		{"NaCl", 100, 0.961, 1e-3},
@@ -60,7 +60,7 @@ func TestDebyeLengthSalts(t *testing.T) {
 
 func TestDebyeLengthPureWater(t *testing.T) {
 	t.Parallel()
-	// REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc].
+	// testdata/reference/REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc].
 	ions := physics.IonsFromPH(7)
 	tk := physics.Kelvin(25)
 	got := 1e9 / physics.DebyeKappa(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
@@ -78,7 +78,7 @@ func TestDebyePrefactorTemperature(t *testing.T) {
 	cases := []struct {
 		celsius, wantNm, tol float64
 	}{
-		// REFERENCES.md [calc]. Those three values come out 0.03-0.09 %
+		// testdata/reference/REFERENCES.md [calc]. Those three values come out 0.03-0.09 %
 		// above the Malmberg-Maryott permittivity used here, consistent
 		// with a slightly higher permittivity (IAPWS R8-97 gives about
 		// 87.9 at 0 °C against 87.74 [memory]), so the tolerance is 1e-3.

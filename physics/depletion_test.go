@@ -11,7 +11,7 @@ func TestAsakuraOosawa(t *testing.T) {
 	kT := Boltzmann * tempK
 	n := 0.1 / (4.0 / 3 * math.Pi * delta * delta * delta) // phi_p = 0.1
 	// [calc] testdata/reference/interaction.py: exact lens volume; at
-	// contact REFERENCES.md gives -1.60 kT, i.e. -n kT 2 pi delta^2 (a + 2 delta/3).
+	// contact testdata/reference/REFERENCES.md gives -1.60 kT, i.e. -n kT 2 pi delta^2 (a + 2 delta/3).
 	tests := []struct {
 		h, wantKT, tol float64
 	}{

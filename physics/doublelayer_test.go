@@ -20,10 +20,11 @@ func TestEDLReferenceValues(t *testing.T) {
 	kT := Boltzmann * tempK
 	kappa := DebyeKappa(1, epsR, tempK) // 1 mM 1:1, kappa a = 10.40
 	// [calc] testdata/reference/interaction.py: linear superposition and
-	// Hogg–Healy–Fuerstenau with the same kappa. REFERENCES.md's HHF values
-	// 42.55, 30.90, 20.04 kT agree; its LSA values 57.12, 36.94, 21.44 kT
+	// Hogg–Healy–Fuerstenau with the same kappa. The HHF hand values in
+	// testdata/reference/REFERENCES.md,
+	// 42.55, 30.90, 20.04 kT, agree; its superseded LSA values 57.12, 36.94, 21.44 kT
 	// do not: they follow exp(-1.09e8 h), a kappa 5 % above the
-	// 1.0402e8 1/m that its own kappa a = 10.40 states.
+	// 1.0402e8 1/m that kappa a = 10.40 implies.
 	tests := []struct {
 		h, lsaKT, hhfKT float64
 	}{
@@ -51,7 +52,7 @@ func TestEDLLimits(t *testing.T) {
 	const a, epsR, tempK = 100e-9, 78.4, 298.15
 	kappa := DebyeKappa(1, epsR, tempK)
 	kT := Boltzmann * tempK
-	// Without electrolyte there is no double layer (DESIGN.md §3).
+	// Without electrolyte there is no double layer.
 	if got := edlOf(a, 1e-9, -0.05, 0, epsR, tempK, 1, false); got != 0 {
 		t.Errorf("LSA kappa = 0: got %g, want 0", got)
 	}

@@ -25,7 +25,7 @@ func TestHamakerTaborWinterton(t *testing.T) {
 		{"hexadecane across water, Walstra", HamakerTaborWinterton(2.05, 1.434, 80, 1.333, tempK), 5.4e-21, 0.05},
 		// [pub] Walstra Table 12.2, polystyrene across water 9e-21 J: the simple
 		// estimate runs high for it (1.55e-20 with n = 1.557); methods differ
-		// by up to several-fold (REFERENCES.md), so a factor of two.
+		// by up to several-fold (testdata/reference/REFERENCES.md), so a factor of two.
 		{"PS across water, Walstra", HamakerTaborWinterton(2.55, 1.557, 80, 1.333, tempK), 9e-21, 1.0},
 	}
 	for _, tt := range tests {

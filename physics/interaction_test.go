@@ -8,7 +8,7 @@ import (
 
 const interactionTempK = 298.15
 
-// dlvoPair is the REFERENCES.md test pair: a = 100 nm, A = 1e-20 J, water
+// dlvoPair is the testdata/reference/REFERENCES.md test pair: a = 100 nm, A = 1e-20 J, water
 // epsr 78.4 at 25 °C, 1:1 electrolyte of ionic strength ionic (mol/m^3).
 func dlvoPair(psi, ionic float64) Pair {
 	return Pair{Radius: 100e-9, Hamaker: 1e-20, Potential: psi, EpsR: 78.4, TempK: interactionTempK, Valence: 1}.
@@ -55,9 +55,10 @@ func TestPairExtrema(t *testing.T) {
 	kT := Boltzmann * interactionTempK
 	// [calc] testdata/reference/interaction.py: 400-point scan and scipy
 	// bounded Brent for the barrier, 2000-point scan and bounded Brent for
-	// the secondary minimum, on the same published formulas. REFERENCES.md's
+	// the secondary minimum, on the same published formulas. The superseded hand values in
+	// testdata/reference/REFERENCES.md,
 	// Vmax 42.59 kT at 1.85 nm (-25 mV, 1 mM) and 27.45 kT (10 mM) and 3.49 kT
-	// (-15 mV) inherit the 5 % kappa error of its LSA values; the careful
+	// (-15 mV) inherit the 5 % kappa error of the superseded LSA values; the careful
 	// calculation gives 43.08, 27.70 and 3.616 kT.
 	for _, tt := range referencePairs {
 		b, m := tt.pair.Extrema()

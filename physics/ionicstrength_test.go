@@ -9,7 +9,7 @@ import (
 
 func TestIonsFromPH(t *testing.T) {
 	t.Parallel()
-	// Kw = 1e-14 at 25 °C (Marshall & Franck 1981) [pub]; REFERENCES.md uses
+	// Kw = 1e-14 at 25 °C (Marshall & Franck 1981) [pub]; testdata/reference/REFERENCES.md uses
 	// I = 1e-7 M (1e-4 mol/m^3) for pure water.
 	cases := []struct {
 		pH, wantH, wantOH, wantI float64

@@ -9,7 +9,7 @@ func TestAggregationKinetics(t *testing.T) {
 	t.Parallel()
 	const eta, tempK = 0.89e-3, 298.15
 	n0 := NumberDensity(0.1, 0.5e-6)
-	// [calc] testdata/reference/interaction.py; REFERENCES.md: half-life
+	// [calc] testdata/reference/interaction.py; testdata/reference/REFERENCES.md: half-life
 	// 1.62e17 W/N0 s (the inverse of the number-loss constant 6.17e-18
 	// m^3/s), 0.85 s at a = 0.5 um and phi = 0.1, ortho/peri 10.8.
 	tests := []struct {

@@ -10,7 +10,7 @@ import (
 
 func TestSuspensionViscosityAtPhi03(t *testing.T) {
 	t.Parallel()
-	// REFERENCES.md, phi = 0.3 [calc]: Krieger–Dougherty (0.64) 2.751;
+	// testdata/reference/REFERENCES.md, phi = 0.3 [calc]: Krieger–Dougherty (0.64) 2.751;
 	// (0.71) 2.650; six digits from testdata/reference/beyond_dlvo.py.
 	const phi = 0.3
 	cases := []struct {

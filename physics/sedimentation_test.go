@@ -16,8 +16,8 @@ func TestStokesVelocity(t *testing.T) {
 		radius, deltaRho, eta, want float64
 		tol                         float64
 	}{
-		// REFERENCES.md: a = 0.5 µm, drho = 1000 kg/m^3, water at 25 °C -> 6.12e-7 m/s [calc].
-		{"REFERENCES.md", 0.5e-6, 1000, eta25, 6.12e-7, 1e-3},
+		// testdata/reference/REFERENCES.md: a = 0.5 µm, drho = 1000 kg/m^3, water at 25 °C -> 6.12e-7 m/s [calc].
+		{"testdata/reference/REFERENCES.md", 0.5e-6, 1000, eta25, 6.12e-7, 1e-3},
 		// testdata/reference/basics.py, same case [calc] with scipy constants.
 		{"basics.py", 0.5e-6, 1000, eta25, 6.121344e-7, 1e-6},
 		// McClements, Food Emulsions (CRC), ch. 7: r = 1 µm, oil 910 in water 1000
@@ -65,7 +65,7 @@ func TestParticleReynolds(t *testing.T) {
 	tk := physics.Kelvin(25)
 	rho, eta := physics.WaterDensity(tk), physics.WaterViscosity(tk)
 	// testdata/reference/basics.py [calc]: d = 1 µm at the Stokes velocity of
-	// the REFERENCES.md case, water at 25 °C.
+	// the testdata/reference/REFERENCES.md case, water at 25 °C.
 	if got, want := physics.ParticleReynolds(1e-6, -6.121344e-7, rho, eta), 6.857410e-7; basicsRelErr(got, want) > 1e-5 {
 		t.Errorf("ParticleReynolds = %.6e, want %.6e", got, want)
 	}
@@ -89,8 +89,8 @@ func TestGravitationalLength(t *testing.T) {
 		radius, deltaRho, want float64
 		tol                    float64
 	}{
-		// REFERENCES.md: a = 50 nm, drho = 1000 -> 0.80 mm [calc].
-		{"REFERENCES.md", 50e-9, 1000, 0.80e-3, 0.01},
+		// testdata/reference/REFERENCES.md: a = 50 nm, drho = 1000 -> 0.80 mm [calc].
+		{"testdata/reference/REFERENCES.md", 50e-9, 1000, 0.80e-3, 0.01},
 		// testdata/reference/basics.py [calc].
 		{"basics.py", 50e-9, 1000, 8.016758e-4, 1e-6},
 		{"creaming has the same length", 50e-9, -1000, 8.016758e-4, 1e-6},
@@ -167,7 +167,7 @@ func TestQuantumDiameter(t *testing.T) {
 
 func TestSettlingTime(t *testing.T) {
 	t.Parallel()
-	// 0.1 m at the REFERENCES.md Stokes velocity 6.121344e-7 m/s: 1.633628e5 s
+	// 0.1 m at the testdata/reference/REFERENCES.md Stokes velocity 6.121344e-7 m/s: 1.633628e5 s
 	// (basics.py [calc]).
 	cases := []struct {
 		height, speed, want, tol float64

@@ -13,9 +13,10 @@ func TestLog10StabilityRatio(t *testing.T) {
 	// [calc] testdata/reference/interaction.py: Fuchs 1934 integral (Honig
 	// 1971 factor or none) by a 400001-point trapezoid in ln h below u = 2
 	// (converged: 100001 points agree to 1e-6) and scipy's adaptive quad
-	// beyond, on the same published pair energies. REFERENCES.md quotes
+	// beyond, on the same published pair energies. The reference notes
+	// (testdata/reference/REFERENCES.md) keep the superseded
 	// W 1.7e16 / 4.8e17 (-25 mV, 1 mM), 2.4e9 / 1.0e11 (-25 mV, 10 mM),
-	// 1.26 / 9.05 (-15 mV, 10 mM) with its 5 %-high kappa; the careful values
+	// 1.26 / 9.05 (-15 mV, 10 mM), from a 5 %-high kappa; the careful values
 	// are 2.8e16 / 7.9e17, 3.1e9 / 1.35e11, 1.31 / 9.99. Its no-repulsion
 	// values 0.911 / 1.72 agree.
 	for _, tt := range referencePairs {

@@ -57,7 +57,7 @@ func TestSolventQualityFromChi(t *testing.T) {
 
 func TestParseSolventQuality(t *testing.T) {
 	t.Parallel()
-	// The request vocabulary of DESIGN.md section 3.
+	// The request vocabulary (solvent_quality in openapi/openapi.yaml).
 	for _, q := range []physics.SolventQuality{physics.GoodSolvent, physics.ThetaSolvent, physics.PoorSolvent} {
 		got, err := physics.ParseSolventQuality(q.String())
 		if err != nil || got != q {
@@ -128,7 +128,7 @@ func TestMinimumStericThicknessDerjaguin(t *testing.T) {
 
 func TestMinimumStericThicknessHamaker(t *testing.T) {
 	t.Parallel()
-	// The test's Hamaker function against REFERENCES.md [calc], a = 100 nm,
+	// The test's Hamaker function against testdata/reference/REFERENCES.md [calc], a = 100 nm,
 	// A = 1e-20 J: -18.53, -8.68, -2.96, -1.20 kT at 1, 2, 5, 10 nm.
 	vdw := beyondHamakerSpheres(1e-20, 100e-9)
 	for _, c := range []struct{ h, wantKT float64 }{{1e-9, -18.53}, {2e-9, -8.68}, {5e-9, -2.96}, {10e-9, -1.20}} {
@@ -154,7 +154,7 @@ func TestMinimumStericThicknessHamaker(t *testing.T) {
 				c.hamaker, c.radius, c.allowed, got, c.want, e)
 		}
 	}
-	// REFERENCES.md: "5–10 nm is the usual minimum" [practice], for a
+	// testdata/reference/REFERENCES.md: a 5-10 nm layer is the usual minimum [practice], for a
 	// sub-micrometre particle with a typical Hamaker constant.
 	for _, allowed := range []float64{1, 0.5} {
 		got := physics.MinimumStericThickness(vdw, 298.15, allowed)

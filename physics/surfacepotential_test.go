@@ -45,7 +45,7 @@ func TestSurfacePotentialFromPH(t *testing.T) {
 	if e := interactionRelErr(slope, nernst/4); e > 1e-6 {
 		t.Errorf("slope at the IEP %g V/pH, want %g (Nernst/4)", slope, nernst/4)
 	}
-	// [practice] REFERENCES.md: |zeta| > 30 mV is the usual stability line and
+	// [practice] testdata/reference/REFERENCES.md: |zeta| > 30 mV is the usual stability line and
 	// dispersions within about 2 pH units of the IEP are mostly unstable; the
 	// estimate crosses 30 mV within half a pH unit of that distance.
 	// [calc] testdata/reference/interaction.py: 4kT/e tanh(ln10 * 2/16) =

@@ -17,7 +17,7 @@ func TestVdWHamaker(t *testing.T) {
 	const a, hamaker = 100e-9, 1e-20
 	kT := Boltzmann * 298.15
 	// [calc] testdata/reference/interaction.py, Hamaker 1937 exact formula;
-	// REFERENCES.md lists -18.53, -8.68, -2.96, -1.20 kT, which agree.
+	// testdata/reference/REFERENCES.md lists -18.53, -8.68, -2.96, -1.20 kT, which agree.
 	tests := []struct {
 		h, wantKT, tol float64
 	}{
@@ -71,7 +71,7 @@ func TestVdWRetardedGregory(t *testing.T) {
 	const a, hamaker = 100e-9, 1e-20
 	kT := Boltzmann * 298.15
 	// [calc] testdata/reference/interaction.py, Gregory 1981 with b = 5.32 and
-	// lambda = 100 nm; REFERENCES.md lists -17.03, -2.37, -0.885 kT.
+	// lambda = 100 nm; testdata/reference/REFERENCES.md lists -17.03, -2.37, -0.885 kT.
 	tests := []struct {
 		h, wantKT, tol float64
 	}{

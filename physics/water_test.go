@@ -16,7 +16,7 @@ func TestWaterViscosity(t *testing.T) {
 	cases := []struct {
 		celsius, wantMPaS, tol float64
 	}{
-		// REFERENCES.md: IAPWS R12-08 at 0.1 MPa with Kell density, mPa s
+		// testdata/reference/REFERENCES.md: IAPWS R12-08 at 0.1 MPa with Kell density, mPa s
 		// [calc], rounded to 1e-4 mPa s; also reproduced by
 		// testdata/reference/basics.py.
 		{0, 1.7918, 1e-4},
@@ -56,7 +56,7 @@ func TestWaterDensity(t *testing.T) {
 	cases := []struct {
 		celsius, want, tol float64
 	}{
-		// REFERENCES.md: Kell 1975 polynomial, kg/m^3 [calc] (rounded to 1e-3).
+		// testdata/reference/REFERENCES.md: Kell 1975 polynomial, kg/m^3 [calc] (rounded to 1e-3).
 		{0, 999.840, 1e-6},
 		{20, 998.204, 1e-6},
 		{25, 997.045, 1e-6},
@@ -65,7 +65,7 @@ func TestWaterDensity(t *testing.T) {
 		{80, 971.798, 1e-6},
 		{100, 958.364, 1e-6},
 		// CIPM formula, Tanaka et al., Metrologia 38, 301 (2001), air-free
-		// water [memory]; REFERENCES.md: Kell agrees within about 3 ppm over 0-40 °C.
+		// water [memory]; testdata/reference/REFERENCES.md: Kell agrees within about 3 ppm over 0-40 °C.
 		{20, 998.2067, 5e-6},
 		{25, 997.0470, 5e-6},
 		// Kell 1975 extends to 150 °C at 1 atm (superheated). Steam tables
@@ -97,13 +97,13 @@ func TestWaterPermittivity(t *testing.T) {
 	}{
 		// Malmberg & Maryott 1956, 25 °C [pub].
 		{25, 78.30, 1e-4},
-		// REFERENCES.md: Malmberg & Maryott cubic [calc].
+		// testdata/reference/REFERENCES.md: Malmberg & Maryott cubic [calc].
 		{0, 87.74, 1e-4},
 		{20, 80.10, 1e-4},
 		{37, 74.15, 1e-4},
 		{100, 55.72, 1e-4},
 		// IAPWS R8-97 (Fernández et al. 1997) gives 78.41 at 25 °C
-		// [memory, from REFERENCES.md]: the two agree within 0.2 %.
+		// [memory, from testdata/reference/REFERENCES.md]: the two agree within 0.2 %.
 		{25, 78.41, 2e-3},
 	}
 	for _, c := range cases {

@@ -17,7 +17,7 @@ func TestZetaFromMobility(t *testing.T) {
 	const mu, eta, epsR = 2e-8, 0.89e-3, 78.5
 	// [calc] testdata/reference/interaction.py: Smoluchowski eta mu/eps,
 	// Hückel 3 eta mu/(2 eps), Henry with the exact f(10) = 1.2527722186;
-	// REFERENCES.md gives 25.61, 38.4 and 30.6 mV.
+	// testdata/reference/REFERENCES.md gives 25.61, 38.4 and 30.6 mV.
 	tests := []struct {
 		name      string
 		got, want float64
@@ -37,7 +37,7 @@ func TestZetaFromMobility(t *testing.T) {
 
 func TestHenryFunction(t *testing.T) {
 	t.Parallel()
-	// [pub formula] Swan & Furst 2012, as quoted in REFERENCES.md: 1.0267,
+	// [pub formula] Swan & Furst 2012, as quoted in testdata/reference/REFERENCES.md: 1.0267,
 	// 1.1596, 1.2528, 1.4584 at kappa a = 1, 5, 10, 100 (4 decimals).
 	// [calc] testdata/reference/interaction.py with scipy.special.expn, and
 	// independently Henry's 1931 E1 closed form (agrees to 1e-9 up to 50).
@@ -88,7 +88,8 @@ func TestHenryLimits(t *testing.T) {
 func TestHenryOhshima(t *testing.T) {
 	t.Parallel()
 	// [pub] Ohshima 1994 claims a maximum relative error of about 1 %.
-	// REFERENCES.md says 0.8 %, but the [calc] comparison with the exact
+	// A superseded hand estimate in testdata/reference/REFERENCES.md says 0.8 %,
+	// but the [calc] comparison with the exact
 	// function (testdata/reference/interaction.py) peaks at 0.97 % near
 	// kappa a = 3.9, so the test holds Ohshima's own 1 %.
 	for _, tt := range []struct{ ka, want float64 }{

@@ -122,7 +122,7 @@ func TestLibraryValuesAgainstReferences(t *testing.T) {
 		{"titania_rutile", "hamaker", 60 * zJ, 20 * zJ, "[pub]"},
 		// Biggs & Mulvaney 1994, J. Chem. Phys. 100:8501: gold 2.5 +/- 0.5e-19 J [pub].
 		{"gold", "hamaker", 250 * zJ, 50 * zJ, "[pub]"},
-		// REFERENCES.md trade facts, isoelectric points [memory]: silica 2-3.5,
+		// testdata/reference/REFERENCES.md trade facts, isoelectric points [memory]: silica 2-3.5,
 		// rutile and anatase 4-6, alumina about 9, hematite 8-9, zinc oxide about 9,
 		// zirconia 4-11.
 		{"silica_amorphous", "iep", 2.75, 0.75, "[memory]"},
@@ -212,7 +212,7 @@ func TestLibraryListingJSON(t *testing.T) {
 		t.Fatalf("listing has %d materials and %d liquids", len(listing.Materials), len(listing.Liquids))
 	}
 	// Units converted back exactly: Walstra's 9 zJ, Segur's 1412 mPa s at 20 °C,
-	// water from IAPWS R12-08 at 25 °C, 0.8900 mPa s [calc, REFERENCES.md].
+	// water from IAPWS R12-08 at 25 °C, 0.8900 mPa s [calc, testdata/reference/REFERENCES.md].
 	for _, m := range listing.Materials {
 		if m.Key == "polystyrene" && (m.HamakerWaterZJ == nil || m.HamakerWaterZJ.Value != 9) {
 			t.Errorf("polystyrene hamaker_water_zJ = %+v, want 9", m.HamakerWaterZJ)

@@ -33,7 +33,7 @@ func TestLiquidViscosityAgainstReferences(t *testing.T) {
 		tag   string
 	}{
 		// Segur & Oberstar 1951 (Ind. Eng. Chem. 43:2117), glycerol 1412 mPa s at 20 °C
-		// [memory; the brief lists it as pub]; CRC Handbook, Viscosity of Liquids,
+		// [memory]; CRC Handbook, Viscosity of Liquids,
 		// 934 mPa s at 25 °C [memory].
 		{"glycerol", 20, 1412, 0.05, "[memory]"},
 		{"glycerol", 25, 934, 0.05, "[memory]"},
@@ -53,7 +53,7 @@ func TestLiquidViscosityAgainstReferences(t *testing.T) {
 		// Ethylene glycol at 20 °C, 19.9 mPa s [memory, typical of Sun & Teja 2003]:
 		// 5 K below the table, extrapolated.
 		{"ethylene_glycol", 20, 19.9, 0.05, "[memory]"},
-		// Water, IAPWS R12-08 at 0.1 MPa with Kell density [calc, REFERENCES.md].
+		// Water, IAPWS R12-08 at 0.1 MPa with Kell density [calc, testdata/reference/REFERENCES.md].
 		{"water", 0, 1.7918, 1e-4, "[calc]"},
 		{"water", 20, 1.0016, 1e-4, "[calc]"},
 		{"water", 25, 0.8900, 1e-4, "[calc]"},
@@ -85,7 +85,7 @@ func TestLiquidDensityAndPermittivityAgainstReferences(t *testing.T) {
 		tag          string
 	}{
 		// Kell 1975 density and Malmberg & Maryott 1956 (25 °C: 78.30 [pub];
-		// 100 °C: 55.72 [calc]), REFERENCES.md.
+		// 100 °C: 55.72 [calc]), testdata/reference/REFERENCES.md.
 		{"water", 25, 997.045, 78.30, 1e-4, "[calc]/[pub]"},
 		{"water", 60, 983.199, 0, 1e-5, "[calc]"},
 		{"water", 100, 958.364, 55.72, 1e-4, "[calc]"},
