@@ -18,7 +18,7 @@ func TestStokesEinsteinDiffusion(t *testing.T) {
 		// IAPWS viscosity 0.89002 mPa s -> 2.453667e-12 m^2/s [calc].
 		{"100 nm in water 25 °C", 100e-9, physics.WaterViscosity(298.15), 298.15, 2.453667e-12, 1e-6},
 		// Same with eta = 0.8900 mPa s -> 2.453731e-12 m^2/s [calc] (the
-		// textbook figure is "about 2.45e-12", Israelachvili 2011 [memory]).
+		// round figure usually quoted is "about 2.45e-12" [practice]).
 		{"100 nm, eta 0.8900 mPa s", 100e-9, 0.89e-3, 298.15, 2.453731e-12, 1e-6},
 	}
 	for _, c := range cases {
