@@ -52,7 +52,7 @@ func (ev *evaluation) computeBeyondDLVO() {
 		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
 			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
 		if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
-			width := 1 / math.Max(ev.pair.Kappa, 1/c.Radius)
+			width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
 			w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
 			ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
 		}
@@ -115,7 +115,7 @@ func (ev *evaluation) rheology() {
 	case ev.pair.StericThickness > 0:
 		shell = ev.pair.StericThickness
 	case ev.hasPair && ev.pair.Kappa > 0 && math.Abs(c.Zeta) > 0:
-		shell = math.Min(1/ev.pair.Kappa, c.Radius)
+		shell = physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
 	}
 	phiEff := physics.EffectiveVolumeFraction(c.VolumeFraction, c.Radius, shell)
 	phiMax := physics.RandomClosePacking
@@ -129,7 +129,7 @@ func (ev *evaluation) rheology() {
 		"Krieger-Dougherty (1 - phi/phim)^(-2.5 phim) on the effective volume fraction")
 	largest := c.Radius
 	if c.Classes != nil {
-		largest = c.Classes[len(c.Classes)-1].Diameter / 2
+		largest = physics.LargestDiameter(c.Classes) / 2
 	}
 	ev.set("yield_stress_needed", physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density),
 		"Beris et al. (1985): 3 tau_y/(2 drho g R) = 0.143, largest particle")

@@ -72,6 +72,6 @@ func (ev *evaluation) observedSettling(drho, hindered float64) {
 		return
 	}
 	rz := physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
-	d := math.Sqrt(18 * c.Liquid.Viscosity * rate / (math.Abs(drho) * physics.StandardGravity * rz))
+	d := 2 * physics.StokesRadius(rate/rz, drho, c.Liquid.Viscosity)
 	ev.set("apparent_settling_diameter", d*1e9, "Stokes law inverted for the observed rate (closed form), hindered")
 }

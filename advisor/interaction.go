@@ -136,7 +136,7 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 func (ev *evaluation) criticalCoagulation() {
 	c := ev.cond
 	z := max(c.CounterValence, 1)
-	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.Zeta) / (4 * physics.Boltzmann * c.StorageTempK))
+	gamma := physics.ReducedSurfacePotential(math.Abs(c.Zeta), c.StorageTempK, z)
 	ev.set("ccc_high_potential", physics.CCCHighPotential(c.Hamaker, gamma, c.Liquid.Permittivity, c.StorageTempK, z),
 		"Derjaguin-Landau-Verwey-Overbeek closed form for a z:z salt, -A a/(12 h) attraction, linear superposition")
 	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0, ev.lastBarrier)

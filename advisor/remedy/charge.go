@@ -180,12 +180,6 @@ func dlvoMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope f
 	return byHalfLife, barrierSlope/math.Ln10 - 0.5
 }
 
-func (cs *Case) withIonicStrength(I float64) physics.Pair {
-	p := cs.Pair
-	p.Kappa = physics.DebyeKappa(I, cs.Cond.Liquid.Permittivity, cs.Cond.StorageTempK)
-	return p
-}
-
 // ionicStrengthFloor is the lowest ionic strength a remedy may ask for.
 func ionicStrengthFloor(cs *Case) float64 {
 	if cs.Cond.Liquid.Aqueous {
@@ -240,9 +234,9 @@ func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
 	a := peakAnchor{cs: cs}
-	exact := func(logI float64) (float64, float64) { return a.exact(cs.withIonicStrength(math.Pow(10, logI))) }
+	exact := func(logI float64) (float64, float64) { return a.exact(cs.Pair.WithIonicStrength(math.Pow(10, logI))) }
 	aimed := func(logI float64) (float64, float64) {
-		m, slope := a.estimated(cs.withIonicStrength(math.Pow(10, logI)))
+		m, slope := a.estimated(cs.Pair.WithIonicStrength(math.Pow(10, logI)))
 		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
 	}
 	x := hi
@@ -469,7 +463,7 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	}
 	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	withConc := func(conc float64) physics.Pair {
-		return cs.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+		return cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
 	}
 	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
 	conc := c.MultivalentConc

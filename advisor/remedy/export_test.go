@@ -3,8 +3,6 @@ package remedy
 import (
 	"maps"
 	"slices"
-
-	"colloidtriage/physics"
 )
 
 // Internals for the tests of package remedy_test, which take their cases
@@ -22,7 +20,5 @@ const (
 	IonicStrengthTol = ionicStrengthTol
 	PotentialTol     = potentialTol
 )
-
-func (cs *Case) WithIonicStrength(I float64) physics.Pair { return cs.withIonicStrength(I) }
 
 func SolverIDs() []string { return slices.Sorted(maps.Keys(solvers)) }

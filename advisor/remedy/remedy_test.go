@@ -96,8 +96,8 @@ func TestRemedyTargetsInvertThePhysics(t *testing.T) {
 	if !ok {
 		t.Fatal("no ionic-strength target")
 	}
-	at := remedy.StabilityMargin(cs, cs.WithIonicStrength(tg.Value))
-	above := remedy.StabilityMargin(cs, cs.WithIonicStrength(tg.Value*1.02))
+	at := remedy.StabilityMargin(cs, cs.Pair.WithIonicStrength(tg.Value))
+	above := remedy.StabilityMargin(cs, cs.Pair.WithIonicStrength(tg.Value*1.02))
 	if at < -1e-2 || above >= 0 {
 		t.Errorf("ionic strength target %v mM: margin %v there, %v 2 %% above; want >= 0 and < 0", tg.Value, at, above)
 	}
@@ -137,7 +137,7 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 			tg, _, ok := remedy.For("remove_multivalent_ions")(cs)
 			other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 			exact := func(conc float64) float64 {
-				return remedy.StabilityMargin(cs, cs.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, remedy.IonicStrengthFloor(cs))))
+				return remedy.StabilityMargin(cs, cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, remedy.IonicStrengthFloor(cs))))
 			}
 			checked[2]++
 			root, found := physics.FindRoot(exact, 0, c.MultivalentConc, 1e-12)
@@ -164,7 +164,7 @@ func checkIonicStrengthRoot(t *testing.T, name string, cs *remedy.Case) bool {
 		return false
 	}
 	exact := func(logI float64) float64 {
-		return remedy.StabilityMargin(cs, cs.WithIonicStrength(math.Pow(10, logI)))
+		return remedy.StabilityMargin(cs, cs.Pair.WithIonicStrength(math.Pow(10, logI)))
 	}
 	root, found := physics.FindRoot(exact, math.Log10(remedy.IonicStrengthFloor(cs)), math.Log10(cs.Cond.IonicStrength), 1e-9)
 	if d := math.Log10(I) - root; !found || d > 0 || d < -2*remedy.IonicStrengthTol {
