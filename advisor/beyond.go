@@ -48,14 +48,23 @@ func (ev *evaluation) computeBeyondDLVO() {
 	ev.bridging()
 	ev.ripening()
 	ev.rheology()
-	if c.Shear > 0 {
-		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
-			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
-		if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
-			width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
-			w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
-			ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
-		}
+	ev.shear(kT)
+}
+
+// shear reports, for a sample under shear, the orthokinetic ratio (whether
+// or not a surface potential is known: this is its only place) and, over an
+// energy barrier, the work shear does across the double layer's range.
+func (ev *evaluation) shear(kT float64) {
+	c := ev.cond
+	if c.Shear <= 0 {
+		return
+	}
+	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
+		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
+	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
+		width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
+		w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
+		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
 	}
 }
 

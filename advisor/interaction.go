@@ -124,10 +124,6 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 	ev.set("rapid_aggregation_half_life", math.Pow(10, rapid), "Smoluchowski 3 eta/(4 kT N0), median particles")
 	ev.set("log10_aggregation_half_life_days", slow-math.Log10(input.Day), "log10(W x rapid half-life / 1 d)")
 	ev.set("log10_half_life_over_shelf_life", slow-math.Log10(c.ShelfLife), "log10 of half-life over shelf life")
-	if c.Shear > 0 {
-		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
-			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
-	}
 }
 
 // criticalCoagulation solves for the ionic strength at which the barrier of
