@@ -89,7 +89,7 @@ func (ev *evaluation) bridging() {
 		return
 	}
 	size := physics.PolymerCoilSize(c.Adsorbing.MolarMass)
-	debye := math.Min(1/ev.pair.Kappa, 1)
+	debye := 1 / ev.pair.Kappa // +Inf without ions: no double layer to span
 	gap := 0.0
 	if b, ok := ev.scales["barrier_position"]; ok {
 		gap = b.Value * 1e-9
