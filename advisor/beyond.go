@@ -14,7 +14,7 @@ func (ev *evaluation) addLayers() {
 	if c.Steric.Present && ev.stericEffective() {
 		ev.pair.StericThickness = c.Steric.Thickness
 	}
-	if c.FreePolymer.Present && !math.IsNaN(c.FreePolymer.RadiusOfGyration) && !math.IsNaN(c.FreePolymer.MolarMass) {
+	if c.FreePolymer.Evaluable() {
 		ev.pair.DepletionRange = c.FreePolymer.RadiusOfGyration
 		ev.pair.DepletionDensity = physics.PolymerNumberDensity(c.FreePolymer.Concentration, c.FreePolymer.MolarMass)
 	}
@@ -71,12 +71,12 @@ func (ev *evaluation) shear(kT float64) {
 func (ev *evaluation) depletion(kT float64) {
 	c := ev.cond
 	fp := c.FreePolymer
-	if !fp.Present || math.IsNaN(fp.RadiusOfGyration) || math.IsNaN(fp.MolarMass) {
+	if !fp.Evaluable() {
 		return
 	}
-	n := physics.PolymerNumberDensity(fp.Concentration, fp.MolarMass)
+	// addLayers has put the polymer's number density into the pair.
 	contact := 2 * ev.pair.StericThickness
-	ev.set("depletion_well", physics.AsakuraOosawa(c.Radius, contact, fp.RadiusOfGyration, n, c.StorageTempK)/kT,
+	ev.set("depletion_well", physics.AsakuraOosawa(c.Radius, contact, fp.RadiusOfGyration, ev.pair.DepletionDensity, c.StorageTempK)/kT,
 		"Asakura-Oosawa energy at contact, depletion layer = radius of gyration")
 	ev.set("free_polymer_overlap_ratio", fp.Concentration/physics.OverlapConcentration(fp.MolarMass, fp.RadiusOfGyration),
 		"concentration over overlap concentration 3M/(4 pi NA Rg^3)")
@@ -136,10 +136,6 @@ func (ev *evaluation) rheology() {
 	ev.set("packing_ratio", phiEff/phiMax, "effective volume fraction over maximum packing")
 	ev.set("relative_viscosity", physics.KriegerDougherty(math.Min(phiEff, phiMax), phiMax, physics.DefaultIntrinsicViscosity),
 		"Krieger-Dougherty (1 - phi/phim)^(-2.5 phim) on the effective volume fraction")
-	largest := c.Radius
-	if c.Classes != nil {
-		largest = physics.LargestDiameter(c.Classes) / 2
-	}
-	ev.set("yield_stress_needed", physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density),
+	ev.set("yield_stress_needed", physics.YieldStressToHoldSphere(c.LargestRadius(), c.ParticleDensity-c.Liquid.Density),
 		"Beris et al. (1985): 3 tau_y/(2 drho g R) = 0.143, largest particle")
 }

@@ -23,7 +23,7 @@ func clearLayerCriterion(cs *Case) string {
 // that meets the clear-layer criterion at the sample's volume fraction.
 func allowedStokesSpeed(cs *Case) float64 {
 	c := cs.Cond
-	return c.MaxClear / c.ShelfLife / physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
+	return c.MaxClear / c.ShelfLife / c.Hindrance()
 }
 
 func solveParticleSize(cs *Case) (Target, string, bool) {
@@ -88,11 +88,7 @@ func solveViscosity(cs *Case) (Target, string, bool) {
 
 func solveYieldStress(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	largest := c.Radius
-	if c.Classes != nil {
-		largest = physics.LargestDiameter(c.Classes) / 2
-	}
-	tau := physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density)
+	tau := physics.YieldStressToHoldSphere(c.LargestRadius(), c.ParticleDensity-c.Liquid.Density)
 	return Target{"medium.yield_stress_Pa", ">=", tau, "Pa"},
 		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985)", true
 }
