@@ -14,7 +14,7 @@ func (ev *evaluation) addLayers() {
 	if c.Steric.Present && ev.stericEffective() {
 		ev.pair.StericThickness = c.Steric.Thickness
 	}
-	if c.FreePolymer.Present && !math.IsNaN(c.FreePolymer.RadiusOfGyration) && !math.IsNaN(c.FreePolymer.MolarMass) {
+	if c.FreePolymer.Evaluable() {
 		ev.pair.DepletionRange = c.FreePolymer.RadiusOfGyration
 		ev.pair.DepletionDensity = physics.PolymerNumberDensity(c.FreePolymer.Concentration, c.FreePolymer.MolarMass)
 	}
@@ -48,26 +48,35 @@ func (ev *evaluation) computeBeyondDLVO() {
 	ev.bridging()
 	ev.ripening()
 	ev.rheology()
-	if c.Shear > 0 {
-		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
-			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
-		if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
-			width := 1 / math.Max(ev.pair.Kappa, 1/c.Radius)
-			w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
-			ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
-		}
+	ev.shear(kT)
+}
+
+// shear reports, for a sample under shear, the orthokinetic ratio (whether
+// or not a surface potential is known: this is its only place) and, over an
+// energy barrier, the work shear does across the double layer's range.
+func (ev *evaluation) shear(kT float64) {
+	c := ev.cond
+	if c.Shear <= 0 {
+		return
+	}
+	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
+		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
+	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
+		width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
+		w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
+		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
 	}
 }
 
 func (ev *evaluation) depletion(kT float64) {
 	c := ev.cond
 	fp := c.FreePolymer
-	if !fp.Present || math.IsNaN(fp.RadiusOfGyration) || math.IsNaN(fp.MolarMass) {
+	if !fp.Evaluable() {
 		return
 	}
-	n := physics.PolymerNumberDensity(fp.Concentration, fp.MolarMass)
+	// addLayers has put the polymer's number density into the pair.
 	contact := 2 * ev.pair.StericThickness
-	ev.set("depletion_well", physics.AsakuraOosawa(c.Radius, contact, fp.RadiusOfGyration, n, c.StorageTempK)/kT,
+	ev.set("depletion_well", physics.AsakuraOosawa(c.Radius, contact, fp.RadiusOfGyration, ev.pair.DepletionDensity, c.StorageTempK)/kT,
 		"Asakura-Oosawa energy at contact, depletion layer = radius of gyration")
 	ev.set("free_polymer_overlap_ratio", fp.Concentration/physics.OverlapConcentration(fp.MolarMass, fp.RadiusOfGyration),
 		"concentration over overlap concentration 3M/(4 pi NA Rg^3)")
@@ -80,7 +89,7 @@ func (ev *evaluation) bridging() {
 		return
 	}
 	size := physics.PolymerCoilSize(c.Adsorbing.MolarMass)
-	debye := math.Min(1/ev.pair.Kappa, 1)
+	debye := 1 / ev.pair.Kappa // +Inf without ions: no double layer to span
 	gap := 0.0
 	if b, ok := ev.scales["barrier_position"]; ok {
 		gap = b.Value * 1e-9
@@ -115,7 +124,7 @@ func (ev *evaluation) rheology() {
 	case ev.pair.StericThickness > 0:
 		shell = ev.pair.StericThickness
 	case ev.hasPair && ev.pair.Kappa > 0 && math.Abs(c.Zeta) > 0:
-		shell = math.Min(1/ev.pair.Kappa, c.Radius)
+		shell = physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
 	}
 	phiEff := physics.EffectiveVolumeFraction(c.VolumeFraction, c.Radius, shell)
 	phiMax := physics.RandomClosePacking
@@ -127,10 +136,6 @@ func (ev *evaluation) rheology() {
 	ev.set("packing_ratio", phiEff/phiMax, "effective volume fraction over maximum packing")
 	ev.set("relative_viscosity", physics.KriegerDougherty(math.Min(phiEff, phiMax), phiMax, physics.DefaultIntrinsicViscosity),
 		"Krieger-Dougherty (1 - phi/phim)^(-2.5 phim) on the effective volume fraction")
-	largest := c.Radius
-	if c.Classes != nil {
-		largest = c.Classes[len(c.Classes)-1].Diameter / 2
-	}
-	ev.set("yield_stress_needed", physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density),
+	ev.set("yield_stress_needed", physics.YieldStressToHoldSphere(c.LargestRadius(), c.ParticleDensity-c.Liquid.Density),
 		"Beris et al. (1985): 3 tau_y/(2 drho g R) = 0.143, largest particle")
 }

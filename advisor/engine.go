@@ -8,7 +8,6 @@ import (
 	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
-	"colloidtriage/advisor/remedy"
 	"colloidtriage/advisor/rule"
 )
 
@@ -78,18 +77,6 @@ func (e *Engine) Scales(s *input.Sample) (map[string]Scale, []string, map[string
 		return nil, nil, nil, err
 	}
 	return ev.scales, ev.notes.List(), ev.models, nil
-}
-
-// RemedyCase evaluates a validated sample as Triage does and returns the
-// case its remedies are solved on, so that a target can be put back into
-// the forward physics and checked. It returns an *input.Error when the
-// sample is physically inconsistent.
-func (e *Engine) RemedyCase(s *input.Sample) (*remedy.Case, error) {
-	ev, err := e.evaluate(s)
-	if err != nil {
-		return nil, err
-	}
-	return ev.remedyCase(), nil
 }
 
 func (e *Engine) evaluate(s *input.Sample) (*evaluation, error) {

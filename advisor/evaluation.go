@@ -129,6 +129,7 @@ func (ev *evaluation) inputFacts() {
 	f.SetNumber("shear_rate_per_s", c.Shear)
 	f.SetNumber("yield_stress_pa", c.YieldStress)
 	f.SetNumber("min_barrier_kT", c.Criteria.MinBarrierKT)
+	f.SetNumber("stable_ph_distance", physics.PHDistanceForStability)
 	f.SetNumber("half_life_to_shelf_life", c.Criteria.HalfLifeRatio)
 	f.SetFlag("has_size_distribution", c.Classes != nil)
 	f.SetNumber("max_relative_viscosity", c.Criteria.MaxRelViscosity)

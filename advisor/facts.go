@@ -3,8 +3,9 @@ package advisor
 import "colloidtriage/advisor/rule"
 
 // The rules' vocabulary is declared here: every name a rule may use, in the
-// unit it is compared in. inputFacts are what the sample states directly;
-// every scale of scaleSpecs (scalespec.go) is a numeric fact in its
+// unit it is compared in. inputFacts are what the sample states directly,
+// its acceptance criteria, and the thresholds that physics names
+// (stable_ph_distance); every scale of scaleSpecs (scalespec.go) is a numeric fact in its
 // reporting unit; package rule adds rule.TopCauseScore.
 
 // inputFact declares one fact the sample states directly.
@@ -42,6 +43,7 @@ var inputFacts = []inputFact{
 	{"shear_rate_per_s", rule.Number, "1/s", "shear rate in processing or transport"},
 	{"yield_stress_pa", rule.Number, "Pa", "yield stress of the continuous phase"},
 	{"min_barrier_kT", rule.Number, "kT", "acceptance criterion: smallest energy barrier"},
+	{"stable_ph_distance", rule.Number, "pH", "distance from the isoelectric point within which most charge-stabilised dispersions are unstable (physics.PHDistanceForStability)"},
 	{"half_life_to_shelf_life", rule.Number, "1", "acceptance criterion: aggregation half-life over shelf life"},
 	{"has_size_distribution", rule.Flag, "", "a size span or distribution was given"},
 	{"max_relative_viscosity", rule.Number, "1", "acceptance criterion: largest relative viscosity"},

@@ -22,7 +22,7 @@ func (ev *evaluation) computeGravity() {
 	ev.set("density_difference", drho, "particle minus liquid density")
 
 	v := physics.StokesVelocity(c.Radius, drho, eta)
-	hindered := v * physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
+	hindered := v * c.Hindrance()
 	ev.model(hinderedSettlingModel)
 	ev.set("stokes_velocity", math.Abs(v)*mmPerDayPerMS, "Stokes (1851), median diameter")
 	ev.set("hindered_velocity", math.Abs(hindered)*mmPerDayPerMS, "Stokes x Richardson-Zaki (1954), n = 4.65")
@@ -47,7 +47,7 @@ func (ev *evaluation) computeGravity() {
 
 	if c.Classes != nil {
 		speed := func(d float64) float64 {
-			return physics.StokesVelocity(d/2, drho, eta) * physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
+			return physics.StokesVelocity(d/2, drho, eta) * c.Hindrance()
 		}
 		ev.set("sedimented_fraction", physics.SedimentedFraction(c.Classes, speed, c.ShelfLife, c.Height),
 			"per-class hindered Stokes speeds over the shelf life")
@@ -71,7 +71,6 @@ func (ev *evaluation) observedSettling(drho, hindered float64) {
 	if drho == 0 {
 		return
 	}
-	rz := physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
-	d := math.Sqrt(18 * c.Liquid.Viscosity * rate / (math.Abs(drho) * physics.StandardGravity * rz))
+	d := 2 * physics.StokesRadius(rate/c.Hindrance(), drho, c.Liquid.Viscosity)
 	ev.set("apparent_settling_diameter", d*1e9, "Stokes law inverted for the observed rate (closed form), hindered")
 }

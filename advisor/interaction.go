@@ -124,10 +124,6 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 	ev.set("rapid_aggregation_half_life", math.Pow(10, rapid), "Smoluchowski 3 eta/(4 kT N0), median particles")
 	ev.set("log10_aggregation_half_life_days", slow-math.Log10(input.Day), "log10(W x rapid half-life / 1 d)")
 	ev.set("log10_half_life_over_shelf_life", slow-math.Log10(c.ShelfLife), "log10 of half-life over shelf life")
-	if c.Shear > 0 {
-		ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
-			"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
-	}
 }
 
 // criticalCoagulation solves for the ionic strength at which the barrier of
@@ -136,7 +132,7 @@ func (ev *evaluation) kinetics(barrier physics.Extremum) {
 func (ev *evaluation) criticalCoagulation() {
 	c := ev.cond
 	z := max(c.CounterValence, 1)
-	gamma := math.Tanh(float64(z) * physics.ElementaryCharge * math.Abs(c.Zeta) / (4 * physics.Boltzmann * c.StorageTempK))
+	gamma := physics.ReducedSurfacePotential(math.Abs(c.Zeta), c.StorageTempK, z)
 	ev.set("ccc_high_potential", physics.CCCHighPotential(c.Hamaker, gamma, c.Liquid.Permittivity, c.StorageTempK, z),
 		"Derjaguin-Landau-Verwey-Overbeek closed form for a z:z salt, -A a/(12 h) attraction, linear superposition")
 	iCrit, ok := physics.CriticalIonicStrength(ev.pair, 0, ev.lastBarrier)

@@ -156,8 +156,11 @@ func (ev *evaluation) profile(points int) *Profile {
 	}
 	b, m := pair.Extrema()
 	if b.Found {
-		// The golden-section search ends within a relative 1e-5 of the
-		// start when the maximum sits there.
+		// Pair.Extrema polishes the grid's highest point by Newton steps
+		// on the closed-form slope in ln h, bisecting the bracket when a
+		// step leaves it. A maximum at the closest approach stays on that
+		// grid point, or the bracket closes on it to 1e-9 in ln h: 1e-4
+		// relative is a wide margin for "at the closest approach".
 		out.Barrier = &ProfileExtremum{EnergyKT: number.Round(b.Energy/kT, 6),
 			SeparationNm: number.Round(b.Separation*1e9, 6), AtClosestApproach: b.Separation <= lo*(1+1e-4)}
 		if out.Barrier.AtClosestApproach {

@@ -23,8 +23,29 @@ import "math"
 // eq. 14.53.
 func lsaPrefactor(radius, psi, epsR, tempK float64, z int) float64 {
 	thermal := Boltzmann * tempK / (float64(z) * ElementaryCharge)
-	gamma := math.Tanh(psi / (4 * thermal))
+	gamma := ReducedSurfacePotential(psi, tempK, z)
 	return 32 * math.Pi * VacuumPermittivity * epsR * radius * thermal * thermal * gamma * gamma
+}
+
+// ReducedSurfacePotential returns the dimensionless reduced potential
+//
+//	gamma = tanh(z e psi / (4 kT))
+//
+// of a surface at potential psi (V) in a z:z electrolyte at tempK (K): the
+// amplitude of the far field of a flat Gouy–Chapman double layer, between
+// -1 and 1 with the sign of psi. It is about z e psi/(4 kT) at low
+// potential and tends to ±1 at high potential. It panics on a non-finite
+// psi, a non-positive or non-finite tempK, or z < 1.
+//
+// Reference: E. J. W. Verwey & J. Th. G. Overbeek, Theory of the Stability
+// of Lyophobic Colloids (1948), ch. II (the Gouy–Chapman double layer,
+// gamma = tanh(z e psi/4kT)).
+func ReducedSurfacePotential(psi, tempK float64, z int) float64 {
+	if math.IsNaN(psi) || math.IsInf(psi, 0) || !(tempK > 0 && tempK <= math.MaxFloat64) || z < 1 {
+		panic("physics: ReducedSurfacePotential needs a finite psi, tempK > 0 and z >= 1")
+	}
+	thermal := Boltzmann * tempK / (float64(z) * ElementaryCharge)
+	return math.Tanh(psi / (4 * thermal))
 }
 
 // hhfPrefactor is the prefactor 2 pi eps0 epsR a psi^2, in J, of the

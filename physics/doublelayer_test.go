@@ -47,6 +47,42 @@ func TestEDLReferenceValues(t *testing.T) {
 	}
 }
 
+func TestReducedSurfacePotential(t *testing.T) {
+	t.Parallel()
+	// [calc] testdata/reference/interaction.py: tanh(z e psi/(4 kT)) at
+	// 298.15 K (Verwey & Overbeek 1948); z psi enters as a product.
+	tests := []struct {
+		psi  float64
+		z    int
+		want float64
+	}{
+		{0.025, 1, 0.238573434},
+		{-0.05, 1, -0.451451477},
+		{0.025, 2, 0.451451477},
+		{0.2, 1, 0.960013880},
+		{0, 1, 0},
+	}
+	for _, tt := range tests {
+		if got := ReducedSurfacePotential(tt.psi, 298.15, tt.z); math.Abs(got-tt.want) > 1e-9 {
+			t.Errorf("ReducedSurfacePotential(%g V, z = %d) = %.9f, want %.9f", tt.psi, tt.z, got, tt.want)
+		}
+	}
+	for name, f := range map[string]func(){
+		"NaN potential": func() { ReducedSurfacePotential(math.NaN(), 298.15, 1) },
+		"zero tempK":    func() { ReducedSurfacePotential(0.025, 0, 1) },
+		"valence 0":     func() { ReducedSurfacePotential(0.025, 298.15, 0) },
+	} {
+		func() {
+			defer func() {
+				if recover() == nil {
+					t.Errorf("%s: no panic", name)
+				}
+			}()
+			f()
+		}()
+	}
+}
+
 func TestEDLLimits(t *testing.T) {
 	t.Parallel()
 	const a, epsR, tempK = 100e-9, 78.4, 298.15

@@ -52,6 +52,21 @@ func TimeToDoubleDiameter(radius, rate float64) float64 {
 	return 7 * radius * radius * radius / rate
 }
 
+// DoublingRate inverts TimeToDoubleDiameter for the rate: the ripening rate
+// omega (m^3/s) at which the mean radius grows from r (m) to 2 r in exactly
+// duration (s, > 0), 7 r^3/duration. A slower rate takes longer. It panics
+// on a negative or non-finite radius or a non-positive or non-finite
+// duration.
+//
+// Reference: as TimeToDoubleDiameter (LSW's r^3 linear in time; Kabalnov
+// 2001), solved for omega.
+func DoublingRate(radius, duration float64) float64 {
+	if !(radius >= 0 && radius <= math.MaxFloat64) || !(duration > 0 && duration <= math.MaxFloat64) {
+		panic("physics: DoublingRate needs a finite radius >= 0 and duration > 0")
+	}
+	return 7 * radius * radius * radius / duration
+}
+
 // SizeGrowthFromRate returns the fractional diameter growth after
 // duration (s) of ripening at rate omega (m^3/s) from radius r (m):
 // (r^3 + omega t)^(1/3)/r - 1, so 0 at omega = 0 and 1 at

@@ -58,6 +58,40 @@ func TestTimeToDoubleDiameter(t *testing.T) {
 	}
 }
 
+func TestDoublingRate(t *testing.T) {
+	t.Parallel()
+	// 7 r^3/t [calc, inverses.py]: r = 1 um doubles in 365.25 d at
+	// 2.218166e-25 m^3/s; and the inverse of the doubling time above.
+	cases := []struct {
+		radius, duration, want, tol float64
+	}{
+		{1e-6, 365.25 * 86400, 2.218166e-25, 1e-6},
+		{100e-9, 39.04357, 1.792869e-22, 1e-6},
+	}
+	for _, c := range cases {
+		if got := physics.DoublingRate(c.radius, c.duration); beyondRelErr(got, c.want) > c.tol {
+			t.Errorf("DoublingRate(%v, %v) = %.7g m^3/s, want %.7g", c.radius, c.duration, got, c.want)
+		}
+	}
+	if got := physics.DoublingRate(0, 1); got != 0 {
+		t.Errorf("DoublingRate of no radius = %v, want 0", got)
+	}
+	for name, f := range map[string]func(){
+		"zero duration":   func() { physics.DoublingRate(1e-6, 0) },
+		"negative radius": func() { physics.DoublingRate(-1e-6, 1) },
+		"NaN radius":      func() { physics.DoublingRate(math.NaN(), 1) },
+	} {
+		func() {
+			defer func() {
+				if recover() == nil {
+					t.Errorf("%s: no panic", name)
+				}
+			}()
+			f()
+		}()
+	}
+}
+
 func TestSizeGrowthFromRate(t *testing.T) {
 	t.Parallel()
 	// (r^3 + omega t)^(1/3)/r - 1 [calc, beyond_dlvo.py]; at the doubling

@@ -1,6 +1,10 @@
 package input
 
-import "colloidtriage/physics"
+import (
+	"math"
+
+	"colloidtriage/physics"
+)
 
 // Conditions is a Sample resolved into SI values at the storage
 // temperature, every gap filled from the library or a documented default.
@@ -73,6 +77,12 @@ type Depletant struct {
 	Concentration, RadiusOfGyration, MolarMass float64
 }
 
+// Evaluable reports a free polymer whose depletion can be computed: present,
+// with a known radius of gyration and molar mass.
+func (d Depletant) Evaluable() bool {
+	return d.Present && !math.IsNaN(d.RadiusOfGyration) && !math.IsNaN(d.MolarMass)
+}
+
 // Adsorbed is the adsorbing polymer: molar mass in kg/mol, surface
 // coverage as a fraction.
 type Adsorbed struct {
@@ -106,6 +116,22 @@ func (c *Conditions) IonicStrengthPerMole() float64 {
 		return 1
 	}
 	return c.MultivalentIonicShare
+}
+
+// LargestRadius is the radius, m, of the largest particles: half the
+// largest class diameter of a size distribution, else the median radius.
+func (c *Conditions) LargestRadius() float64 {
+	if c.Classes == nil {
+		return c.Radius
+	}
+	return physics.LargestDiameter(c.Classes) / 2
+}
+
+// Hindrance is the Richardson-Zaki factor by which crowding at the sample's
+// volume fraction slows settling (physics.RichardsonZakiFactor, low
+// Reynolds number exponent).
+func (c *Conditions) Hindrance() float64 {
+	return physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
 }
 
 // Documented defaults of the acceptance criteria and the storage.

@@ -54,10 +54,9 @@ func resolveStabilizer(st *Stabilizer, fp *FreePolymer, c *Conditions, n *Notes)
 
 // Droplet defaults are those of a typical alkane-in-water emulsion.
 const (
-	defaultSolubilityMolM3  = 1e-3 // mol/m^3, of the order of a long alkane in water
-	defaultMolarVolumeM3    = 3e-4 // m^3/mol, about that of a C16-C18 oil
-	defaultTensionNm        = 5e-3 // N/m, an emulsifier-covered oil-water interface
-	molecularDiffusivityM2S = 1e-9 // m^2/s, small molecules in water (common practice)
+	defaultSolubilityMolM3 = 1e-3 // mol/m^3, of the order of a long alkane in water
+	defaultMolarVolumeM3   = 3e-4 // m^3/mol, about that of a C16-C18 oil
+	defaultTensionNm       = 5e-3 // N/m, an emulsifier-covered oil-water interface
 )
 
 func resolveDroplet(p *Particles, c *Conditions, n *Notes) {
@@ -67,8 +66,8 @@ func resolveDroplet(p *Particles, c *Conditions, n *Notes) {
 	c.Droplet.Solubility = valueOr(p.SolubilityMolM3, solubilityDefault, n)
 	c.Droplet.MolarVolume = valueOr(p.MolarVolumeCm3Mol, molarVolumeDefault, n) * 1e-6
 	c.Droplet.Tension = valueOr(p.TensionMNm, tensionDefault, n) * 1e-3
-	c.Droplet.Diffusivity = molecularDiffusivityM2S
-	n.Add("molecular diffusivity of the dispersed phase in the liquid: %g m^2/s (common practice for small molecules in water)", molecularDiffusivityM2S)
+	c.Droplet.Diffusivity = physics.TypicalMolecularDiffusivity
+	n.Add("molecular diffusivity of the dispersed phase in the liquid: %g m^2/s (common practice for small molecules in water)", physics.TypicalMolecularDiffusivity)
 }
 
 func pointerf(format string, args ...any) string { return fmt.Sprintf(format, args...) }

@@ -166,9 +166,9 @@ func resolveZeta(p *Particles, c *Conditions, n *Notes) {
 		var how string
 		switch model {
 		case "smoluchowski":
-			c.Henry, how = 1.5, "Smoluchowski's limit (thin double layer, f = 1.5)"
+			c.Henry, how = physics.HenrySmoluchowski, "Smoluchowski's limit (thin double layer, f = 1.5)"
 		case "huckel":
-			c.Henry, how = 1, "Hueckel's limit (thick double layer, f = 1)"
+			c.Henry, how = physics.HenryHuckel, "Hueckel's limit (thick double layer, f = 1)"
 		case "henry_exact":
 			c.Henry, how = physics.HenrySwanFurst(kappa*c.Radius), "Henry's equation with the exact f(kappa a) of Swan & Furst (2012)"
 		default:

@@ -180,12 +180,6 @@ func dlvoMarginSlope(cs *Case, p physics.Pair, log10W log10WAt) (margin, slope f
 	return byHalfLife, barrierSlope/math.Ln10 - 0.5
 }
 
-func (cs *Case) withIonicStrength(I float64) physics.Pair {
-	p := cs.Pair
-	p.Kappa = physics.DebyeKappa(I, cs.Cond.Liquid.Permittivity, cs.Cond.StorageTempK)
-	return p
-}
-
 // ionicStrengthFloor is the lowest ionic strength a remedy may ask for.
 func ionicStrengthFloor(cs *Case) float64 {
 	if cs.Cond.Liquid.Aqueous {
@@ -240,9 +234,9 @@ func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
 	a := peakAnchor{cs: cs}
-	exact := func(logI float64) (float64, float64) { return a.exact(cs.withIonicStrength(math.Pow(10, logI))) }
+	exact := func(logI float64) (float64, float64) { return a.exact(cs.Pair.WithIonicStrength(math.Pow(10, logI))) }
 	aimed := func(logI float64) (float64, float64) {
-		m, slope := a.estimated(cs.withIonicStrength(math.Pow(10, logI)))
+		m, slope := a.estimated(cs.Pair.WithIonicStrength(math.Pow(10, logI)))
 		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
 	}
 	x := hi
@@ -357,19 +351,10 @@ func solveSurfaceCharge(cs *Case) (Target, string, bool) {
 // move_ph_from_iep both need it.
 func smallestAcceptablePotential(cs *Case) (float64, bool) {
 	if m := &cs.acceptablePotential; !m.done && cs.HasPair {
-		sign := -1.0 // as potentialWhere: the surface keeps its sign
-		if cs.Pair.Potential > 0 {
-			sign = 1
-		}
-		withPotential := func(psi float64) physics.Pair {
-			p := cs.Pair
-			p.Potential = sign * psi
-			return p
-		}
 		solve := func(margin func(psi float64) float64) (float64, bool) {
 			return potentialWhere(cs, func(p physics.Pair) float64 { return margin(math.Abs(p.Potential)) })
 		}
-		m.psi, m.ok = anchoredRoot(cs, withPotential, solve, potentialTol)
+		m.psi, m.ok = anchoredRoot(cs, cs.withPotential, solve, potentialTol)
 		m.done = true
 	}
 	return cs.acceptablePotential.psi, cs.acceptablePotential.ok
@@ -381,15 +366,7 @@ func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, boo
 	if !cs.HasPair {
 		return 0, false
 	}
-	sign := -1.0
-	if cs.Pair.Potential > 0 {
-		sign = 1
-	}
-	at := func(psi float64) float64 {
-		p := cs.Pair
-		p.Potential = sign * psi
-		return margin(p)
-	}
+	at := func(psi float64) float64 { return margin(cs.withPotential(psi)) }
 	// Bracket from the present potential by steps of 1.5 before iterating,
 	// so that few margins are evaluated far from the answer.
 	const top, bottom = 0.2, 0.002
@@ -420,6 +397,17 @@ func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, boo
 		}
 	}
 	return physics.FindRootFrom(at, lo, hi, mLo, mHi, potentialTol)
+}
+
+// withPotential is the pair at surface potential |psi| (V), of the sign of
+// the present one: a remedy raises the charge a surface has.
+func (cs *Case) withPotential(psi float64) physics.Pair {
+	p := cs.Pair
+	p.Potential = psi
+	if !(cs.Pair.Potential > 0) {
+		p.Potential = -psi
+	}
+	return p
 }
 
 // potentialTol is the accuracy of potential targets, V.
@@ -469,7 +457,7 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	}
 	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	withConc := func(conc float64) physics.Pair {
-		return cs.withIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+		return cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
 	}
 	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
 	conc := c.MultivalentConc

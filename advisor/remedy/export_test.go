@@ -3,26 +3,11 @@ package remedy
 import (
 	"maps"
 	"slices"
-
-	"colloidtriage/physics"
 )
 
-// Internals for the tests of package remedy_test, which take their cases
-// from the advisor.
-var (
-	StabilityMargin                = stabilityMargin
-	IonicStrengthFloor             = ionicStrengthFloor
-	SmallestAcceptablePotential    = smallestAcceptablePotential
-	LargestAcceptableIonicStrength = largestAcceptableIonicStrength
-	ApproachRoot                   = approachRoot
-)
-
-const (
-	MultivalentTol   = multivalentTol
-	IonicStrengthTol = ionicStrengthTol
-	PotentialTol     = potentialTol
-)
-
-func (cs *Case) WithIonicStrength(I float64) physics.Pair { return cs.withIonicStrength(I) }
+// Internals for the tests of package remedy_test. The tests that need a
+// fully evaluated case live in the advisor (advisor/remedy_case_test.go),
+// which builds it.
+var ApproachRoot = approachRoot
 
 func SolverIDs() []string { return slices.Sorted(maps.Keys(solvers)) }

@@ -23,7 +23,7 @@ func clearLayerCriterion(cs *Case) string {
 // that meets the clear-layer criterion at the sample's volume fraction.
 func allowedStokesSpeed(cs *Case) float64 {
 	c := cs.Cond
-	return c.MaxClear / c.ShelfLife / physics.RichardsonZakiFactor(c.VolumeFraction, physics.RichardsonZakiExponentLowRe)
+	return c.MaxClear / c.ShelfLife / c.Hindrance()
 }
 
 func solveParticleSize(cs *Case) (Target, string, bool) {
@@ -32,13 +32,12 @@ func solveParticleSize(cs *Case) (Target, string, bool) {
 	if drho == 0 {
 		return Target{}, "density already matched", false
 	}
-	d := math.Sqrt(18 * c.Liquid.Viscosity * allowedStokesSpeed(cs) / (drho * physics.StandardGravity))
+	d := 2 * physics.StokesRadius(allowedStokesSpeed(cs), drho, c.Liquid.Viscosity)
 	// Particles whose gravitational length reaches the container height
 	// never leave a clear layer, however long they stand: at sedimentation
 	// equilibrium the top holds at least 1/e of the bottom's concentration
 	// (Perrin's barometric profile).
-	kT := physics.Boltzmann * c.StorageTempK
-	brownian := 2 * math.Cbrt(3*kT/(4*math.Pi*drho*physics.StandardGravity*c.Height))
+	brownian := 2 * physics.PerrinRadius(c.Height, drho, c.StorageTempK)
 	crit := clearLayerCriterion(cs)
 	if brownian > d {
 		d = brownian
@@ -60,7 +59,7 @@ const (
 // (by a weighting agent) to the liquid for emulsions and foams.
 func solveDensityMatch(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	maxDrho := 9 * c.Liquid.Viscosity * allowedStokesSpeed(cs) / (2 * c.Radius * c.Radius * physics.StandardGravity)
+	maxDrho := physics.StokesDensityDifference(allowedStokesSpeed(cs), c.Radius, c.Liquid.Viscosity)
 	crit := clearLayerCriterion(cs)
 	if c.Phase != "solid" {
 		if c.ParticleDensity < c.Liquid.Density {
@@ -82,19 +81,14 @@ func solveDensityMatch(cs *Case) (Target, string, bool) {
 
 func solveViscosity(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	drho := math.Abs(c.ParticleDensity - c.Liquid.Density)
-	eta := 2 * c.Radius * c.Radius * drho * physics.StandardGravity / (9 * allowedStokesSpeed(cs))
+	eta := physics.StokesViscosity(allowedStokesSpeed(cs), c.Radius, c.ParticleDensity-c.Liquid.Density)
 	return Target{"medium.viscosity_mPa_s", ">=", eta * 1e3, "mPa s"},
 		clearLayerCriterion(cs) + "; the low-shear viscosity is what counts", true
 }
 
 func solveYieldStress(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	largest := c.Radius
-	if c.Classes != nil {
-		largest = c.Classes[len(c.Classes)-1].Diameter / 2
-	}
-	tau := physics.YieldStressToHoldSphere(largest, c.ParticleDensity-c.Liquid.Density)
+	tau := physics.YieldStressToHoldSphere(c.LargestRadius(), c.ParticleDensity-c.Liquid.Density)
 	return Target{"medium.yield_stress_Pa", ">=", tau, "Pa"},
 		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985)", true
 }

@@ -68,7 +68,7 @@ func solveRipeningInhibitor(cs *Case) (Target, string, bool) {
 		return Target{}, "no ripening rate computed", false
 	}
 	// LSW rate is proportional to the solubility of the dispersed phase.
-	allowed := 7 * c.Radius * c.Radius * c.Radius / c.ShelfLife * 1e27
+	allowed := physics.DoublingRate(c.Radius, c.ShelfLife) * 1e27
 	return Target{"particles.solubility_mol_m3", "<=", c.Droplet.Solubility * allowed / rate, "mol/m^3"},
 		"time to double the diameter by LSW ripening >= shelf life; an inhibitor lowers the effective solubility (Kabalnov 2001)", true
 }
@@ -139,13 +139,12 @@ func solveStorageTemperature(cs *Case) (Target, string, bool) {
 // Debye length below the barrier height.
 func solveProcessShear(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	kT := physics.Boltzmann * c.StorageTempK
-	d := 2 * c.Radius
-	g := 2 * kT / (c.Liquid.Viscosity * d * d * d)
+	g := physics.OrthoPerikineticShearRate(1, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK)
 	crit := "orthokinetic over perikinetic collision rate <= 1"
 	if b, ok := cs.Reported("energy_barrier"); ok && b > 0 && cs.Pair.Kappa > 0 {
-		width := 1 / math.Max(cs.Pair.Kappa, 1/c.Radius)
-		byBarrier := b * kT / (6 * math.Pi * c.Liquid.Viscosity * c.Radius * c.Radius * width)
+		kT := physics.Boltzmann * c.StorageTempK
+		width := physics.DoubleLayerRange(cs.Pair.Kappa, c.Radius)
+		byBarrier := physics.HydrodynamicShearRate(b*kT, c.Liquid.Viscosity, c.Radius, width)
 		if byBarrier > g {
 			g, crit = byBarrier, "work of shear across one Debye length below the energy barrier"
 		}

@@ -156,6 +156,9 @@ def main():
     kt_e = KT / E
     print(f"# surface potential estimate: Nernst slope ln10 kT/e {math.log(10) * kt_e * 1e3:.5f} mV/pH;"
           f" 4kT/e tanh(ln10 * 2 / 16) = {4 * kt_e * math.tanh(math.log(10) * 2 / 16) * 1e3:.4f} mV")
+    print("# reduced surface potential gamma = tanh(z e psi/(4 kT)) (Verwey & Overbeek 1948), 298.15 K")
+    for z, psi in [(1, 0.025), (1, -0.05), (2, 0.025), (1, 0.2)]:
+        print(f"z {z} psi {psi * 1e3:g} mV: {math.tanh(z * E * psi / (4 * KT)):.9f}")
     print("# Tabor-Winterton (nu_e 3.0e15 Hz, 298.15 K), J")
     print(f"water in vacuum (80, 1.333; 1, 1): {tabor_winterton(80, 1.333, 1, 1):.6e}")
     print(f"water in vacuum (78.4, 1.333; 1, 1): {tabor_winterton(78.4, 1.333, 1, 1):.6e}")

@@ -2,8 +2,9 @@
 """Reference values for the inverted formulas of physics: Stokes' law solved
 for radius, density difference and viscosity; Perrin's gravitational length
 solved for radius; the hydrodynamic shear work and Smoluchowski's
-orthokinetic-to-perikinetic ratio solved for the shear rate
-(physics/sedimentation.go, shear.go, kinetics.go).
+orthokinetic-to-perikinetic ratio solved for the shear rate; the
+Lifshitz-Slyozov-Wagner doubling time solved for the rate
+(physics/sedimentation.go, shear.go, kinetics.go, ripening.go).
 
 Run with any python3 (standard library only):
 
@@ -40,6 +41,10 @@ def main():
     # Smoluchowski (1917), ratio = G d^3 eta / (2 kT), solved for G.
     d = 1e-6
     print(f"# orthokinetic = perikinetic, d=1um eta=1mPas 25C: {2 * KB * T / (eta * d**3):.6e} 1/s")
+    # Lifshitz-Slyozov-Wagner: r^3 grows linearly at rate w, so (2r)^3 - r^3
+    # = w t, solved for w: the rate that doubles r = 1 um in one year.
+    r, year = 1e-6, 365.25 * 86400
+    print(f"# LSW rate doubling r=1um in 365.25 d: {7 * r**3 / year:.6e} m^3/s")
 
 
 if __name__ == "__main__":
