@@ -1,7 +1,8 @@
 #!/usr/bin/env python3
 """Freezing points, densities and viscosities of water-co-solvent mixtures:
-the tables physics/freezing.go holds and the [calc] check values of
-physics/freezing_test.go and physics/cosolventliquid_test.go.
+the tables physics/freezing.go holds, the [calc] check values of
+physics/freezing_test.go, and Melinder's property values that
+physics/cosolventliquid_test.go compares with handbook tables.
 
 Run with any python3 (standard library only):
 
@@ -101,6 +102,12 @@ def main():
     for m in (0.05, 0.10, 0.25, 0.50):
         print(f"  m = {m}: NaCl {KF * 2 * m:.3f}, CaCl2 {KF * 3 * m:.3f}")
     print(f"  NaCl 1 % w/w: m = {10 / 58.443 / 0.99:.4f} mol/kg")
+    print("# Melinder density (kg/m^3) and viscosity (mPa s) at 20 C, to set beside the tables")
+    for name, fl in (("EG", MEG), ("PG", MPG)):
+        for x in (0, 20, 40):
+            rho = melinder(fl, "rho", x, 20)
+            mu = math.exp(melinder(fl, "lnmu", x, 20))
+            print(f"  {name} {x} %: {rho:.1f}, {mu:.3f}")
 
 
 if __name__ == "__main__":
