@@ -34,6 +34,10 @@ const (
 	mimeCSV    = "text/csv"
 )
 
+// maxSampleID is the longest sample_id (validate max=128) an item echoes;
+// a longer one is clipped.
+const maxSampleID = 128
+
 // statusClientClosedRequest records a batch abandoned because the client
 // went away (the status nginx logs for the same event); no client sees it.
 const statusClientClosedRequest = 499
@@ -71,11 +75,6 @@ type batchResponse struct {
 	IdempotencyKey string      `json:"idempotency_key,omitempty"`
 }
 
-// batchRequest is the JSON form of a batch.
-type batchRequest struct {
-	Samples *[]json.RawMessage `json:"samples"`
-}
-
 // batch triages many samples in one request. The body is JSON
 // ({"samples": [...]}), NDJSON (one sample per line) or CSV (see csv.go);
 // the answer is JSON, NDJSON or CSV as the Accept header asks, by default
@@ -109,10 +108,6 @@ func (h *handlers) batch(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	if len(entries) > maxBatchSamples {
-		return fail(batchTooLarge,
-			fmt.Sprintf("the batch holds more than %d samples; split it into several requests", maxBatchSamples))
-	}
 	ctx := c.Request().Context()
 	switch out.mediaType {
 	case mimeNDJSON:
@@ -144,7 +139,8 @@ func (h *handlers) batch(c echo.Context) error {
 func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBase, error) {
 	switch mt {
 	case mimeNDJSON:
-		return ndjsonEntries(body), func(_ int, ptr string) string { return ptr }, nil
+		entries, err := ndjsonEntries(body)
+		return entries, func(_ int, ptr string) string { return ptr }, err
 	case mimeCSV:
 		entries, err := csvEntries(body, *d)
 		return entries, csvPointer, err
@@ -163,25 +159,6 @@ func readBatchBody(c echo.Context) ([]byte, error) {
 
 // utf8BOM is dropped from the start of a body: spreadsheet programs write it.
 var utf8BOM = []byte("\xef\xbb\xbf")
-
-// jsonEntries splits {"samples": [...]} into its samples. The envelope is
-// decoded strictly; each sample stays raw and is decoded on its own later,
-// so that one of the wrong shape fails alone.
-func jsonEntries(body []byte) ([]batchEntry, error) {
-	var req batchRequest
-	if err := unmarshalStrict(body, &req); err != nil {
-		return nil, err
-	}
-	if req.Samples == nil {
-		return nil, fail(samplesMissing,
-			`send {"samples": [sample, ...]}`, input.FieldProblem{Pointer: "/samples", Reason: "required"})
-	}
-	entries := make([]batchEntry, len(*req.Samples))
-	for i, raw := range *req.Samples {
-		entries[i] = batchEntry{raw: raw}
-	}
-	return entries, nil
-}
 
 // triageAll triages every entry with a pool of GOMAXPROCS workers. Results
 // are written by index, so the output order is the input order whatever
@@ -256,7 +233,7 @@ func (h *handlers) triageEntry(i int, e batchEntry, base pointerBase) (item batc
 		}
 		return failedItem(item, err, i, base)
 	}
-	item.SampleID = s.SampleID
+	item.SampleID = clip(s.SampleID, maxSampleID)
 	if err := h.validator.validate(&s); err != nil {
 		return failedItem(item, err, i, base)
 	}

@@ -12,11 +12,12 @@ import (
 // and its line counts lines of the body. The whole body is read first (it
 // is bounded by batchBodyLimit): a batch over maxBatchSamples is then
 // refused with 413 before any result is streamed, rather than ending in an
-// error line that a line-by-line consumer might miss.
+// error line that a line-by-line consumer might miss. Splitting stops at
+// the first line past the limit.
 //
 // Pointers in an NDJSON item's problem are relative to its own line, which
 // is its own JSON document.
-func ndjsonEntries(body []byte) []batchEntry {
+func ndjsonEntries(body []byte) ([]batchEntry, error) {
 	var entries []batchEntry
 	line := 0
 	for len(body) > 0 {
@@ -27,9 +28,12 @@ func ndjsonEntries(body []byte) []batchEntry {
 		if len(text) == 0 {
 			continue
 		}
+		if len(entries) == maxBatchSamples {
+			return nil, tooManySamples()
+		}
 		entries = append(entries, batchEntry{raw: text, line: line})
 	}
-	return entries
+	return entries, nil
 }
 
 // streamNDJSON answers with one item per line in input order, flushing each

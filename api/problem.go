@@ -2,7 +2,9 @@ package api
 
 import (
 	"errors"
+	"fmt"
 	"net/http"
+	"unicode/utf8"
 
 	"colloidtriage/advisor/input"
 
@@ -118,9 +120,44 @@ func fail(k kind, detail string, fields ...input.FieldProblem) error {
 	return &problemError{kind: k, detail: detail, fields: fields}
 }
 
+// maxProblems is the most field problems one problem detail lists; the
+// detail says how many more there were.
+const maxProblems = 100
+
+// maxEcho is the most bytes of one string of a problem detail (a detail,
+// a pointer, a reason): they may quote what the client sent.
+const maxEcho = 256
+
 func (e *problemError) problem() Problem {
 	c := problemKinds[e.kind]
-	return Problem{Type: c.typ, Title: c.title, Status: c.status, Detail: e.detail, Errors: e.fields}
+	p := Problem{Type: c.typ, Title: c.title, Status: c.status, Detail: clip(e.detail, maxEcho)}
+	fields := e.fields
+	if n := len(fields) - maxProblems; n > 0 {
+		fields = fields[:maxProblems]
+		p.Detail += fmt.Sprintf(" (%d more problems not listed)", n)
+	}
+	if len(fields) > 0 {
+		p.Errors = make([]input.FieldProblem, len(fields))
+		for i, f := range fields {
+			p.Errors[i] = input.FieldProblem{Pointer: clip(f.Pointer, maxEcho), Reason: clip(f.Reason, maxEcho),
+				Unit: f.Unit, Valid: clip(f.Valid, maxEcho)}
+		}
+	}
+	return p
+}
+
+// clip cuts s to at most n bytes, at a character boundary, marking the cut
+// with an ellipsis, so that a string a client sent is never echoed whole.
+func clip(s string, n int) string {
+	if len(s) <= n {
+		return s
+	}
+	const mark = "…"
+	cut := n - len(mark)
+	for cut > 0 && !utf8.RuneStart(s[cut]) {
+		cut--
+	}
+	return s[:cut] + mark
 }
 
 // problemFor maps any handler error to a problem detail; internal detail is
