@@ -522,8 +522,23 @@ func countDigits(s string) int {
 var csvAnswerHeader = []string{"sample_id", "status", "top_cause", "score", "top_remedy",
 	"target_quantity", "target_op", "target_value", "target_unit", "problem"}
 
+// csvTextColumns are the columns of csvAnswerHeader that hold text: all
+// but status, score and target_value.
+var csvTextColumns = []int{0, 2, 4, 5, 6, 8, 9}
+
+// inertCell keeps a spreadsheet from running a text cell as a formula: a
+// cell that begins with =, +, -, @, tab or carriage return gets a leading
+// single quote, as OWASP's "CSV Injection" page recommends. Only text
+// cells go through it, so a negative number stays a number.
+func inertCell(s string) string {
+	if s != "" && strings.IndexByte("=+-@\t\r", s[0]) >= 0 {
+		return "'" + s
+	}
+	return s
+}
+
 // writeCSVItems answers with one CSV row per item, numbers written with the
-// dialect's decimal separator.
+// dialect's decimal separator and text cells made inert (inertCell).
 func writeCSVItems(c echo.Context, items []batchItem, d csvDialect) error {
 	var buf bytes.Buffer
 	w := csv.NewWriter(&buf)
@@ -549,6 +564,9 @@ func writeCSVItems(c echo.Context, items []batchItem, d csvDialect) error {
 		}
 		if it.Problem != nil {
 			row[9] = problemSummary(it.Problem)
+		}
+		for _, j := range csvTextColumns {
+			row[j] = inertCell(row[j])
 		}
 		_ = w.Write(row)
 	}
