@@ -1104,3 +1104,15 @@ func TestLogsHoldNoBody(t *testing.T) {
 		t.Errorf("a request body reached the log:\n%s", logBuf.String())
 	}
 }
+
+// TestLogFieldsClipped: what a client chooses (a method, a request id)
+// reaches the access log clipped, so one request writes one short line.
+func TestLogFieldsClipped(t *testing.T) {
+	t.Parallel()
+	var logBuf bytes.Buffer
+	h := New(testEngine(t), Config{Logger: zerolog.New(&logBuf)})
+	do(t, h, strings.Repeat("M", 32<<10), "/v1/triage", "", "")
+	if logBuf.Len() > 1024 {
+		t.Errorf("%d bytes logged for one request: %.200s", logBuf.Len(), logBuf.String())
+	}
+}

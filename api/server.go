@@ -54,6 +54,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	v1.GET("/catalog", h.catalog, auth)
 	v1.GET("/rules", h.rules, auth)
 	v1.GET("/materials", h.materials, auth)
+	m.route(e.Routes())
 	return e
 }
 
