@@ -1116,3 +1116,44 @@ func TestLogFieldsClipped(t *testing.T) {
 		t.Errorf("%d bytes logged for one request: %.200s", logBuf.Len(), logBuf.String())
 	}
 }
+
+// TestRequestIDChecked: a client's X-Request-Id is kept only when it is at
+// most 64 characters of [A-Za-z0-9._-]; otherwise the service makes its
+// own. Either way the header, the report's request_id and the log agree.
+func TestRequestIDChecked(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		sent string
+		kept bool
+	}{
+		{"lims-2026.12_05-0001", true},
+		{strings.Repeat("a", 64), true},
+		{strings.Repeat("a", 65), false},
+		{strings.Repeat("x", 60<<10), false},
+		{"has space", false},
+		{"<script>", false},
+		{"ünïcode", false},
+	}
+	for _, c := range cases {
+		var logBuf bytes.Buffer
+		h := New(testEngine(t), Config{Logger: zerolog.New(&logBuf)})
+		rec := do(t, h, http.MethodPost, "/v1/triage", echo.MIMEApplicationJSON, demo(t, "gravity_settling.json"),
+			"X-Request-Id", c.sent)
+		id := rec.Header().Get("X-Request-Id")
+		var body struct {
+			RequestID string `json:"request_id"`
+		}
+		var line struct {
+			RequestID string `json:"request_id"`
+		}
+		if err := json.Unmarshal(rec.Body.Bytes(), &body); err != nil {
+			t.Fatal(err)
+		}
+		if err := json.Unmarshal(logBuf.Bytes(), &line); err != nil {
+			t.Fatal(err)
+		}
+		if (id == c.sent) != c.kept || len(id) == 0 || len(id) > 64 || body.RequestID != id || line.RequestID != id {
+			t.Errorf("sent %.70q: header %.70q, body %.70q, log %.70q", c.sent, id, body.RequestID, line.RequestID)
+		}
+	}
+}

@@ -31,7 +31,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	e.JSONSerializer = plainJSON{}
 	e.HTTPErrorHandler = errorHandler
 	m := newMetrics()
-	e.Use(middleware.RequestIDWithConfig(middleware.RequestIDConfig{TargetHeader: echo.HeaderXRequestID}))
+	e.Use(requestID)
 	e.Use(accessLog(cfg.Logger))
 	e.Use(m.middleware)
 	e.Use(recoverPanic)
