@@ -35,7 +35,11 @@ func decodeJSON(c echo.Context, v any) error {
 // chunked body (echo's limit reader then fails with its own 413 error).
 // With a declared Content-Length (already checked against the limit) the
 // buffer is allocated once at that size rather than grown by doubling.
+// A body already read (by the idempotency middleware) is not read again.
 func readBody(c echo.Context, unreadable kind) ([]byte, error) {
+	if body, ok := c.Get(bodyKey).([]byte); ok {
+		return body, nil
+	}
 	var buf bytes.Buffer
 	if n := c.Request().ContentLength; n > 0 {
 		buf.Grow(int(n) + bytes.MinRead)

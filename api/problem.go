@@ -33,6 +33,7 @@ const (
 	typeInvalidQuery  = "/problems/invalid-query"
 	typeUnauthorized  = "/problems/unauthorized"
 	typeInternal      = "/problems/internal"
+	typeIdempotency   = "/problems/idempotency-key"
 	typeBlank         = "about:blank"
 )
 
@@ -67,6 +68,9 @@ const (
 	mediaUnsupported
 	mediaNotAcceptable
 	internalError
+	idempotencyKeyInvalid
+	idempotencyKeyReused
+	idempotencyKeyInFlight
 	kindCount
 )
 
@@ -79,30 +83,33 @@ type problemClass struct {
 // problemKinds is the one place where a failure becomes a problem type,
 // a title and an HTTP status.
 var problemKinds = [kindCount]problemClass{
-	bodyUnreadable:     {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
-	jsonInvalid:        {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
-	bodyEmpty:          {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
-	fieldWrongType:     {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
-	fieldUnknown:       {typeInvalidJSON, "Unknown field", http.StatusBadRequest},
-	memberOffContract:  {typeInvalidJSON, "A member is not part of the contract", http.StatusBadRequest},
-	sampleNotObject:    {typeInvalidJSON, "A sample is not a JSON object", http.StatusBadRequest},
-	batchUnreadable:    {typeInvalidBatch, "The request body could not be read", http.StatusBadRequest},
-	samplesMissing:     {typeInvalidBatch, "The batch has no samples field", http.StatusBadRequest},
-	batchTooLarge:      {typeBatchTooLarge, "Too many samples in one batch", http.StatusRequestEntityTooLarge},
-	csvMediaType:       {typeInvalidCSV, "The CSV media type is incomplete or invalid", http.StatusUnsupportedMediaType},
-	csvNotAcceptable:   {typeInvalidCSV, "Not acceptable", http.StatusNotAcceptable},
-	csvEmpty:           {typeInvalidCSV, "The CSV body is empty", http.StatusBadRequest},
-	csvSyntax:          {typeInvalidCSV, "The body is not valid CSV", http.StatusBadRequest},
-	csvHeaderInvalid:   {typeInvalidCSV, "The CSV header names unknown or repeated columns", http.StatusBadRequest},
-	csvRowLength:       {typeInvalidCSV, "A row has the wrong number of fields", http.StatusBadRequest},
-	csvCellInvalid:     {typeInvalidCSV, "A cell does not parse", http.StatusBadRequest},
-	queryInvalid:       {typeInvalidQuery, "A query parameter is invalid", http.StatusBadRequest},
-	fieldsInvalid:      {typeInvalidSample, "The sample has invalid fields", http.StatusUnprocessableEntity},
-	sampleInconsistent: {typeInvalidSample, "The sample is physically invalid or inconsistent", http.StatusUnprocessableEntity},
-	keyRejected:        {typeUnauthorized, "Missing or invalid API key", http.StatusUnauthorized},
-	mediaUnsupported:   {typeBlank, "Unsupported media type", http.StatusUnsupportedMediaType},
-	mediaNotAcceptable: {typeBlank, "Not acceptable", http.StatusNotAcceptable},
-	internalError:      {typeInternal, "Internal error", http.StatusInternalServerError},
+	bodyUnreadable:         {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
+	jsonInvalid:            {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
+	bodyEmpty:              {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
+	fieldWrongType:         {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
+	fieldUnknown:           {typeInvalidJSON, "Unknown field", http.StatusBadRequest},
+	memberOffContract:      {typeInvalidJSON, "A member is not part of the contract", http.StatusBadRequest},
+	sampleNotObject:        {typeInvalidJSON, "A sample is not a JSON object", http.StatusBadRequest},
+	batchUnreadable:        {typeInvalidBatch, "The request body could not be read", http.StatusBadRequest},
+	samplesMissing:         {typeInvalidBatch, "The batch has no samples field", http.StatusBadRequest},
+	batchTooLarge:          {typeBatchTooLarge, "Too many samples in one batch", http.StatusRequestEntityTooLarge},
+	csvMediaType:           {typeInvalidCSV, "The CSV media type is incomplete or invalid", http.StatusUnsupportedMediaType},
+	csvNotAcceptable:       {typeInvalidCSV, "Not acceptable", http.StatusNotAcceptable},
+	csvEmpty:               {typeInvalidCSV, "The CSV body is empty", http.StatusBadRequest},
+	csvSyntax:              {typeInvalidCSV, "The body is not valid CSV", http.StatusBadRequest},
+	csvHeaderInvalid:       {typeInvalidCSV, "The CSV header names unknown or repeated columns", http.StatusBadRequest},
+	csvRowLength:           {typeInvalidCSV, "A row has the wrong number of fields", http.StatusBadRequest},
+	csvCellInvalid:         {typeInvalidCSV, "A cell does not parse", http.StatusBadRequest},
+	queryInvalid:           {typeInvalidQuery, "A query parameter is invalid", http.StatusBadRequest},
+	fieldsInvalid:          {typeInvalidSample, "The sample has invalid fields", http.StatusUnprocessableEntity},
+	sampleInconsistent:     {typeInvalidSample, "The sample is physically invalid or inconsistent", http.StatusUnprocessableEntity},
+	keyRejected:            {typeUnauthorized, "Missing or invalid API key", http.StatusUnauthorized},
+	mediaUnsupported:       {typeBlank, "Unsupported media type", http.StatusUnsupportedMediaType},
+	mediaNotAcceptable:     {typeBlank, "Not acceptable", http.StatusNotAcceptable},
+	internalError:          {typeInternal, "Internal error", http.StatusInternalServerError},
+	idempotencyKeyInvalid:  {typeIdempotency, "The Idempotency-Key is not valid", http.StatusBadRequest},
+	idempotencyKeyReused:   {typeIdempotency, "The Idempotency-Key was used with another request", http.StatusUnprocessableEntity},
+	idempotencyKeyInFlight: {typeIdempotency, "A request with this Idempotency-Key is still running", http.StatusConflict},
 }
 
 // problemError is a failure of a known kind, with what the client needs to

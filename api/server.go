@@ -16,6 +16,9 @@ type Config struct {
 	BodyLimit string   // body limit of the single-sample routes in echo's notation; "256K" is 256,000 bytes
 	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
 	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
+	// Idempotency keeps the answers to requests with an Idempotency-Key;
+	// nil is a memory store of DefaultMemoryStoreConfig.
+	Idempotency IdempotencyStore
 }
 
 // DefaultConfig is the configuration of a local, unauthenticated service.
@@ -45,12 +48,16 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	// middleware adds catch-all routes that would turn 405s into 404s.
 	auth := keyAuthWithConfig(keyAuthConfig{Keys: cfg.APIKeys})
 	limit := middleware.BodyLimit(cfg.BodyLimit)
+	if cfg.Idempotency == nil {
+		cfg.Idempotency = NewMemoryStore(DefaultMemoryStoreConfig)
+	}
+	once := idempotent(cfg.Idempotency, bodyUnreadable)
 	e.GET("/openapi.json", h.openAPI, auth)
 	v1 := e.Group("/v1")
-	v1.POST("/triage", h.triage, auth, limit)
-	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit))
-	v1.POST("/scales", h.scales, auth, limit)
-	v1.POST("/interaction-profile", h.interactionProfile, auth, limit)
+	v1.POST("/triage", h.triage, auth, limit, once)
+	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit), idempotent(cfg.Idempotency, batchUnreadable))
+	v1.POST("/scales", h.scales, auth, limit, once)
+	v1.POST("/interaction-profile", h.interactionProfile, auth, limit, once)
 	v1.GET("/catalog", h.catalog, auth)
 	v1.GET("/rules", h.rules, auth)
 	v1.GET("/materials", h.materials, auth)
