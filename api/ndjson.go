@@ -37,14 +37,19 @@ func ndjsonEntries(body []byte) ([]batchEntry, error) {
 }
 
 // streamNDJSON answers with one item per line in input order, flushing each
-// line as soon as it and all before it are triaged. The status (200) is
-// sent before the first item: from then on every failure is an item's.
+// line as soon as it and all before it are triaged, then the end line
+// (ndjsonEnd). The status (200) is sent before the first item: from then
+// on every failure is an item's, and a stream cut short has no end line.
 func (h *handlers) streamNDJSON(c echo.Context, entries []batchEntry, base pointerBase) error {
 	res := c.Response()
 	res.Header().Set(echo.HeaderContentType, mimeNDJSON)
 	res.WriteHeader(http.StatusOK)
 	res.Flush()
+	failed := 0
 	_, err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+		if it.Status != http.StatusOK {
+			failed++
+		}
 		line, err := marshalPlain(it)
 		if err != nil {
 			line, _ = marshalPlain(failedItem(batchItem{Index: it.Index, Line: it.Line, SampleID: it.SampleID}, err, it.Index, base))
@@ -55,5 +60,20 @@ func (h *handlers) streamNDJSON(c echo.Context, entries []batchEntry, base point
 		res.Flush()
 		return nil
 	})
-	return err
+	if err != nil {
+		return err
+	}
+	end, _ := marshalPlain(ndjsonEnd{End: true, Count: len(entries), Failed: failed}) // integers always encode
+	if _, err := res.Write(append(end, '\n')); err != nil {
+		return echo.NewHTTPError(statusClientClosedRequest).SetInternal(err)
+	}
+	return nil
+}
+
+// ndjsonEnd is the last line of an NDJSON answer, so that a client can tell
+// a whole answer from one cut short.
+type ndjsonEnd struct {
+	End    bool `json:"end"`
+	Count  int  `json:"count"`
+	Failed int  `json:"failed"`
 }

@@ -16,6 +16,9 @@ type Config struct {
 	BodyLimit string   // body limit of the single-sample routes in echo's notation; "256K" is 256,000 bytes
 	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
 	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
+	// Draining reports that the service is shutting down: /readyz then
+	// answers 503. Nil means never.
+	Draining func() bool
 	// Idempotency keeps the answers to requests with an Idempotency-Key;
 	// nil is a memory store of DefaultMemoryStoreConfig.
 	Idempotency IdempotencyStore
@@ -39,7 +42,11 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	e.Use(m.middleware)
 	e.Use(recoverPanic)
 
-	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger}
+	if cfg.Draining == nil {
+		cfg.Draining = func() bool { return false }
+	}
+	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger,
+		draining: cfg.Draining}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
@@ -71,6 +78,7 @@ type handlers struct {
 	openapi   []byte
 	metrics   *metrics
 	log       zerolog.Logger
+	draining  func() bool
 }
 
 func (h *handlers) health(c echo.Context) error {
@@ -78,8 +86,12 @@ func (h *handlers) health(c echo.Context) error {
 }
 
 // ready reports ready once the rule set is compiled and the library loaded,
-// which New's caller has done before serving.
+// which New's caller has done before serving, until the service begins to
+// shut down.
 func (h *handlers) ready(c echo.Context) error {
+	if h.draining() {
+		return c.JSON(http.StatusServiceUnavailable, map[string]string{"status": "draining"})
+	}
 	return c.JSON(http.StatusOK, map[string]string{"status": "ready", "rules": h.engine.RuleSet().Hash,
 		"engine": advisor.EngineVersion})
 }
