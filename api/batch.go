@@ -89,7 +89,11 @@ func (h *handlers) batch(c echo.Context) error {
 			"send the batch as application/json, application/x-ndjson or text/csv")
 	}
 	var inDialect *csvDialect
-	if mt == mimeCSV {
+	if mt != mimeCSV {
+		if err := requireUTF8(params); err != nil {
+			return err
+		}
+	} else {
 		d, err := csvDialectOf(params, nil)
 		if err != nil {
 			return err
@@ -100,7 +104,7 @@ func (h *handlers) batch(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	body, err := readBatchBody(c)
+	body, err := readBody(c, batchUnreadable)
 	if err != nil {
 		return err
 	}
@@ -148,17 +152,6 @@ func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBas
 	entries, err := jsonEntries(body)
 	return entries, func(i int, ptr string) string { return "/samples/" + strconv.Itoa(i) + ptr }, err
 }
-
-func readBatchBody(c echo.Context) ([]byte, error) {
-	body, err := readBody(c, batchUnreadable)
-	if err != nil {
-		return nil, err
-	}
-	return bytes.TrimPrefix(body, utf8BOM), nil
-}
-
-// utf8BOM is dropped from the start of a body: spreadsheet programs write it.
-var utf8BOM = []byte("\xef\xbb\xbf")
 
 // triageAll triages every entry with a pool of GOMAXPROCS workers. Results
 // are written by index, so the output order is the input order whatever

@@ -45,6 +45,7 @@ type kind int
 
 const (
 	bodyUnreadable kind = iota + 1
+	bodyTimeout
 	jsonInvalid
 	bodyEmpty
 	fieldWrongType
@@ -84,6 +85,7 @@ type problemClass struct {
 // a title and an HTTP status.
 var problemKinds = [kindCount]problemClass{
 	bodyUnreadable:         {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
+	bodyTimeout:            {typeBlank, "Request Timeout", http.StatusRequestTimeout},
 	jsonInvalid:            {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
 	bodyEmpty:              {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
 	fieldWrongType:         {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
