@@ -333,7 +333,11 @@ func TestBatchItemPanic(t *testing.T) {
 	t.Parallel()
 	h := &handlers{validator: newSampleValidator(), metrics: newMetrics()} // no engine: Triage panics
 	entries := []batchEntry{{raw: []byte(limsCases[0].sample("P0"))}, {raw: []byte(limsCases[2].sample("P1"))}}
-	items, err := h.triageAll(context.Background(), entries, csvPointer, nil)
+	var items []batchItem
+	err := h.triageAll(context.Background(), entries, csvPointer, func(it batchItem) error {
+		items = append(items, it)
+		return nil
+	})
 	if err != nil || len(items) != 2 {
 		t.Fatal(err)
 	}
@@ -355,7 +359,7 @@ func TestBatchCancelled(t *testing.T) {
 	for i := range entries {
 		entries[i] = batchEntry{raw: []byte(limsCases[0].sample("C"))}
 	}
-	_, err := h.triageAll(ctx, entries, csvPointer, nil)
+	err := h.triageAll(ctx, entries, csvPointer, func(batchItem) error { return nil })
 	var he *echo.HTTPError
 	if !errors.As(err, &he) || he.Code != statusClientClosedRequest {
 		t.Errorf("error %v, want %d", err, statusClientClosedRequest)

@@ -537,40 +537,42 @@ func inertCell(s string) string {
 	return s
 }
 
-// writeCSVItems answers with one CSV row per item, numbers written with the
+// csvRow is the answer row of one item, numbers written with the
 // dialect's decimal separator and text cells made inert (inertCell).
-func writeCSVItems(c echo.Context, items []batchItem, d csvDialect) error {
+func csvRow(it batchItem, d csvDialect) []string {
+	num := func(v float64) string {
+		return strings.Replace(strconv.FormatFloat(v, 'g', -1, 64), ".", string(d.decimal), 1)
+	}
+	row := make([]string, len(csvAnswerHeader))
+	row[0], row[1] = it.SampleID, strconv.Itoa(it.Status)
+	if it.Report != nil && len(it.Report.Causes) > 0 {
+		top := it.Report.Causes[0]
+		row[2], row[3] = top.ID, num(top.Score)
+		if len(top.Remedies) > 0 {
+			rem := top.Remedies[0]
+			row[4] = rem.ID
+			if t := rem.Target; t != nil {
+				row[5], row[6], row[7], row[8] = t.Quantity, t.Op, num(t.Value), t.Unit
+			}
+		}
+	}
+	if it.Problem != nil {
+		row[9] = problemSummary(it.Problem)
+	}
+	for _, j := range csvTextColumns {
+		row[j] = inertCell(row[j])
+	}
+	return row
+}
+
+// writeCSV answers with the header and rows in dialect d.
+func writeCSV(c echo.Context, rows [][]string, d csvDialect) error {
 	var buf bytes.Buffer
 	w := csv.NewWriter(&buf)
 	w.Comma = d.delimiter
 	w.UseCRLF = true
-	num := func(v float64) string {
-		return strings.Replace(strconv.FormatFloat(v, 'g', -1, 64), ".", string(d.decimal), 1)
-	}
 	_ = w.Write(csvAnswerHeader)
-	for _, it := range items {
-		row := make([]string, len(csvAnswerHeader))
-		row[0], row[1] = it.SampleID, strconv.Itoa(it.Status)
-		if it.Report != nil && len(it.Report.Causes) > 0 {
-			top := it.Report.Causes[0]
-			row[2], row[3] = top.ID, num(top.Score)
-			if len(top.Remedies) > 0 {
-				rem := top.Remedies[0]
-				row[4] = rem.ID
-				if t := rem.Target; t != nil {
-					row[5], row[6], row[7], row[8] = t.Quantity, t.Op, num(t.Value), t.Unit
-				}
-			}
-		}
-		if it.Problem != nil {
-			row[9] = problemSummary(it.Problem)
-		}
-		for _, j := range csvTextColumns {
-			row[j] = inertCell(row[j])
-		}
-		_ = w.Write(row)
-	}
-	w.Flush()
+	_ = w.WriteAll(rows)
 	if err := w.Error(); err != nil {
 		return err
 	}

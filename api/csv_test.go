@@ -402,7 +402,8 @@ func TestCSVAnswerKeepsNumbers(t *testing.T) {
 	item := batchItem{SampleID: "-7", Status: 200, Report: &advisor.Report{Causes: []advisor.Cause{{ID: "low_surface_charge",
 		Score: 0.5, Remedies: []advisor.Remedy{{ID: "raise_surface_charge",
 			Target: &remedy.Target{Quantity: "particles.zeta_mV", Op: "<=", Value: -30, Unit: "-mV"}}}}}}}
-	if err := writeCSVItems(c, []batchItem{item}, csvDialect{delimiter: ';', decimal: ','}); err != nil {
+	d := csvDialect{delimiter: ';', decimal: ','}
+	if err := writeCSV(c, [][]string{csvRow(item, d)}, d); err != nil {
 		t.Fatal(err)
 	}
 	want := "'-7;200;low_surface_charge;0,5;raise_surface_charge;particles.zeta_mV;<=;-30;'-mV;\r\n"

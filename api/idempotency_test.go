@@ -165,3 +165,32 @@ func TestMemoryStoreBounds(t *testing.T) {
 		t.Errorf("after the TTL: %v %v, %d keys", a, err, len(s.byKey))
 	}
 }
+
+// TestBatchesBounded: past MaxBatches batches at once, a batch is refused
+// with 503, Retry-After and a problem; single samples still pass.
+func TestBatchesBounded(t *testing.T) {
+	t.Parallel()
+	h := New(testEngine(t), Config{OpenAPI: openapi.JSON, MaxBatches: 1})
+	one := demo(t, "gravity_settling.json")
+	blocked := &blockingWriter{ResponseRecorder: httptest.NewRecorder(), started: make(chan struct{}), release: make(chan struct{})}
+	done := make(chan struct{})
+	go func() {
+		req := httptest.NewRequest(http.MethodPost, "/v1/triage/batch", strings.NewReader(compactJSON(t, one)+"\n"))
+		req.Header.Set("Content-Type", mimeNDJSON)
+		h.ServeHTTP(blocked, req)
+		close(done)
+	}()
+	<-blocked.started
+	rec := do(t, h, http.MethodPost, "/v1/triage/batch", mimeNDJSON, compactJSON(t, one)+"\n")
+	if rec.Code != 503 || rec.Header().Get("Retry-After") == "" || !strings.Contains(rec.Body.String(), typeBusy) {
+		t.Errorf("a second batch: %d %q %.200s", rec.Code, rec.Header().Get("Retry-After"), rec.Body)
+	}
+	if rec := do(t, h, http.MethodPost, "/v1/triage", "application/json", one); rec.Code != 200 {
+		t.Errorf("a single sample meanwhile: %d", rec.Code)
+	}
+	close(blocked.release)
+	<-done
+	if rec := do(t, h, http.MethodPost, "/v1/triage/batch", mimeNDJSON, compactJSON(t, one)+"\n"); rec.Code != 200 {
+		t.Errorf("a batch afterwards: %d", rec.Code)
+	}
+}

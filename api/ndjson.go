@@ -46,15 +46,11 @@ func (h *handlers) streamNDJSON(c echo.Context, entries []batchEntry, base point
 	res.WriteHeader(http.StatusOK)
 	res.Flush()
 	failed := 0
-	_, err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+	err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
 		if it.Status != http.StatusOK {
 			failed++
 		}
-		line, err := marshalPlain(it)
-		if err != nil {
-			line, _ = marshalPlain(failedItem(batchItem{Index: it.Index, Line: it.Line, SampleID: it.SampleID}, err, it.Index, base))
-		}
-		if _, err := res.Write(append(line, '\n')); err != nil {
+		if _, err := res.Write(append(itemJSON(it, base), '\n')); err != nil {
 			return echo.NewHTTPError(statusClientClosedRequest).SetInternal(err)
 		}
 		res.Flush()

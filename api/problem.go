@@ -34,6 +34,7 @@ const (
 	typeUnauthorized  = "/problems/unauthorized"
 	typeInternal      = "/problems/internal"
 	typeIdempotency   = "/problems/idempotency-key"
+	typeBusy          = "/problems/busy"
 	typeBlank         = "about:blank"
 )
 
@@ -72,6 +73,7 @@ const (
 	idempotencyKeyInvalid
 	idempotencyKeyReused
 	idempotencyKeyInFlight
+	batchesBusy
 	kindCount
 )
 
@@ -112,6 +114,7 @@ var problemKinds = [kindCount]problemClass{
 	idempotencyKeyInvalid:  {typeIdempotency, "The Idempotency-Key is not valid", http.StatusBadRequest},
 	idempotencyKeyReused:   {typeIdempotency, "The Idempotency-Key was used with another request", http.StatusUnprocessableEntity},
 	idempotencyKeyInFlight: {typeIdempotency, "A request with this Idempotency-Key is still running", http.StatusConflict},
+	batchesBusy:            {typeBusy, "Too many batches at once", http.StatusServiceUnavailable},
 }
 
 // problemError is a failure of a known kind, with what the client needs to

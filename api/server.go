@@ -16,6 +16,9 @@ type Config struct {
 	BodyLimit string   // body limit of the single-sample routes in echo's notation; "256K" is 256,000 bytes
 	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
 	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
+	// MaxBatches is how many batches may run at once; a batch past it is
+	// refused with 503 and Retry-After. 0 means DefaultMaxBatches.
+	MaxBatches int
 	// Draining reports that the service is shutting down: /readyz then
 	// answers 503. Nil means never.
 	Draining func() bool
@@ -23,6 +26,11 @@ type Config struct {
 	// nil is a memory store of DefaultMemoryStoreConfig.
 	Idempotency IdempotencyStore
 }
+
+// DefaultMaxBatches bounds the batches running at once: a batch holds up
+// to 5000 samples and uses every core, so a few at once already fill the
+// machine, and each holds its body and items in memory.
+const DefaultMaxBatches = 4
 
 // DefaultConfig is the configuration of a local, unauthenticated service.
 var DefaultConfig = Config{Logger: zerolog.Nop(), BodyLimit: "256K"}
@@ -45,8 +53,11 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	if cfg.Draining == nil {
 		cfg.Draining = func() bool { return false }
 	}
+	if cfg.MaxBatches <= 0 {
+		cfg.MaxBatches = DefaultMaxBatches
+	}
 	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger,
-		draining: cfg.Draining}
+		draining: cfg.Draining, batches: make(chan struct{}, cfg.MaxBatches)}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
@@ -79,6 +90,7 @@ type handlers struct {
 	metrics   *metrics
 	log       zerolog.Logger
 	draining  func() bool
+	batches   chan struct{} // one token per running batch
 }
 
 func (h *handlers) health(c echo.Context) error {

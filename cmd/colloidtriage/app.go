@@ -11,6 +11,8 @@ import (
 	"net/http"
 	"net/http/httptest"
 	"os"
+	"runtime/debug"
+	"strconv"
 	"strings"
 	"sync/atomic"
 	"time"
@@ -31,6 +33,11 @@ const (
 	exitBadInput = 3
 )
 
+// defaultMemoryLimitMiB is the Go runtime's soft memory limit by default:
+// the collector works harder as the heap nears it, so that batches at once
+// do not grow the process past what a small container has.
+const defaultMemoryLimitMiB = 256
+
 // writeTimeout bounds the time from the end of a request's headers to the
 // end of its answer; shutdownLimit, longer, is how long a shutdown waits
 // for the requests in flight, so that every answer the write timeout
@@ -42,7 +49,7 @@ const (
 
 const usage = `usage:
   colloidtriage serve [--addr HOST:PORT] [--rules DIR] [--api-keys-file FILE] [--drain-delay 5s]
-                                                         run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR);
+                      [--memory-limit-mib 256]           run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR);
                                                          API keys, one per line in FILE or comma-separated in
                                                          $COLLOIDTRIAGE_API_KEYS, guard all but /healthz, /readyz, /metrics;
                                                          on SIGTERM /readyz turns 503, serving goes on for the drain delay,
@@ -104,6 +111,12 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 	addr := fs.String("addr", defAddr, "listen address (env COLLOIDTRIAGE_ADDR)")
 	rulesDir := fs.String("rules", "", "directory of site rule files (*.rules.yaml) added to the built-in set")
 	keysFile := fs.String("api-keys-file", "", "file of API keys, one per line (# comments); adds to env COLLOIDTRIAGE_API_KEYS (comma-separated)")
+	defMem := defaultMemoryLimitMiB
+	if v, err := strconv.Atoi(getenv("COLLOIDTRIAGE_MEMORY_LIMIT_MIB")); err == nil {
+		defMem = v
+	}
+	memLimit := fs.Int("memory-limit-mib", defMem,
+		"soft memory limit of the Go runtime in MiB (env COLLOIDTRIAGE_MEMORY_LIMIT_MIB); 0 leaves the runtime's own (GOMEMLIMIT)")
 	drainDelay := fs.Duration("drain-delay", 5*time.Second,
 		"on SIGTERM, how long to keep serving (with /readyz 503 and connections closed after each answer) before shutting down")
 	if err := fs.Parse(args); err != nil {
@@ -115,6 +128,9 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		return exitUsage
 	}
 	log := zerolog.New(stdout).With().Timestamp().Logger()
+	if *memLimit > 0 {
+		debug.SetMemoryLimit(int64(*memLimit) << 20)
+	}
 	start := time.Now()
 	var dirs []string
 	if *rulesDir != "" {
