@@ -1,6 +1,7 @@
 package api
 
 import (
+	"bufio"
 	"bytes"
 	"context"
 	"encoding/json"
@@ -8,6 +9,7 @@ import (
 	"mime"
 	"net/http"
 	"runtime"
+	"runtime/debug"
 	"strconv"
 	"strings"
 	"sync"
@@ -33,6 +35,10 @@ const (
 	mimeNDJSON = "application/x-ndjson"
 	mimeCSV    = "text/csv"
 )
+
+// maxSampleID is the longest sample_id (validate max=128) an item echoes;
+// a longer one is clipped.
+const maxSampleID = 128
 
 // statusClientClosedRequest records a batch abandoned because the client
 // went away (the status nginx logs for the same event); no client sees it.
@@ -63,20 +69,16 @@ type batchItem struct {
 	Problem  *Problem        `json:"problem,omitempty"`
 }
 
-type batchResponse struct {
-	Count          int         `json:"count"`
-	Failed         int         `json:"failed"`
-	Items          []batchItem `json:"items"`
-	RequestID      string      `json:"request_id"`
-	IdempotencyKey string      `json:"idempotency_key,omitempty"`
+// batchTail is what the JSON answer holds after its items.
+type batchTail struct {
+	Count          int    `json:"count"`
+	Failed         int    `json:"failed"`
+	RequestID      string `json:"request_id"`
+	IdempotencyKey string `json:"idempotency_key,omitempty"`
 }
 
-// batchRequest is the JSON form of a batch.
-type batchRequest struct {
-	Samples *[]json.RawMessage `json:"samples"`
-}
-
-// batch triages many samples in one request. The body is JSON
+// batch triages many samples in one request, at most cap(h.batches) at
+// once (the body is not read for a batch refused as busy). The body is JSON
 // ({"samples": [...]}), NDJSON (one sample per line) or CSV (see csv.go);
 // the answer is JSON, NDJSON or CSV as the Accept header asks, by default
 // NDJSON for NDJSON and JSON otherwise. Items keep the input order and each
@@ -84,13 +86,24 @@ type batchRequest struct {
 // that concern the body as a whole (not parseable, too many samples, a bad
 // CSV header) fail the request before any sample is triaged.
 func (h *handlers) batch(c echo.Context) error {
+	select {
+	case h.batches <- struct{}{}:
+		defer h.batchDone()
+	default:
+		c.Response().Header().Set(echo.HeaderRetryAfter, "5")
+		return fail(batchesBusy, fmt.Sprintf("%d batches are running, the most at once; retry after the Retry-After seconds", cap(h.batches)))
+	}
 	mt, params, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
 	if err != nil || (mt != echo.MIMEApplicationJSON && mt != mimeNDJSON && mt != mimeCSV) {
 		return fail(mediaUnsupported,
 			"send the batch as application/json, application/x-ndjson or text/csv")
 	}
 	var inDialect *csvDialect
-	if mt == mimeCSV {
+	if mt != mimeCSV {
+		if err := requireUTF8(params); err != nil {
+			return err
+		}
+	} else {
 		d, err := csvDialectOf(params, nil)
 		if err != nil {
 			return err
@@ -101,7 +114,7 @@ func (h *handlers) batch(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	body, err := readBatchBody(c)
+	body, err := readBody(c, batchUnreadable)
 	if err != nil {
 		return err
 	}
@@ -109,34 +122,77 @@ func (h *handlers) batch(c echo.Context) error {
 	if err != nil {
 		return err
 	}
-	if len(entries) > maxBatchSamples {
-		return fail(batchTooLarge,
-			fmt.Sprintf("the batch holds more than %d samples; split it into several requests", maxBatchSamples))
-	}
-	ctx := c.Request().Context()
 	switch out.mediaType {
 	case mimeNDJSON:
 		return h.streamNDJSON(c, entries, base)
 	case mimeCSV:
-		items, err := h.triageAll(ctx, entries, base, nil)
+		rows := make([][]string, 0, len(entries))
+		err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+			rows = append(rows, csvRow(it, out.dialect))
+			return nil
+		})
 		if err != nil {
 			return err
 		}
-		return writeCSVItems(c, items, out.dialect)
+		return writeCSV(c, rows, out.dialect)
 	}
-	items, err := h.triageAll(ctx, entries, base, nil)
+	return h.streamJSON(c, entries, base)
+}
+
+// streamJSON answers with the JSON envelope, writing each item as soon as it
+// and all before it are triaged and keeping none: items first, then count,
+// failed, request_id and idempotency_key. The status (200) is sent with
+// the first bytes; a client that goes away ends the answer unfinished.
+func (h *handlers) streamJSON(c echo.Context, entries []batchEntry, base pointerBase) error {
+	res := c.Response()
+	res.Header().Set(echo.HeaderContentType, echo.MIMEApplicationJSON)
+	res.WriteHeader(http.StatusOK)
+	w := bufio.NewWriterSize(res, 64<<10)
+	_, _ = w.WriteString(`{"items":[`)
+	failed := 0
+	err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+		if it.Index > 0 {
+			_ = w.WriteByte(',')
+		}
+		if it.Status != http.StatusOK {
+			failed++
+		}
+		_, err := w.Write(itemJSON(it, base))
+		return err
+	})
 	if err != nil {
 		return err
 	}
-	resp := batchResponse{Count: len(items), Items: items,
-		RequestID:      c.Response().Header().Get(echo.HeaderXRequestID),
-		IdempotencyKey: c.Request().Header.Get(idempotencyKeyHeader)}
-	for _, it := range items {
-		if it.Status != http.StatusOK {
-			resp.Failed++
-		}
+	tail, _ := marshalPlain(batchTail{Count: len(entries), Failed: failed, // strings and integers always encode
+		RequestID:      res.Header().Get(echo.HeaderXRequestID),
+		IdempotencyKey: c.Request().Header.Get(idempotencyKeyHeader)})
+	_, _ = w.WriteString("],")
+	_, _ = w.Write(tail[1:])
+	_ = w.WriteByte('\n')
+	if err := w.Flush(); err != nil {
+		return echo.NewHTTPError(statusClientClosedRequest).SetInternal(err)
 	}
-	return c.JSON(http.StatusOK, resp)
+	return nil
+}
+
+// itemJSON encodes one item; an item that does not encode becomes its 500.
+func itemJSON(it batchItem, base pointerBase) []byte {
+	b, err := marshalPlain(it)
+	if err != nil {
+		b, _ = marshalPlain(failedItem(batchItem{Index: it.Index, Line: it.Line, SampleID: it.SampleID}, err, it.Index, base))
+	}
+	return b
+}
+
+// batchDone ends a batch. The last batch running hands the memory of
+// bodies and items back to the system at once (a forced collection of a
+// heap that is then small), rather than keeping it until the runtime's
+// scavenger gets to it minutes later.
+func (h *handlers) batchDone() {
+	<-h.batches
+	if len(h.batches) == 0 {
+		go debug.FreeOSMemory()
+	}
 }
 
 // splitBatch splits a body of media type mt into its samples, with the
@@ -144,7 +200,8 @@ func (h *handlers) batch(c echo.Context) error {
 func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBase, error) {
 	switch mt {
 	case mimeNDJSON:
-		return ndjsonEntries(body), func(_ int, ptr string) string { return ptr }, nil
+		entries, err := ndjsonEntries(body)
+		return entries, func(_ int, ptr string) string { return ptr }, err
 	case mimeCSV:
 		entries, err := csvEntries(body, *d)
 		return entries, csvPointer, err
@@ -153,42 +210,12 @@ func splitBatch(mt string, body []byte, d *csvDialect) ([]batchEntry, pointerBas
 	return entries, func(i int, ptr string) string { return "/samples/" + strconv.Itoa(i) + ptr }, err
 }
 
-func readBatchBody(c echo.Context) ([]byte, error) {
-	body, err := readBody(c, batchUnreadable)
-	if err != nil {
-		return nil, err
-	}
-	return bytes.TrimPrefix(body, utf8BOM), nil
-}
-
-// utf8BOM is dropped from the start of a body: spreadsheet programs write it.
-var utf8BOM = []byte("\xef\xbb\xbf")
-
-// jsonEntries splits {"samples": [...]} into its samples. The envelope is
-// decoded strictly; each sample stays raw and is decoded on its own later,
-// so that one of the wrong shape fails alone.
-func jsonEntries(body []byte) ([]batchEntry, error) {
-	var req batchRequest
-	if err := unmarshalStrict(body, &req); err != nil {
-		return nil, err
-	}
-	if req.Samples == nil {
-		return nil, fail(samplesMissing,
-			`send {"samples": [sample, ...]}`, input.FieldProblem{Pointer: "/samples", Reason: "required"})
-	}
-	entries := make([]batchEntry, len(*req.Samples))
-	for i, raw := range *req.Samples {
-		entries[i] = batchEntry{raw: raw}
-	}
-	return entries, nil
-}
-
-// triageAll triages every entry with a pool of GOMAXPROCS workers. Results
-// are written by index, so the output order is the input order whatever
-// the scheduling. When emit is not nil it receives each item in order as
-// soon as that item and all before it are done. triageAll stops early when
-// ctx ends or emit fails.
-func (h *handlers) triageAll(ctx context.Context, entries []batchEntry, base pointerBase, emit func(batchItem) error) ([]batchItem, error) {
+// triageAll triages every entry with a pool of GOMAXPROCS workers and
+// hands each item to emit in input order, as soon as that item and all
+// before it are done; an item is dropped once emitted, and its entry once
+// triaged, so that memory holds only the items waiting for their turn.
+// triageAll stops early when ctx ends or emit fails.
+func (h *handlers) triageAll(ctx context.Context, entries []batchEntry, base pointerBase, emit func(batchItem) error) error {
 	n := len(entries)
 	items := make([]batchItem, n)
 	done := make([]chan struct{}, n)
@@ -210,6 +237,7 @@ func (h *handlers) triageAll(ctx context.Context, entries []batchEntry, base poi
 					return
 				}
 				items[i] = h.triageEntry(i, entries[i], base)
+				entries[i] = batchEntry{}
 				close(done[i])
 			}
 		})
@@ -218,15 +246,15 @@ func (h *handlers) triageAll(ctx context.Context, entries []batchEntry, base poi
 		select {
 		case <-done[i]:
 		case <-ctx.Done():
-			return nil, echo.NewHTTPError(statusClientClosedRequest).SetInternal(ctx.Err())
+			return echo.NewHTTPError(statusClientClosedRequest).SetInternal(ctx.Err())
 		}
-		if emit != nil {
-			if err := emit(items[i]); err != nil {
-				return nil, err
-			}
+		err := emit(items[i])
+		items[i] = batchItem{}
+		if err != nil {
+			return err
 		}
 	}
-	return items, nil
+	return nil
 }
 
 // triageEntry decodes, validates and triages one sample by the same strict
@@ -256,7 +284,7 @@ func (h *handlers) triageEntry(i int, e batchEntry, base pointerBase) (item batc
 		}
 		return failedItem(item, err, i, base)
 	}
-	item.SampleID = s.SampleID
+	item.SampleID = clip(s.SampleID, maxSampleID)
 	if err := h.validator.validate(&s); err != nil {
 		return failedItem(item, err, i, base)
 	}

@@ -272,7 +272,7 @@ func TestBatchNDJSON(t *testing.T) {
 	sc := bufio.NewScanner(rec.Body)
 	sc.Buffer(nil, 1<<20)
 	i := 0
-	for ; sc.Scan(); i++ {
+	for ; sc.Scan() && !strings.HasPrefix(sc.Text(), `{"end":`); i++ {
 		var it struct {
 			Index    int          `json:"index"`
 			Line     int          `json:"line"`
@@ -291,6 +291,9 @@ func TestBatchNDJSON(t *testing.T) {
 	}
 	if i != len(want) {
 		t.Errorf("%d items, want %d", i, len(want))
+	}
+	if end := sc.Text(); end != `{"end":true,"count":3,"failed":1}` || sc.Scan() {
+		t.Errorf("the end line %q is not the last line", end)
 	}
 
 	// Asked for JSON, an NDJSON batch answers with the JSON envelope.
@@ -318,7 +321,7 @@ func TestBatchAcceptNDJSON(t *testing.T) {
 		if got, _, _ := strings.Cut(rec.Header().Get("Content-Type"), ";"); rec.Code != 200 || got != c.want {
 			t.Errorf("Accept %q: %d %s, want %s", c.accept, rec.Code, got, c.want)
 		}
-		if c.want == mimeNDJSON && strings.Count(rec.Body.String(), "\n") != 2 {
+		if c.want == mimeNDJSON && strings.Count(rec.Body.String(), "\n") != 3 { // 2 items and the end line
 			t.Errorf("Accept %q: %d lines", c.accept, strings.Count(rec.Body.String(), "\n"))
 		}
 	}
@@ -330,7 +333,11 @@ func TestBatchItemPanic(t *testing.T) {
 	t.Parallel()
 	h := &handlers{validator: newSampleValidator(), metrics: newMetrics()} // no engine: Triage panics
 	entries := []batchEntry{{raw: []byte(limsCases[0].sample("P0"))}, {raw: []byte(limsCases[2].sample("P1"))}}
-	items, err := h.triageAll(context.Background(), entries, csvPointer, nil)
+	var items []batchItem
+	err := h.triageAll(context.Background(), entries, csvPointer, func(it batchItem) error {
+		items = append(items, it)
+		return nil
+	})
 	if err != nil || len(items) != 2 {
 		t.Fatal(err)
 	}
@@ -352,7 +359,7 @@ func TestBatchCancelled(t *testing.T) {
 	for i := range entries {
 		entries[i] = batchEntry{raw: []byte(limsCases[0].sample("C"))}
 	}
-	_, err := h.triageAll(ctx, entries, csvPointer, nil)
+	err := h.triageAll(ctx, entries, csvPointer, func(batchItem) error { return nil })
 	var he *echo.HTTPError
 	if !errors.As(err, &he) || he.Code != statusClientClosedRequest {
 		t.Errorf("error %v, want %d", err, statusClientClosedRequest)

@@ -1,6 +1,7 @@
 package api
 
 import (
+	"bufio"
 	"bytes"
 	"encoding/csv"
 	"encoding/json"
@@ -129,7 +130,9 @@ func addColumns(out map[string]csvColumn, n *node, column string, path []pathSte
 
 // csvEntries reads a CSV batch into entries: the header is checked whole,
 // then each row becomes one sample's JSON form or that row's problem.
-// Reading stops one row past maxBatchSamples; the handler refuses the batch.
+// Reading stops at the first row past maxBatchSamples, which refuses the
+// batch (413); a header wider than the sample's fields is refused (400)
+// before it is split.
 //
 // A batch may be sent as CSV (RFC 4180) with a header row. The dialect is
 // never guessed: the Content-Type must declare it,
@@ -170,50 +173,142 @@ func addColumns(out map[string]csvColumn, n *node, column string, path []pathSte
 // order sent, in the request's dialect unless the Accept range declares its
 // own, with the columns of csvAnswerHeader.
 func csvEntries(body []byte, d csvDialect) ([]batchEntry, error) {
-	r := csv.NewReader(bytes.NewReader(body))
-	r.Comma = d.delimiter
-	r.FieldsPerRecord = -1
-	header, err := r.Read()
-	if errors.Is(err, io.EOF) {
+	rs := csvRecords{body: body, delim: byte(d.delimiter)}
+	known := csvColumns()
+	header, _, width, err := rs.next(len(known))
+	if err != nil {
+		return nil, err
+	}
+	if header == nil && width == 0 {
 		return nil, fail(csvEmpty,
 			"the first row must be the header naming the columns")
 	}
-	if err != nil {
-		return nil, csvSyntaxProblem(err)
+	if len(header) == 0 {
+		return nil, fail(csvHeaderInvalid, fmt.Sprintf(
+			"the header has %d columns; a sample has %d fields, so no header has more; no row was read", width, len(known)))
 	}
 	cols, idCol, err := csvHeader(header)
 	if err != nil {
 		return nil, err
 	}
 	var entries []batchEntry
-	for len(entries) <= maxBatchSamples {
-		rec, err := r.Read()
-		if errors.Is(err, io.EOF) {
-			break
-		}
+	for {
+		rec, line, width, err := rs.next(len(cols))
 		if err != nil {
-			return nil, csvSyntaxProblem(err)
+			return nil, err
 		}
-		if allEmpty(rec) {
+		if rec == nil && width == 0 {
+			return entries, nil
+		}
+		if rec != nil && allEmpty(rec) {
 			continue
 		}
-		line, _ := r.FieldPos(0)
+		if len(entries) == maxBatchSamples {
+			return nil, tooManySamples()
+		}
 		e := batchEntry{line: line}
 		if idCol >= 0 && idCol < len(rec) {
-			if id := strings.TrimSpace(rec[idCol]); len(id) <= 128 {
+			if id := strings.TrimSpace(rec[idCol]); len(id) <= maxSampleID {
 				e.sampleID = id
 			}
 		}
-		if len(rec) != len(cols) {
+		if width != len(cols) {
 			e.err = fail(csvRowLength,
-				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, len(rec), len(cols)),
+				fmt.Sprintf("line %d has %d fields; the header has %d columns", line, width, len(cols)),
 				input.FieldProblem{Pointer: "", Reason: "wrong number of fields"})
 		} else {
 			e.raw, e.err = csvSample(cols, rec, d)
 		}
 		entries = append(entries, e)
 	}
-	return entries, nil
+}
+
+// csvRecords reads a CSV body one record at a time. Each record's fields
+// are counted before it is split, so that a record wider than the caller
+// can use is never split at all: an 8 MB line of delimiters costs no
+// memory beyond the body.
+type csvRecords struct {
+	body  []byte
+	delim byte
+	off   int // where the next record starts
+	line  int // the line of the body at off, 0-based
+	buf   *bufio.Reader
+}
+
+// next returns the next non-blank record, the line where it starts and
+// its number of fields. A record of more than maxWidth fields is not split:
+// it is returned as nil, or as no fields when all of it is delimiters and
+// spaces (a blank row), with its width. At the end of the body record is
+// nil and width 0.
+func (rs *csvRecords) next(maxWidth int) (record []string, line, width int, err error) {
+	for rs.off < len(rs.body) {
+		start, startLine := rs.off, rs.line+1
+		end, fields, lines := csvSpan(rs.body, rs.off, rs.delim)
+		rs.off, rs.line = end, rs.line+lines
+		span := rs.body[start:end]
+		if fields > maxWidth {
+			if len(bytes.Trim(span, " \t\r\n"+string(rs.delim))) == 0 {
+				return []string{}, startLine, fields, nil
+			}
+			return nil, startLine, fields, nil
+		}
+		if rs.buf == nil {
+			rs.buf = bufio.NewReader(bytes.NewReader(span))
+		} else {
+			rs.buf.Reset(bytes.NewReader(span))
+		}
+		r := csv.NewReader(rs.buf) // reuses rs.buf: no buffer per record
+		r.Comma = rune(rs.delim)
+		r.FieldsPerRecord = -1
+		rec, err := r.Read()
+		if errors.Is(err, io.EOF) {
+			continue // a blank line
+		}
+		if err == nil {
+			_, err = r.Read()
+			if errors.Is(err, io.EOF) {
+				err = nil
+			} else if err == nil {
+				err = &csv.ParseError{Line: lines, Column: 1, Err: csv.ErrQuote}
+			}
+		}
+		if err != nil {
+			return nil, 0, 0, csvSyntaxProblem(err, startLine-1)
+		}
+		return rec, startLine, len(rec), nil
+	}
+	return nil, 0, 0, nil
+}
+
+// csvSpan finds the end of the record that starts at off (just past its
+// line break) and counts its fields and lines as encoding/csv reads them: a
+// field that starts with a quote runs to the closing quote, delimiters and
+// line breaks inside it included, and "" is a quote inside it.
+func csvSpan(b []byte, off int, delim byte) (end, fields, lines int) {
+	fields, lines = 1, 1
+	quoted, fieldStart := false, true
+	for i := off; i < len(b); i++ {
+		c := b[i]
+		switch {
+		case quoted && c == '"' && i+1 < len(b) && b[i+1] == '"':
+			i++
+		case quoted && c == '"':
+			quoted = false
+		case quoted && c == '\n':
+			lines++
+		case quoted:
+		case c == '"' && fieldStart:
+			quoted = true
+		case c == delim:
+			fields++
+			fieldStart = true
+			continue
+		case c == '\n':
+			return i + 1, fields, lines
+		}
+		fieldStart = false
+	}
+	return len(b), fields, lines
 }
 
 // csvHeader resolves the header's columns and the index of sample_id (-1
@@ -261,11 +356,13 @@ func unknownColumn(name string, known map[string]csvColumn) string {
 	return fmt.Sprintf("unknown column %q", name)
 }
 
-func csvSyntaxProblem(err error) error {
+// csvSyntaxProblem explains a parse error of a record that starts after
+// line before.
+func csvSyntaxProblem(err error, before int) error {
 	detail := "the body does not parse as CSV with the declared delimiter"
 	var pe *csv.ParseError
 	if errors.As(err, &pe) {
-		detail = fmt.Sprintf("line %d, column %d: %v", pe.Line, pe.Column, pe.Err)
+		detail = fmt.Sprintf("line %d, column %d: %v", before+pe.Line, pe.Column, pe.Err)
 	}
 	return fail(csvSyntax, detail)
 }
@@ -425,37 +522,57 @@ func countDigits(s string) int {
 var csvAnswerHeader = []string{"sample_id", "status", "top_cause", "score", "top_remedy",
 	"target_quantity", "target_op", "target_value", "target_unit", "problem"}
 
-// writeCSVItems answers with one CSV row per item, numbers written with the
-// dialect's decimal separator.
-func writeCSVItems(c echo.Context, items []batchItem, d csvDialect) error {
+// csvTextColumns are the columns of csvAnswerHeader that hold text: all
+// but status, score and target_value.
+var csvTextColumns = []int{0, 2, 4, 5, 6, 8, 9}
+
+// inertCell keeps a spreadsheet from running a text cell as a formula: a
+// cell that begins with =, +, -, @, tab or carriage return gets a leading
+// single quote, as OWASP's "CSV Injection" page recommends. Only text
+// cells go through it, so a negative number stays a number.
+func inertCell(s string) string {
+	if s != "" && strings.IndexByte("=+-@\t\r", s[0]) >= 0 {
+		return "'" + s
+	}
+	return s
+}
+
+// csvRow is the answer row of one item, numbers written with the
+// dialect's decimal separator and text cells made inert (inertCell).
+func csvRow(it batchItem, d csvDialect) []string {
+	num := func(v float64) string {
+		return strings.Replace(strconv.FormatFloat(v, 'g', -1, 64), ".", string(d.decimal), 1)
+	}
+	row := make([]string, len(csvAnswerHeader))
+	row[0], row[1] = it.SampleID, strconv.Itoa(it.Status)
+	if it.Report != nil && len(it.Report.Causes) > 0 {
+		top := it.Report.Causes[0]
+		row[2], row[3] = top.ID, num(top.Score)
+		if len(top.Remedies) > 0 {
+			rem := top.Remedies[0]
+			row[4] = rem.ID
+			if t := rem.Target; t != nil {
+				row[5], row[6], row[7], row[8] = t.Quantity, t.Op, num(t.Value), t.Unit
+			}
+		}
+	}
+	if it.Problem != nil {
+		row[9] = problemSummary(it.Problem)
+	}
+	for _, j := range csvTextColumns {
+		row[j] = inertCell(row[j])
+	}
+	return row
+}
+
+// writeCSV answers with the header and rows in dialect d.
+func writeCSV(c echo.Context, rows [][]string, d csvDialect) error {
 	var buf bytes.Buffer
 	w := csv.NewWriter(&buf)
 	w.Comma = d.delimiter
 	w.UseCRLF = true
-	num := func(v float64) string {
-		return strings.Replace(strconv.FormatFloat(v, 'g', -1, 64), ".", string(d.decimal), 1)
-	}
 	_ = w.Write(csvAnswerHeader)
-	for _, it := range items {
-		row := make([]string, len(csvAnswerHeader))
-		row[0], row[1] = it.SampleID, strconv.Itoa(it.Status)
-		if it.Report != nil && len(it.Report.Causes) > 0 {
-			top := it.Report.Causes[0]
-			row[2], row[3] = top.ID, num(top.Score)
-			if len(top.Remedies) > 0 {
-				rem := top.Remedies[0]
-				row[4] = rem.ID
-				if t := rem.Target; t != nil {
-					row[5], row[6], row[7], row[8] = t.Quantity, t.Op, num(t.Value), t.Unit
-				}
-			}
-		}
-		if it.Problem != nil {
-			row[9] = problemSummary(it.Problem)
-		}
-		_ = w.Write(row)
-	}
-	w.Flush()
+	_ = w.WriteAll(rows)
 	if err := w.Error(); err != nil {
 		return err
 	}

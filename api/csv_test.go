@@ -5,10 +5,16 @@ import (
 	"encoding/json"
 	"math"
 	"net/http"
+	"net/http/httptest"
 	"os"
 	"regexp"
 	"strings"
 	"testing"
+
+	"github.com/labstack/echo/v4"
+
+	"colloidtriage/advisor"
+	"colloidtriage/advisor/remedy"
 )
 
 const euroCSV = `text/csv; header=present; delimiter=";"; decimal=","`
@@ -337,5 +343,71 @@ func TestCSVColumnsDocumented(t *testing.T) {
 		if !strings.Contains(readme, "| `"+pattern+"` |") {
 			t.Errorf("column %s is not documented in testdata/batch/README.md", pattern)
 		}
+	}
+}
+
+// TestCSVAnswerNeutralisesFormulas: a text cell of a CSV answer that a
+// spreadsheet would run as a formula (it begins with =, +, -, @, tab or
+// carriage return) is prefixed with a single quote (OWASP, "CSV
+// Injection"), from JSON and CSV input alike.
+func TestCSVAnswerNeutralisesFormulas(t *testing.T) {
+	t.Parallel()
+	h := testServer(t)
+	ids := []string{`=HYPERLINK("http://x","y")`, "+1+1", "-2", "@SUM(1)", "\tTAB", "\rCR"}
+	check := func(how string, body []byte, want func(id string) string) {
+		t.Helper()
+		rows, err := csv.NewReader(strings.NewReader(string(body))).ReadAll()
+		if err != nil || len(rows) != len(ids)+1 {
+			t.Fatalf("%s: %v %q", how, err, body)
+		}
+		for i, row := range rows[1:] {
+			// encoding/csv reads a carriage return inside quotes as nothing.
+			// Tab and carriage return make the sample invalid, not the cell live.
+			if w := strings.ReplaceAll(want(ids[i]), "\r", ""); row[0] != w {
+				t.Errorf("%s: row %q, want sample_id %q", how, row, w)
+			}
+		}
+	}
+	var samples []string
+	for _, id := range ids {
+		s, err := json.Marshal(id)
+		if err != nil {
+			t.Fatal(err)
+		}
+		samples = append(samples, strings.Replace(limsCases[0].sample("X"), `"X"`, string(s), 1))
+	}
+	rec := do(t, h, http.MethodPost, "/v1/triage/batch", "application/json",
+		`{"samples":[`+strings.Join(samples, ",")+`]}`, "Accept", "text/csv")
+	check("JSON in", rec.Body.Bytes(), func(id string) string { return "'" + id })
+
+	var in strings.Builder
+	w := csv.NewWriter(&in)
+	_ = w.Write([]string{"sample_id", "symptom", "particles.material", "particles.diameter_nm", "particles.volume_fraction"})
+	for _, id := range ids {
+		_ = w.Write([]string{id, "settling", "titania_rutile", "2500", "0.05"})
+	}
+	w.Flush()
+	rec = do(t, h, http.MethodPost, "/v1/triage/batch", `text/csv; delimiter=","; decimal="."`, in.String(), "Accept", "text/csv")
+	// CSV cells are trimmed, so tab and carriage return are gone.
+	check("CSV in", rec.Body.Bytes(), func(id string) string { return inertCell(strings.TrimSpace(id)) })
+}
+
+// TestCSVAnswerKeepsNumbers: number cells never get the quote, a negative
+// target value (a zeta potential, say) included; text cells always do.
+func TestCSVAnswerKeepsNumbers(t *testing.T) {
+	t.Parallel()
+	e := echo.New()
+	rec := httptest.NewRecorder()
+	c := e.NewContext(httptest.NewRequest(http.MethodPost, "/", nil), rec)
+	item := batchItem{SampleID: "-7", Status: 200, Report: &advisor.Report{Causes: []advisor.Cause{{ID: "low_surface_charge",
+		Score: 0.5, Remedies: []advisor.Remedy{{ID: "raise_surface_charge",
+			Target: &remedy.Target{Quantity: "particles.zeta_mV", Op: "<=", Value: -30, Unit: "-mV"}}}}}}}
+	d := csvDialect{delimiter: ';', decimal: ','}
+	if err := writeCSV(c, [][]string{csvRow(item, d)}, d); err != nil {
+		t.Fatal(err)
+	}
+	want := "'-7;200;low_surface_charge;0,5;raise_surface_charge;particles.zeta_mV;<=;-30;'-mV;\r\n"
+	if _, row, _ := strings.Cut(rec.Body.String(), "\r\n"); row != want {
+		t.Errorf("row %q, want %q", row, want)
 	}
 }

@@ -7,7 +7,9 @@ import (
 	"fmt"
 	"io"
 	"mime"
+	"net"
 	"net/http"
+	"os"
 	"reflect"
 	"strings"
 
@@ -30,20 +32,48 @@ func decodeJSON(c echo.Context, v any) error {
 	return unmarshalStrict(body, v)
 }
 
-// readBody reads the whole request body. A body over the route's limit is a
+// readBody reads the whole request body, a leading byte-order mark
+// dropped. A body that stops arriving (the server's read timeout) is a 408. A body over the route's limit is a
 // 413 whether the limit was met by a declared Content-Length or inside a
 // chunked body (echo's limit reader then fails with its own 413 error).
+// With a declared Content-Length (already checked against the limit) the
+// buffer is allocated once at that size rather than grown by doubling.
+// A body already read (by the idempotency middleware) is not read again.
 func readBody(c echo.Context, unreadable kind) ([]byte, error) {
-	body, err := io.ReadAll(c.Request().Body)
-	if err == nil {
+	if body, ok := c.Get(bodyKey).([]byte); ok {
 		return body, nil
+	}
+	var buf bytes.Buffer
+	if n := c.Request().ContentLength; n > 0 {
+		buf.Grow(int(n) + bytes.MinRead)
+	}
+	_, err := buf.ReadFrom(c.Request().Body)
+	if err == nil {
+		return bytes.TrimPrefix(buf.Bytes(), utf8BOM), nil
 	}
 	var tooLarge *http.MaxBytesError
 	var he *echo.HTTPError
-	if errors.As(err, &tooLarge) || (errors.As(err, &he) && he.Code == http.StatusRequestEntityTooLarge) {
+	var ne net.Error
+	switch {
+	case errors.As(err, &tooLarge) || (errors.As(err, &he) && he.Code == http.StatusRequestEntityTooLarge):
 		return nil, echo.NewHTTPError(http.StatusRequestEntityTooLarge)
+	case errors.Is(err, os.ErrDeadlineExceeded) || (errors.As(err, &ne) && ne.Timeout()):
+		return nil, fail(bodyTimeout, "the body did not arrive within the read timeout; send it in one go")
 	}
 	return nil, fail(unreadable, "")
+}
+
+// utf8BOM is dropped from the start of every body: spreadsheet programs
+// and some editors write it.
+var utf8BOM = []byte("\xef\xbb\xbf")
+
+// requireUTF8 refuses a media type whose charset parameter names another
+// encoding than UTF-8, the only one read.
+func requireUTF8(params map[string]string) error {
+	if cs, ok := params["charset"]; ok && !strings.EqualFold(cs, "utf-8") {
+		return fail(mediaUnsupported, "charset "+clip(cs, 32)+" is not supported: send UTF-8")
+	}
+	return nil
 }
 
 func unmarshalStrict(body []byte, v any) error {
@@ -122,9 +152,9 @@ func jsonKind(goType string) string {
 }
 
 func requireContentType(c echo.Context, want string) error {
-	mt, _, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
+	mt, params, err := mime.ParseMediaType(c.Request().Header.Get(echo.HeaderContentType))
 	if err != nil || mt != want {
 		return fail(mediaUnsupported, "send the body as "+want)
 	}
-	return nil
+	return requireUTF8(params)
 }

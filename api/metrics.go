@@ -21,6 +21,10 @@ const noCause = "none"
 // URLs cannot grow the number of time series.
 const unmatchedRoute = "unmatched"
 
+// otherMethod labels requests whose method no route has, so that made-up
+// methods cannot grow the number of time series either.
+const otherMethod = "other"
+
 // latencyBuckets span a single triage (tens of microseconds) to a full
 // batch of maxBatchSamples (seconds), in seconds.
 var latencyBuckets = []float64{0.0001, 0.00025, 0.0005, 0.001, 0.0025, 0.005, 0.01, 0.025, 0.05,
@@ -30,6 +34,7 @@ var latencyBuckets = []float64{0.0001, 0.00025, 0.0005, 0.001, 0.0025, 0.005, 0.
 // newMetrics has its own registry, so that many servers (tests build many)
 // never collide on the process-wide default one.
 type metrics struct {
+	methods  map[string]bool // the methods of the routes, set once by route
 	handler  echo.HandlerFunc
 	requests *prometheus.CounterVec
 	latency  *prometheus.HistogramVec
@@ -81,12 +86,30 @@ func (m *metrics) middleware(next echo.HandlerFunc) echo.HandlerFunc {
 			route = unmatchedRoute
 		}
 		m.latency.WithLabelValues(route).Observe(time.Since(start).Seconds())
-		m.requests.WithLabelValues(route, c.Request().Method, strconv.Itoa(status)).Inc()
+		m.requests.WithLabelValues(route, m.method(c.Request().Method), strconv.Itoa(status)).Inc()
 		if causes, ok := c.Get(triageCausesKey).([]string); ok {
 			m.countOutcome(causes)
 		}
 		return err
 	}
+}
+
+// route records the methods of the application's routes, the only
+// method label values besides otherMethod. New calls it once, after the
+// last route and before serving.
+func (m *metrics) route(routes []*echo.Route) {
+	m.methods = map[string]bool{}
+	for _, r := range routes {
+		m.methods[r.Method] = true
+	}
+}
+
+// method is the label value of an HTTP method.
+func (m *metrics) method(method string) string {
+	if m.methods[method] {
+		return method
+	}
+	return otherMethod
 }
 
 // countOutcome counts one successful triage under its top cause (the first

@@ -2,6 +2,7 @@ package api
 
 import (
 	"net/http"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -143,5 +144,46 @@ func TestCountOutcome(t *testing.T) {
 	}
 	if got := count("gravity_settling"); got != 0 {
 		t.Errorf("only the top cause counts; gravity_settling: %v", got)
+	}
+}
+
+// TestMetricsLabelsFixed: label values come from fixed sets whatever the
+// client sends: methods the service routes, else "other"; route patterns,
+// else "unmatched". A thousand made-up methods and paths add no series.
+func TestMetricsLabelsFixed(t *testing.T) {
+	t.Parallel()
+	h := testServer(t)
+	for i := range 1000 {
+		method := "M" + strings.Repeat("X", 1000) + strconv.Itoa(i)
+		do(t, h, method, "/v1/triage", "", "")
+		do(t, h, method, "/nowhere/"+strconv.Itoa(i), "", "")
+		do(t, h, http.MethodGet, "/v1/x"+strconv.Itoa(i), "", "")
+	}
+	fams := scrape(t, h)
+	methods, routes := map[string]bool{}, map[string]bool{}
+	for _, m := range fams["colloidtriage_http_requests_total"].GetMetric() {
+		for _, l := range m.GetLabel() {
+			switch l.GetName() {
+			case "method":
+				methods[l.GetValue()] = true
+			case "route":
+				routes[l.GetValue()] = true
+			}
+		}
+	}
+	for m := range methods {
+		if m != http.MethodGet && m != http.MethodPost && m != "other" {
+			t.Errorf("method label %.40q", m)
+		}
+	}
+	if !methods["other"] {
+		t.Errorf("made-up methods are not counted as other: %v", methods)
+	}
+	if len(routes) > 4 {
+		t.Errorf("%d route labels: %v", len(routes), routes)
+	}
+	if s := sample(fams, "colloidtriage_http_requests_total", map[string]string{"route": "/v1/triage", "method": "other"}); s == nil ||
+		s.GetCounter().GetValue() != 1000 {
+		t.Errorf("made-up methods on /v1/triage: %v", s)
 	}
 }

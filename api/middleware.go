@@ -10,7 +10,7 @@ import (
 )
 
 // accessLog is echo's request logger writing one zerolog JSON line per
-// request: request id, method, route, status, size and latency. Bodies are
+// request: request id, method (clipped), route, status, size and latency. Bodies are
 // never logged; errors of status 500 and above are logged with their
 // internal detail, which clients never see. The error is rendered (by the
 // error handler) before the line is written, so the line has the status
@@ -30,7 +30,7 @@ func accessLog(log zerolog.Logger) echo.MiddlewareFunc {
 				ev = log.Error().AnErr("internal_error", v.Error)
 			}
 			ev.Str("request_id", c.Response().Header().Get(echo.HeaderXRequestID)).
-				Str("method", v.Method).
+				Str("method", clip(v.Method, maxLoggedMethod)).
 				Str("route", v.RoutePath).
 				Int("status", v.Status).
 				Int64("bytes", v.ResponseSize).
@@ -40,6 +40,10 @@ func accessLog(log zerolog.Logger) echo.MiddlewareFunc {
 		},
 	})
 }
+
+// maxLoggedMethod is the most bytes of a request's method the access log
+// writes; the routed methods are far shorter, made-up ones may not be.
+const maxLoggedMethod = 16
 
 // recoverPanic is echo's recovery turning a panic in a handler into an
 // error, rendered as a 500 problem detail, so that a programming error

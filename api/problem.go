@@ -2,7 +2,9 @@ package api
 
 import (
 	"errors"
+	"fmt"
 	"net/http"
+	"unicode/utf8"
 
 	"colloidtriage/advisor/input"
 
@@ -31,6 +33,8 @@ const (
 	typeInvalidQuery  = "/problems/invalid-query"
 	typeUnauthorized  = "/problems/unauthorized"
 	typeInternal      = "/problems/internal"
+	typeIdempotency   = "/problems/idempotency-key"
+	typeBusy          = "/problems/busy"
 	typeBlank         = "about:blank"
 )
 
@@ -42,6 +46,7 @@ type kind int
 
 const (
 	bodyUnreadable kind = iota + 1
+	bodyTimeout
 	jsonInvalid
 	bodyEmpty
 	fieldWrongType
@@ -65,6 +70,10 @@ const (
 	mediaUnsupported
 	mediaNotAcceptable
 	internalError
+	idempotencyKeyInvalid
+	idempotencyKeyReused
+	idempotencyKeyInFlight
+	batchesBusy
 	kindCount
 )
 
@@ -77,30 +86,35 @@ type problemClass struct {
 // problemKinds is the one place where a failure becomes a problem type,
 // a title and an HTTP status.
 var problemKinds = [kindCount]problemClass{
-	bodyUnreadable:     {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
-	jsonInvalid:        {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
-	bodyEmpty:          {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
-	fieldWrongType:     {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
-	fieldUnknown:       {typeInvalidJSON, "Unknown field", http.StatusBadRequest},
-	memberOffContract:  {typeInvalidJSON, "A member is not part of the contract", http.StatusBadRequest},
-	sampleNotObject:    {typeInvalidJSON, "A sample is not a JSON object", http.StatusBadRequest},
-	batchUnreadable:    {typeInvalidBatch, "The request body could not be read", http.StatusBadRequest},
-	samplesMissing:     {typeInvalidBatch, "The batch has no samples field", http.StatusBadRequest},
-	batchTooLarge:      {typeBatchTooLarge, "Too many samples in one batch", http.StatusRequestEntityTooLarge},
-	csvMediaType:       {typeInvalidCSV, "The CSV media type is incomplete or invalid", http.StatusUnsupportedMediaType},
-	csvNotAcceptable:   {typeInvalidCSV, "Not acceptable", http.StatusNotAcceptable},
-	csvEmpty:           {typeInvalidCSV, "The CSV body is empty", http.StatusBadRequest},
-	csvSyntax:          {typeInvalidCSV, "The body is not valid CSV", http.StatusBadRequest},
-	csvHeaderInvalid:   {typeInvalidCSV, "The CSV header names unknown or repeated columns", http.StatusBadRequest},
-	csvRowLength:       {typeInvalidCSV, "A row has the wrong number of fields", http.StatusBadRequest},
-	csvCellInvalid:     {typeInvalidCSV, "A cell does not parse", http.StatusBadRequest},
-	queryInvalid:       {typeInvalidQuery, "A query parameter is invalid", http.StatusBadRequest},
-	fieldsInvalid:      {typeInvalidSample, "The sample has invalid fields", http.StatusUnprocessableEntity},
-	sampleInconsistent: {typeInvalidSample, "The sample is physically invalid or inconsistent", http.StatusUnprocessableEntity},
-	keyRejected:        {typeUnauthorized, "Missing or invalid API key", http.StatusUnauthorized},
-	mediaUnsupported:   {typeBlank, "Unsupported media type", http.StatusUnsupportedMediaType},
-	mediaNotAcceptable: {typeBlank, "Not acceptable", http.StatusNotAcceptable},
-	internalError:      {typeInternal, "Internal error", http.StatusInternalServerError},
+	bodyUnreadable:         {typeInvalidJSON, "The request body could not be read", http.StatusBadRequest},
+	bodyTimeout:            {typeBlank, "Request Timeout", http.StatusRequestTimeout},
+	jsonInvalid:            {typeInvalidJSON, "The request body is not valid JSON", http.StatusBadRequest},
+	bodyEmpty:              {typeInvalidJSON, "The request body is empty", http.StatusBadRequest},
+	fieldWrongType:         {typeInvalidJSON, "A field has the wrong type", http.StatusBadRequest},
+	fieldUnknown:           {typeInvalidJSON, "Unknown field", http.StatusBadRequest},
+	memberOffContract:      {typeInvalidJSON, "A member is not part of the contract", http.StatusBadRequest},
+	sampleNotObject:        {typeInvalidJSON, "A sample is not a JSON object", http.StatusBadRequest},
+	batchUnreadable:        {typeInvalidBatch, "The request body could not be read", http.StatusBadRequest},
+	samplesMissing:         {typeInvalidBatch, "The batch has no samples field", http.StatusBadRequest},
+	batchTooLarge:          {typeBatchTooLarge, "Too many samples in one batch", http.StatusRequestEntityTooLarge},
+	csvMediaType:           {typeInvalidCSV, "The CSV media type is incomplete or invalid", http.StatusUnsupportedMediaType},
+	csvNotAcceptable:       {typeInvalidCSV, "Not acceptable", http.StatusNotAcceptable},
+	csvEmpty:               {typeInvalidCSV, "The CSV body is empty", http.StatusBadRequest},
+	csvSyntax:              {typeInvalidCSV, "The body is not valid CSV", http.StatusBadRequest},
+	csvHeaderInvalid:       {typeInvalidCSV, "The CSV header names unknown or repeated columns", http.StatusBadRequest},
+	csvRowLength:           {typeInvalidCSV, "A row has the wrong number of fields", http.StatusBadRequest},
+	csvCellInvalid:         {typeInvalidCSV, "A cell does not parse", http.StatusBadRequest},
+	queryInvalid:           {typeInvalidQuery, "A query parameter is invalid", http.StatusBadRequest},
+	fieldsInvalid:          {typeInvalidSample, "The sample has invalid fields", http.StatusUnprocessableEntity},
+	sampleInconsistent:     {typeInvalidSample, "The sample is physically invalid or inconsistent", http.StatusUnprocessableEntity},
+	keyRejected:            {typeUnauthorized, "Missing or invalid API key", http.StatusUnauthorized},
+	mediaUnsupported:       {typeBlank, "Unsupported media type", http.StatusUnsupportedMediaType},
+	mediaNotAcceptable:     {typeBlank, "Not acceptable", http.StatusNotAcceptable},
+	internalError:          {typeInternal, "Internal error", http.StatusInternalServerError},
+	idempotencyKeyInvalid:  {typeIdempotency, "The Idempotency-Key is not valid", http.StatusBadRequest},
+	idempotencyKeyReused:   {typeIdempotency, "The Idempotency-Key was used with another request", http.StatusUnprocessableEntity},
+	idempotencyKeyInFlight: {typeIdempotency, "A request with this Idempotency-Key is still running", http.StatusConflict},
+	batchesBusy:            {typeBusy, "Too many batches at once", http.StatusServiceUnavailable},
 }
 
 // problemError is a failure of a known kind, with what the client needs to
@@ -118,9 +132,44 @@ func fail(k kind, detail string, fields ...input.FieldProblem) error {
 	return &problemError{kind: k, detail: detail, fields: fields}
 }
 
+// maxProblems is the most field problems one problem detail lists; the
+// detail says how many more there were.
+const maxProblems = 100
+
+// maxEcho is the most bytes of one string of a problem detail (a detail,
+// a pointer, a reason): they may quote what the client sent.
+const maxEcho = 256
+
 func (e *problemError) problem() Problem {
 	c := problemKinds[e.kind]
-	return Problem{Type: c.typ, Title: c.title, Status: c.status, Detail: e.detail, Errors: e.fields}
+	p := Problem{Type: c.typ, Title: c.title, Status: c.status, Detail: clip(e.detail, maxEcho)}
+	fields := e.fields
+	if n := len(fields) - maxProblems; n > 0 {
+		fields = fields[:maxProblems]
+		p.Detail += fmt.Sprintf(" (%d more problems not listed)", n)
+	}
+	if len(fields) > 0 {
+		p.Errors = make([]input.FieldProblem, len(fields))
+		for i, f := range fields {
+			p.Errors[i] = input.FieldProblem{Pointer: clip(f.Pointer, maxEcho), Reason: clip(f.Reason, maxEcho),
+				Unit: f.Unit, Valid: clip(f.Valid, maxEcho)}
+		}
+	}
+	return p
+}
+
+// clip cuts s to at most n bytes, at a character boundary, marking the cut
+// with an ellipsis, so that a string a client sent is never echoed whole.
+func clip(s string, n int) string {
+	if len(s) <= n {
+		return s
+	}
+	const mark = "…"
+	cut := n - len(mark)
+	for cut > 0 && !utf8.RuneStart(s[cut]) {
+		cut--
+	}
+	return s[:cut] + mark
 }
 
 // problemFor maps any handler error to a problem detail; internal detail is

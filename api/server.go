@@ -16,7 +16,21 @@ type Config struct {
 	BodyLimit string   // body limit of the single-sample routes in echo's notation; "256K" is 256,000 bytes
 	OpenAPI   []byte   // the OpenAPI document served at /openapi.json
 	APIKeys   []string // when not empty, every route but the health checks needs one of these keys
+	// MaxBatches is how many batches may run at once; a batch past it is
+	// refused with 503 and Retry-After. 0 means DefaultMaxBatches.
+	MaxBatches int
+	// Draining reports that the service is shutting down: /readyz then
+	// answers 503. Nil means never.
+	Draining func() bool
+	// Idempotency keeps the answers to requests with an Idempotency-Key;
+	// nil is a memory store of DefaultMemoryStoreConfig.
+	Idempotency IdempotencyStore
 }
+
+// DefaultMaxBatches bounds the batches running at once: a batch holds up
+// to 5000 samples and uses every core, so a few at once already fill the
+// machine, and each holds its body and items in memory.
+const DefaultMaxBatches = 4
 
 // DefaultConfig is the configuration of a local, unauthenticated service.
 var DefaultConfig = Config{Logger: zerolog.Nop(), BodyLimit: "256K"}
@@ -31,12 +45,19 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	e.JSONSerializer = plainJSON{}
 	e.HTTPErrorHandler = errorHandler
 	m := newMetrics()
-	e.Use(middleware.RequestIDWithConfig(middleware.RequestIDConfig{TargetHeader: echo.HeaderXRequestID}))
+	e.Use(requestID)
 	e.Use(accessLog(cfg.Logger))
 	e.Use(m.middleware)
 	e.Use(recoverPanic)
 
-	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger}
+	if cfg.Draining == nil {
+		cfg.Draining = func() bool { return false }
+	}
+	if cfg.MaxBatches <= 0 {
+		cfg.MaxBatches = DefaultMaxBatches
+	}
+	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger,
+		draining: cfg.Draining, batches: make(chan struct{}, cfg.MaxBatches)}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
@@ -45,15 +66,20 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	// middleware adds catch-all routes that would turn 405s into 404s.
 	auth := keyAuthWithConfig(keyAuthConfig{Keys: cfg.APIKeys})
 	limit := middleware.BodyLimit(cfg.BodyLimit)
+	if cfg.Idempotency == nil {
+		cfg.Idempotency = NewMemoryStore(DefaultMemoryStoreConfig)
+	}
+	once := idempotent(cfg.Idempotency, bodyUnreadable)
 	e.GET("/openapi.json", h.openAPI, auth)
 	v1 := e.Group("/v1")
-	v1.POST("/triage", h.triage, auth, limit)
-	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit))
-	v1.POST("/scales", h.scales, auth, limit)
-	v1.POST("/interaction-profile", h.interactionProfile, auth, limit)
+	v1.POST("/triage", h.triage, auth, limit, once)
+	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit), idempotent(cfg.Idempotency, batchUnreadable))
+	v1.POST("/scales", h.scales, auth, limit, once)
+	v1.POST("/interaction-profile", h.interactionProfile, auth, limit, once)
 	v1.GET("/catalog", h.catalog, auth)
 	v1.GET("/rules", h.rules, auth)
 	v1.GET("/materials", h.materials, auth)
+	m.route(e.Routes())
 	return e
 }
 
@@ -63,6 +89,8 @@ type handlers struct {
 	openapi   []byte
 	metrics   *metrics
 	log       zerolog.Logger
+	draining  func() bool
+	batches   chan struct{} // one token per running batch
 }
 
 func (h *handlers) health(c echo.Context) error {
@@ -70,8 +98,12 @@ func (h *handlers) health(c echo.Context) error {
 }
 
 // ready reports ready once the rule set is compiled and the library loaded,
-// which New's caller has done before serving.
+// which New's caller has done before serving, until the service begins to
+// shut down.
 func (h *handlers) ready(c echo.Context) error {
+	if h.draining() {
+		return c.JSON(http.StatusServiceUnavailable, map[string]string{"status": "draining"})
+	}
 	return c.JSON(http.StatusOK, map[string]string{"status": "ready", "rules": h.engine.RuleSet().Hash,
 		"engine": advisor.EngineVersion})
 }

@@ -9,9 +9,6 @@ import (
 	"colloidtriage/advisor/input"
 )
 
-// idempotencyKeyHeader is echoed into the report so a LIMS can match retries.
-const idempotencyKeyHeader = "Idempotency-Key"
-
 type triageResponse struct {
 	*advisor.Report
 	RequestID      string `json:"request_id"`
@@ -52,6 +49,8 @@ type scalesResponse struct {
 	Assumptions []string                 `json:"assumptions"`
 	Models      map[string]string        `json:"models"`
 	RequestID   string                   `json:"request_id"`
+	// IdempotencyKey echoes the request's Idempotency-Key.
+	IdempotencyKey string `json:"idempotency_key,omitempty"`
 }
 
 // scales computes the physics only; a symptom is not needed.
@@ -73,7 +72,8 @@ func (h *handlers) scales(c echo.Context) error {
 	return c.JSON(http.StatusOK, scalesResponse{SampleID: s.SampleID,
 		Versions: advisor.Versions{Engine: advisor.EngineVersion, Rules: h.engine.RuleSet().Hash},
 		Scales:   sc, Assumptions: notes, Models: models,
-		RequestID: c.Response().Header().Get(echo.HeaderXRequestID)})
+		RequestID:      c.Response().Header().Get(echo.HeaderXRequestID),
+		IdempotencyKey: c.Request().Header.Get(idempotencyKeyHeader)})
 }
 
 // topCauses lists the id of the first-ranked cause, for the outcome metrics.

@@ -6,6 +6,7 @@ import (
 	"reflect"
 	"regexp"
 	"strings"
+	"unicode"
 
 	"colloidtriage/advisor/input"
 
@@ -37,14 +38,18 @@ var index = regexp.MustCompile(`\[(\d+)\]`)
 // naming every offending field.
 func (sv *sampleValidator) validate(s *input.Sample) error {
 	err := sv.v.Struct(s)
-	if err == nil {
+	var fields []input.FieldProblem
+	if hasControl(s.SampleID) {
+		fields = append(fields, input.FieldProblem{Pointer: "/sample_id",
+			Reason: "holds a control character (NUL, a line break, ...)", Valid: "printable text"})
+	}
+	if err == nil && fields == nil {
 		return nil
 	}
 	var ves validator.ValidationErrors
-	if !errors.As(err, &ves) {
+	if err != nil && !errors.As(err, &ves) {
 		return err
 	}
-	fields := make([]input.FieldProblem, 0, len(ves))
 	for _, fe := range ves {
 		ns := fe.Namespace()
 		_, ns, _ = strings.Cut(ns, ".") // drop the root type name
@@ -57,6 +62,12 @@ func (sv *sampleValidator) validate(s *input.Sample) error {
 	}
 	return fail(fieldsInvalid,
 		fmt.Sprintf("%d field(s) out of range or missing", len(fields)), fields...)
+}
+
+// hasControl reports whether s holds a control character (C0, DEL or C1):
+// an identifier goes into logs, CSV files and spreadsheets as it is.
+func hasControl(s string) bool {
+	return strings.IndexFunc(s, unicode.IsControl) >= 0
 }
 
 // reason says why a field failed; alternative is the member that may stand

@@ -11,7 +11,10 @@ import (
 	"net/http"
 	"net/http/httptest"
 	"os"
+	"runtime/debug"
+	"strconv"
 	"strings"
+	"sync/atomic"
 	"time"
 
 	"github.com/rs/zerolog"
@@ -30,11 +33,27 @@ const (
 	exitBadInput = 3
 )
 
+// defaultMemoryLimitMiB is the Go runtime's soft memory limit by default:
+// the collector works harder as the heap nears it, so that batches at once
+// do not grow the process past what a small container has.
+const defaultMemoryLimitMiB = 256
+
+// writeTimeout bounds the time from the end of a request's headers to the
+// end of its answer; shutdownLimit, longer, is how long a shutdown waits
+// for the requests in flight, so that every answer the write timeout
+// allows is finished rather than cut.
+const (
+	writeTimeout  = 120 * time.Second
+	shutdownLimit = writeTimeout + 10*time.Second
+)
+
 const usage = `usage:
-  colloidtriage serve [--addr HOST:PORT] [--rules DIR] [--api-keys-file FILE]
-                                                         run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR);
+  colloidtriage serve [--addr HOST:PORT] [--rules DIR] [--api-keys-file FILE] [--drain-delay 5s]
+                      [--memory-limit-mib 256]           run the HTTP service (default 127.0.0.1:8080, or $COLLOIDTRIAGE_ADDR);
                                                          API keys, one per line in FILE or comma-separated in
-                                                         $COLLOIDTRIAGE_API_KEYS, guard all but /healthz, /readyz, /metrics
+                                                         $COLLOIDTRIAGE_API_KEYS, guard all but /healthz, /readyz, /metrics;
+                                                         on SIGTERM /readyz turns 503, serving goes on for the drain delay,
+                                                         then in-flight requests finish (at most 130 s) and it exits 0
   colloidtriage triage FILE|-                            triage one sample (JSON file, or - for standard input)
   colloidtriage rules check DIR                          compile a site rule pack with the built-in rules
   colloidtriage version                                  print the engine version and rule-set hash
@@ -92,6 +111,14 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 	addr := fs.String("addr", defAddr, "listen address (env COLLOIDTRIAGE_ADDR)")
 	rulesDir := fs.String("rules", "", "directory of site rule files (*.rules.yaml) added to the built-in set")
 	keysFile := fs.String("api-keys-file", "", "file of API keys, one per line (# comments); adds to env COLLOIDTRIAGE_API_KEYS (comma-separated)")
+	defMem := defaultMemoryLimitMiB
+	if v, err := strconv.Atoi(getenv("COLLOIDTRIAGE_MEMORY_LIMIT_MIB")); err == nil {
+		defMem = v
+	}
+	memLimit := fs.Int("memory-limit-mib", defMem,
+		"soft memory limit of the Go runtime in MiB (env COLLOIDTRIAGE_MEMORY_LIMIT_MIB); 0 leaves the runtime's own (GOMEMLIMIT)")
+	drainDelay := fs.Duration("drain-delay", 5*time.Second,
+		"on SIGTERM, how long to keep serving (with /readyz 503 and connections closed after each answer) before shutting down")
 	if err := fs.Parse(args); err != nil {
 		return exitUsage
 	}
@@ -101,6 +128,9 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		return exitUsage
 	}
 	log := zerolog.New(stdout).With().Timestamp().Logger()
+	if *memLimit > 0 {
+		debug.SetMemoryLimit(int64(*memLimit) << 20)
+	}
 	start := time.Now()
 	var dirs []string
 	if *rulesDir != "" {
@@ -111,12 +141,13 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		fmt.Fprintln(stderr, err)
 		return exitFailure
 	}
-	e := api.New(eng, api.Config{Logger: log, OpenAPI: openapi.JSON, APIKeys: keys})
+	var draining atomic.Bool
+	e := api.New(eng, api.Config{Logger: log, OpenAPI: openapi.JSON, APIKeys: keys, Draining: draining.Load})
 	srv := &http.Server{
 		Handler:           e,
 		ReadHeaderTimeout: 5 * time.Second,
 		ReadTimeout:       30 * time.Second,
-		WriteTimeout:      120 * time.Second,
+		WriteTimeout:      writeTimeout,
 		IdleTimeout:       120 * time.Second,
 		MaxHeaderBytes:    64 << 10,
 	}
@@ -135,8 +166,12 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		return exitFailure
 	case <-ctx.Done():
 	}
+	draining.Store(true)
+	srv.SetKeepAlivesEnabled(false)
+	log.Info().Dur("drain_delay", *drainDelay).Msg("draining: /readyz 503, connections closed after each answer")
+	time.Sleep(*drainDelay)
 	log.Info().Msg("shutting down: finishing in-flight requests")
-	shutCtx, cancel := context.WithTimeout(context.Background(), 30*time.Second)
+	shutCtx, cancel := context.WithTimeout(context.Background(), shutdownLimit)
 	defer cancel()
 	if err := srv.Shutdown(shutCtx); err != nil {
 		fmt.Fprintln(stderr, err)

@@ -1,7 +1,7 @@
 // Command colloidtriage runs the colloid stability triage service or triages
 // sample files from the command line.
 //
-//	colloidtriage serve [--addr 127.0.0.1:8080] [--rules DIR] [--api-keys-file FILE]
+//	colloidtriage serve [--addr 127.0.0.1:8080] [--rules DIR] [--api-keys-file FILE] [--drain-delay 5s]
 //	colloidtriage triage FILE|-
 //	colloidtriage rules check DIR
 //	colloidtriage version

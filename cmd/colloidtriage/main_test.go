@@ -71,44 +71,7 @@ func TestBinaryEndToEnd(t *testing.T) {
 	if testing.Short() {
 		t.Skip("builds the binary")
 	}
-	bin := filepath.Join(t.TempDir(), "colloidtriage")
-	build := exec.Command("go", "build", "-o", bin, ".")
-	if out, err := build.CombinedOutput(); err != nil {
-		t.Fatalf("build: %v\n%s", err, out)
-	}
-	cmd := exec.Command(bin, "serve", "--addr", "127.0.0.1:0")
-	stdout, err := cmd.StdoutPipe()
-	if err != nil {
-		t.Fatal(err)
-	}
-	cmd.Stderr = os.Stderr
-	if err := cmd.Start(); err != nil {
-		t.Fatal(err)
-	}
-	defer cmd.Process.Kill()
-	listening := make(chan string, 1)
-	go func() {
-		lines := bufio.NewScanner(stdout)
-		for lines.Scan() {
-			var entry struct {
-				Message string `json:"message"`
-				Addr    string `json:"addr"`
-			}
-			if json.Unmarshal(lines.Bytes(), &entry) == nil && entry.Message == "listening" {
-				listening <- entry.Addr
-				break
-			}
-		}
-		io.Copy(io.Discard, stdout)
-	}()
-	var addr string
-	select {
-	case addr = <-listening:
-	case <-time.After(30 * time.Second):
-		t.Fatal("server did not say it was listening within 30 s")
-	}
-	base := "http://" + addr
-
+	cmd, base := startServer(t)
 	demo, err := os.Open("../../testdata/demo/gravity_settling.json")
 	if err != nil {
 		t.Fatal(err)
@@ -161,6 +124,115 @@ func TestBinaryEndToEnd(t *testing.T) {
 	pw.Close()
 	if code := <-done; code != 200 {
 		t.Errorf("in-flight request during shutdown: status %d", code)
+	}
+	if err := cmd.Wait(); err != nil {
+		t.Errorf("server exit: %v", err)
+	}
+}
+
+// startServer builds the binary and serves on a free loopback port with
+// args added to serve's; it returns the running command and the base URL.
+func startServer(t *testing.T, args ...string) (*exec.Cmd, string) {
+	t.Helper()
+	bin := filepath.Join(t.TempDir(), "colloidtriage")
+	build := exec.Command("go", "build", "-o", bin, ".")
+	if out, err := build.CombinedOutput(); err != nil {
+		t.Fatalf("build: %v\n%s", err, out)
+	}
+	cmd := exec.Command(bin, append([]string{"serve", "--addr", "127.0.0.1:0"}, args...)...)
+	stdout, err := cmd.StdoutPipe()
+	if err != nil {
+		t.Fatal(err)
+	}
+	cmd.Stderr = os.Stderr
+	if err := cmd.Start(); err != nil {
+		t.Fatal(err)
+	}
+	t.Cleanup(func() { cmd.Process.Kill() })
+	listening := make(chan string, 1)
+	go func() {
+		lines := bufio.NewScanner(stdout)
+		for lines.Scan() {
+			var entry struct {
+				Message string `json:"message"`
+				Addr    string `json:"addr"`
+			}
+			if json.Unmarshal(lines.Bytes(), &entry) == nil && entry.Message == "listening" {
+				listening <- entry.Addr
+				break
+			}
+		}
+		io.Copy(io.Discard, stdout)
+	}()
+	select {
+	case addr := <-listening:
+		return cmd, "http://" + addr
+	case <-time.After(30 * time.Second):
+		t.Fatal("server did not say it was listening within 30 s")
+	}
+	return nil, ""
+}
+
+// TestDrain: on SIGTERM /readyz turns 503 at once; requests during the
+// drain delay are answered with Connection: close; a stream in flight runs
+// to its end line; the process exits 0.
+func TestDrain(t *testing.T) {
+	if testing.Short() {
+		t.Skip("builds the binary")
+	}
+	cmd, base := startServer(t, "--drain-delay", "1s")
+	demo, err := os.ReadFile("../../testdata/demo/gravity_settling.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var line bytes.Buffer
+	if err := json.Compact(&line, demo); err != nil {
+		t.Fatal(err)
+	}
+	const n = 300
+	stream, err := http.Post(base+"/v1/triage/batch", "application/x-ndjson",
+		strings.NewReader(strings.Repeat(line.String()+"\n", n)))
+	if err != nil || stream.StatusCode != 200 {
+		t.Fatalf("stream: %v %v", err, stream)
+	}
+	defer stream.Body.Close()
+	lines := bufio.NewScanner(stream.Body)
+	lines.Buffer(nil, 1<<20)
+	if !lines.Scan() {
+		t.Fatal("no first line")
+	}
+	if err := cmd.Process.Signal(syscall.SIGTERM); err != nil {
+		t.Fatal(err)
+	}
+	deadline := time.Now().Add(500 * time.Millisecond)
+	for {
+		r, err := http.Get(base + "/readyz")
+		if err == nil {
+			r.Body.Close()
+			if r.StatusCode == http.StatusServiceUnavailable {
+				break
+			}
+		}
+		if time.Now().After(deadline) {
+			t.Fatalf("/readyz still %v %v 500 ms after SIGTERM", r.StatusCode, err)
+		}
+		time.Sleep(20 * time.Millisecond)
+	}
+	r, err := http.Post(base+"/v1/triage", "application/json", bytes.NewReader(demo))
+	if err != nil || r.StatusCode != 200 || !r.Close {
+		t.Errorf("a request while draining: %v %+v", err, r)
+	}
+	if r != nil {
+		r.Body.Close()
+	}
+	count := 1
+	var last string
+	for lines.Scan() {
+		count++
+		last = lines.Text()
+	}
+	if count != n+1 || last != `{"end":true,"count":300,"failed":0}` {
+		t.Errorf("%d lines, the last %.100q", count, last)
 	}
 	if err := cmd.Wait(); err != nil {
 		t.Errorf("server exit: %v", err)
