@@ -68,8 +68,8 @@ type Liquid struct {
 	MeltingC      SourcedValue
 	BoilingC      *SourcedValue
 	SupercoolsToC *SourcedValue
-	Aqueous         bool          // water is the continuous phase or its main part
-	Flammable       bool          // flash point below 60 °C (UN GHS categories 1-3)
+	Aqueous       bool // water is the continuous phase or its main part
+	Flammable     bool // flash point below 60 °C (UN GHS categories 1-3)
 
 	Notes string
 }
@@ -331,7 +331,7 @@ const (
 	minViscosityMPaS, maxViscosityMPaS = 0.01, 1e9
 	minFlashPointC, maxFlashPointC     = -60.0, 400.0
 	minPhaseC, maxPhaseC               = -200.0, 400.0 // melting, boiling and glass points
-	flammableBelowC                    = 60.0 // UN GHS, chapter 2.6: categories 1-3
+	flammableBelowC                    = 60.0          // UN GHS, chapter 2.6: categories 1-3
 )
 
 type liquidsFileYAML struct {
