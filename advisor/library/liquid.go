@@ -58,6 +58,8 @@ type Liquid struct {
 
 	RefractiveIndex SourcedValue  // n_D, not corrected for temperature
 	FlashPointC     *SourcedValue // °C; nil where the liquid has none
+	Aqueous         bool          // water is the continuous phase or its main part
+	Flammable       bool          // flash point below 60 °C (UN GHS categories 1-3)
 
 	// MeltingC is the melting point at 101.325 kPa, °C (the pour point for
 	// oils without a sharp one). BoilingC is the normal boiling point, °C;
@@ -68,8 +70,6 @@ type Liquid struct {
 	MeltingC      SourcedValue
 	BoilingC      *SourcedValue
 	SupercoolsToC *SourcedValue
-	Aqueous       bool // water is the continuous phase or its main part
-	Flammable     bool // flash point below 60 °C (UN GHS categories 1-3)
 
 	Notes string
 }
