@@ -22,7 +22,20 @@ type Conditions struct {
 	MaterialKind    string
 
 	Liquid       LiquidState
-	StorageTempK float64
+	StorageTempK float64 // K, the warm end of storage: kinetics, viscosity and cloud point are judged here
+
+	// The temperature history: the cold end of storage or transport (K;
+	// StorageTempK when no range is stated), whether a range was stated,
+	// and the freeze-thaw cycles stated (NaN when not).
+	MinStorageTempK  float64
+	StorageRange     bool
+	FreezeThawCycles float64
+
+	// The co-solvent of a water medium (0 when none) and its mass fraction,
+	// and the freezing point of the continuous phase with its ions, K.
+	Cosolvent         physics.Cosolvent
+	CosolventFraction float64
+	FreezingK         float64
 
 	Ions                  []physics.Ion
 	IonicStrength         float64 // mol/m^3
@@ -45,6 +58,7 @@ type Conditions struct {
 
 	Height, ShelfLife, MaxClear float64 // m, s, m
 	Shear                       float64 // 1/s
+	ProcessStep                 string  // the named process step that set Shear, or ""
 	YieldStress                 float64 // Pa
 
 	Observed Observed
@@ -58,6 +72,7 @@ type LiquidState struct {
 	Density, Viscosity, Permittivity, RefractiveIndex float64
 	Aqueous, Flammable                                bool
 	FlashPointC                                       float64
+	BoilingK                                          float64 // +Inf when the liquid has none
 }
 
 // StericLayer is the adsorbed layer: thickness in m, cloud point in K (NaN
