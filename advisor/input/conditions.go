@@ -27,6 +27,7 @@ type Conditions struct {
 	// The temperature history: the cold end of storage or transport (K;
 	// StorageTempK when no range is stated), whether a range was stated,
 	// and the freeze-thaw cycles stated (NaN when not).
+	MediumTempK      float64 // K, where the medium and the layer were characterised
 	MinStorageTempK  float64
 	StorageRange     bool
 	FreezeThawCycles float64
@@ -76,13 +77,27 @@ type LiquidState struct {
 }
 
 // StericLayer is the adsorbed layer: thickness in m, cloud point in K (NaN
-// when not stated).
+// when not stated), and Factor, its thickness at the storage temperature
+// over the stated one (physics.CloudPointLayerFactor from the medium
+// temperature; NaN without a cloud point above the medium temperature).
 type StericLayer struct {
 	Present    bool
 	Thickness  float64
 	Quality    physics.SolventQuality
 	HasQuality bool
 	CloudK     float64
+	Factor     float64
+}
+
+// AtStorage is the layer's thickness at the storage temperature, m: the
+// stated thickness scaled by Factor where it is known and positive (at or
+// above the cloud point the layer counts as collapsed instead, see
+// physics.StericLayerEffective).
+func (s StericLayer) AtStorage() float64 {
+	if s.Factor > 0 {
+		return s.Thickness * s.Factor
+	}
+	return s.Thickness
 }
 
 // Depletant is the free, non-adsorbing polymer: concentration in g/L,

@@ -35,7 +35,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 
 	mediumT := valueOr(m.TemperatureC, temperatureDefault, n)
 	storageT, tempField := resolveStorageRange(&s.Storage, mediumT, c, bad, n)
-	c.StorageTempK = physics.Kelvin(storageT)
+	c.StorageTempK, c.MediumTempK = physics.Kelvin(storageT), physics.Kelvin(mediumT)
 	before := len(bad.Problems)
 	c.Liquid = resolveLiquid(lib, m, mediumT, storageT, tempField, bad, n)
 	liquidOK := len(bad.Problems) == before
