@@ -201,7 +201,7 @@ func TestLibraryListingJSON(t *testing.T) {
 	}
 	for _, field := range []string{`"density_kg_m3"`, `"hamaker_water_zJ"`, `"isoelectric_ph"`, `"viscosity_points"`,
 		`"viscosity_mPa_s"`, `"density_points"`, `"relative_permittivity_points"`, `"temperature_c"`, `"source"`,
-		`"min_temperature_c"`, `"flash_point_c"`, `"model":"iapws"`} {
+		`"min_temperature_c"`, `"flash_point_c"`, `"model":"iapws"`, `"melting_c"`, `"boiling_c"`} {
 		if !bytes.Contains(first, []byte(field)) {
 			t.Errorf("listing lacks %s", field)
 		}

@@ -261,6 +261,9 @@ type LiquidListing struct {
 	PermittivityPoints []LiquidPermittivityPoint `json:"relative_permittivity_points"`
 	RefractiveIndex    SourcedValue              `json:"refractive_index"`
 	FlashPointC        *SourcedValue             `json:"flash_point_c,omitempty"`
+	MeltingC           SourcedValue              `json:"melting_c"`
+	BoilingC           *SourcedValue             `json:"boiling_c,omitempty"`
+	SupercoolsToC      *SourcedValue             `json:"supercools_to_c,omitempty"`
 	Aqueous            bool                      `json:"aqueous"`
 	Flammable          bool                      `json:"flammable"`
 	Notes              string                    `json:"notes,omitempty"`
@@ -295,6 +298,7 @@ func (l Liquid) listing() LiquidListing {
 		DensitySource:   l.Density.Source, ViscositySource: l.Viscosity.Source,
 		PermittivitySource: l.RelativePermittivity.Source,
 		RefractiveIndex:    l.RefractiveIndex, FlashPointC: copySourced(l.FlashPointC),
+		MeltingC: l.MeltingC, BoilingC: copySourced(l.BoilingC), SupercoolsToC: copySourced(l.SupercoolsToC),
 		Aqueous: l.Aqueous, Flammable: l.Flammable, Notes: l.Notes,
 	}
 	density, viscosity, permittivity := l.Density.Points, l.Viscosity.Points, l.RelativePermittivity.Points
