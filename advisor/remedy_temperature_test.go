@@ -109,3 +109,26 @@ func TestProcessShearTargetUsesTheSuspension(t *testing.T) {
 		t.Errorf("shear work at the target %g kT, barrier %g kT", w, barrier)
 	}
 }
+
+// TestStorageOutsideTheLiquidIsAFinding: water (ice point 0 °C, boiling
+// point 99.97 °C at 1 atm, ITS-90) stored at -5 °C or 105 °C is triaged,
+// not refused: the cold store ranks freeze_thaw first, the hot one
+// thermal_excursion.
+func TestStorageOutsideTheLiquidIsAFinding(t *testing.T) {
+	t.Parallel()
+	e := benchEngine(t)
+	for storage, want := range map[string]string{"-5": "freeze_thaw", "105": "thermal_excursion"} {
+		var s input.Sample
+		if err := json.Unmarshal([]byte(`{"symptom":"flocculation","particles":{"diameter_nm":200,"density_kg_m3":1050,"zeta_mV":-40},
+			"medium":{"temperature_c":20},"storage":{"temperature_c":`+storage+`}}`), &s); err != nil {
+			t.Fatal(err)
+		}
+		r, err := e.Triage(&s)
+		if err != nil {
+			t.Fatalf("storage at %s degC: %v", storage, err)
+		}
+		if len(r.Causes) == 0 || r.Causes[0].ID != want {
+			t.Errorf("storage at %s degC: top cause %+v, want %s", storage, r.Causes, want)
+		}
+	}
+}
