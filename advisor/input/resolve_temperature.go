@@ -3,6 +3,7 @@ package input
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
@@ -33,7 +34,7 @@ func resolveStorageRange(st *Storage, mediumT float64, c *Conditions, bad *Error
 	if st.MinTemperatureC != nil {
 		cold = *st.MinTemperatureC
 		if cold > warm {
-			bad.add("/storage/min_temperature_c", "above the warm end of storage ("+field[1:]+")", "degC",
+			bad.add("/storage/min_temperature_c", "above the warm end of storage ("+strings.ReplaceAll(field[1:], "/", ".")+")", "degC",
 				"value <= "+number.Shortest(warm))
 		}
 	}
