@@ -12,7 +12,7 @@ import (
 func (ev *evaluation) addLayers() {
 	c := ev.cond
 	if c.Steric.Present && ev.stericEffective() {
-		ev.pair.StericThickness = c.Steric.Thickness
+		ev.pair.StericThickness = c.Steric.AtStorage()
 	}
 	if c.FreePolymer.Evaluable() {
 		ev.pair.DepletionRange = c.FreePolymer.RadiusOfGyration
@@ -38,7 +38,7 @@ func (ev *evaluation) computeBeyondDLVO() {
 		ev.addLayers()
 	}
 	if c.Steric.Present {
-		v := ev.vanDerWaalsOnly.Energy(2 * c.Steric.Thickness)
+		v := ev.vanDerWaalsOnly.Energy(2 * c.Steric.AtStorage())
 		ev.set("steric_contact_energy", v/kT, "van der Waals energy at h = 2 x layer thickness")
 		if !ev.stericEffective() {
 			ev.notes.Add("steric layer counted as collapsed: solvent not good or storage at or above the cloud point")
@@ -59,13 +59,25 @@ func (ev *evaluation) shear(kT float64) {
 	if c.Shear <= 0 {
 		return
 	}
-	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
-		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
+	eta := ev.suspensionViscosity()
+	ev.set("suspension_viscosity", eta*1e3, "liquid viscosity times the Krieger-Dougherty relative viscosity")
+	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, eta, c.StorageTempK),
+		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT), eta of the suspension")
 	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
 		width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
-		w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
-		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
+		w := physics.HydrodynamicShearForceEnergy(eta, c.Shear, c.Radius, width)
+		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977), eta of the suspension")
 	}
+}
+
+// suspensionViscosity is the viscosity, Pa s, that a pair of particles
+// feels in shear flow: the liquid's times the Krieger-Dougherty relative
+// viscosity on the effective volume fraction. This effective-medium view
+// (each pair sheared by the mean stress of the suspension; common practice)
+// overstates the force somewhat, since the liquid fills the gap between
+// the pair. rheology must run first.
+func (ev *evaluation) suspensionViscosity() float64 {
+	return ev.cond.Liquid.Viscosity * ev.facts.Number("relative_viscosity")
 }
 
 func (ev *evaluation) depletion(kT float64) {

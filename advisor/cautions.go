@@ -44,6 +44,9 @@ func cautions(ev *evaluation) []string {
 	if c.MultivalentSalt != "" {
 		out = append(out, "Changing salts or adding chelating agents changes the product's composition: check the safety data sheets of the additives.")
 	}
+	if c.MinStorageTempK < c.FreezingK && c.Liquid.Aqueous {
+		out = append(out, "Freeze protectants: ethylene glycol is toxic if swallowed and has no place in food, cosmetic or pharmaceutical products; glycols add to the VOC content of paints and coatings, which local regulations limit; ethanol makes the liquid flammable. Check the safety data sheets and the permitted limits before adding any.")
+	}
 	switch c.Product {
 	case "food", "beverage", "cosmetic", "pharmaceutical":
 		out = append(out, fmt.Sprintf("Regulated %s product: any remedy that changes the formula, a raw material or the process must satisfy the applicable regulations (permitted ingredients and limits, labelling) and go through the product's change control and stability programme before release.", c.Product))

@@ -90,6 +90,7 @@ func (e *Engine) evaluate(s *input.Sample) (*evaluation, error) {
 	ev.computeGravity()
 	ev.computeInteraction()
 	ev.computeBeyondDLVO()
+	ev.computeTemperature()
 	return ev, nil
 }
 

@@ -108,6 +108,8 @@ func (ev *evaluation) inputFacts() {
 	f.SetNumber("container_height_mm", c.Height*1e3)
 	f.SetNumber("max_clear_layer_mm", c.MaxClear*1e3)
 	f.SetNumber("storage_temperature_c", c.StorageTempK-physics.CelsiusZero)
+	f.SetNumber("storage_min_temperature_c", c.MinStorageTempK-physics.CelsiusZero)
+	f.SetNumber("freeze_thaw_cycles", c.FreezeThawCycles)
 	f.SetNumber("observed_clear_layer_mm", c.Observed.ClearLayer*1e3)
 	f.SetNumber("age_days", c.Observed.Age/input.Day)
 	f.SetText("sediment_redisperses", c.Observed.Redisperses)

@@ -22,7 +22,21 @@ type Conditions struct {
 	MaterialKind    string
 
 	Liquid       LiquidState
-	StorageTempK float64
+	StorageTempK float64 // K, the warm end of storage: kinetics, viscosity and cloud point are judged here
+
+	// The temperature history: the cold end of storage or transport (K;
+	// StorageTempK when no range is stated), whether a range was stated,
+	// and the freeze-thaw cycles stated (NaN when not).
+	MediumTempK      float64 // K, where the medium and the layer were characterised
+	MinStorageTempK  float64
+	StorageRange     bool
+	FreezeThawCycles float64
+
+	// The co-solvent of a water medium (0 when none) and its mass fraction,
+	// and the freezing point of the continuous phase with its ions, K.
+	Cosolvent         physics.Cosolvent
+	CosolventFraction float64
+	FreezingK         float64
 
 	Ions                  []physics.Ion
 	IonicStrength         float64 // mol/m^3
@@ -45,6 +59,7 @@ type Conditions struct {
 
 	Height, ShelfLife, MaxClear float64 // m, s, m
 	Shear                       float64 // 1/s
+	ProcessStep                 string  // the named process step that set Shear, or ""
 	YieldStress                 float64 // Pa
 
 	Observed Observed
@@ -58,16 +73,31 @@ type LiquidState struct {
 	Density, Viscosity, Permittivity, RefractiveIndex float64
 	Aqueous, Flammable                                bool
 	FlashPointC                                       float64
+	BoilingK                                          float64 // +Inf when the liquid has none
 }
 
 // StericLayer is the adsorbed layer: thickness in m, cloud point in K (NaN
-// when not stated).
+// when not stated), and Factor, its thickness at the storage temperature
+// over the stated one (physics.CloudPointLayerFactor from the medium
+// temperature; NaN without a cloud point above the medium temperature).
 type StericLayer struct {
 	Present    bool
 	Thickness  float64
 	Quality    physics.SolventQuality
 	HasQuality bool
 	CloudK     float64
+	Factor     float64
+}
+
+// AtStorage is the layer's thickness at the storage temperature, m: the
+// stated thickness scaled by Factor where it is known and positive (at or
+// above the cloud point the layer counts as collapsed instead, see
+// physics.StericLayerEffective).
+func (s StericLayer) AtStorage() float64 {
+	if s.Factor > 0 {
+		return s.Thickness * s.Factor
+	}
+	return s.Thickness
 }
 
 // Depletant is the free, non-adsorbing polymer: concentration in g/L,

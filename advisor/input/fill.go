@@ -31,7 +31,8 @@ func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidSt
 		n.Text(line)
 	}
 	st := LiquidState{Key: l.Key, Density: p.Density, Viscosity: p.Viscosity, Permittivity: p.RelativePermittivity,
-		RefractiveIndex: p.RefractiveIndex, Aqueous: l.Aqueous, Flammable: l.Flammable, FlashPointC: math.NaN()}
+		RefractiveIndex: p.RefractiveIndex, Aqueous: l.Aqueous, Flammable: l.Flammable, FlashPointC: math.NaN(),
+		BoilingK: l.BoilingK()}
 	if l.FlashPointC != nil {
 		st.FlashPointC = l.FlashPointC.Value
 	}

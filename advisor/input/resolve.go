@@ -34,15 +34,14 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	}
 
 	mediumT := valueOr(m.TemperatureC, temperatureDefault, n)
-	storageT := mediumT
-	tempField := "/medium/temperature_c"
-	if s.Storage.TemperatureC != nil {
-		storageT, tempField = *s.Storage.TemperatureC, "/storage/temperature_c"
-	} else {
-		n.Text("storage.temperature_c not given: stability judged at the medium temperature, " + number.Shortest(mediumT) + " degC")
-	}
-	c.StorageTempK = physics.Kelvin(storageT)
+	storageT, tempField := resolveStorageRange(&s.Storage, mediumT, c, bad, n)
+	c.StorageTempK, c.MediumTempK = physics.Kelvin(storageT), physics.Kelvin(mediumT)
+	before := len(bad.Problems)
 	c.Liquid = resolveLiquid(lib, m, mediumT, storageT, tempField, bad, n)
+	liquidOK := len(bad.Problems) == before
+	if liquidOK {
+		resolveCosolvent(m, mediumT, c, bad, n)
+	}
 
 	resolveSize(p, c, bad, n)
 	c.ParticleDensity = firstKnown(p.DensityKgM3, mat.density, "particles.density_kg_m3", "kg/m^3", p.Material, n)
@@ -53,12 +52,15 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	c.VolumeFraction = valueOr(p.VolumeFraction, volumeFractionDefault, n)
 
 	resolveElectrolyte(m, c, bad, n)
+	if liquidOK && len(bad.Problems) == before {
+		resolveFreezing(lib.Liquids[c.Liquid.Key], mediumT, c, bad, n)
+	}
 	c.IsoelectricPH = firstKnown(p.IsoelectricPH, mat.iep, "particles.isoelectric_ph", "pH", p.Material, n)
 	if m.PH != nil {
 		c.PH = *m.PH
 	}
 	resolveHamaker(p, c, mat, n)
-	resolveStorage(s, c, n)
+	resolveStorage(s, c, bad, n)
 	resolveStabilizer(s.Stabilizer, m.FreePolymer, c, n)
 	resolveDroplet(p, c, n)
 	resolveObservation(s.Observation, c)
@@ -186,7 +188,7 @@ func pick(v *float64, lib float64) float64 {
 	return lib
 }
 
-func resolveStorage(s *Sample, c *Conditions, n *Notes) {
+func resolveStorage(s *Sample, c *Conditions, bad *Error, n *Notes) {
 	st := &s.Storage
 	h := valueOr(st.ContainerHeightMm, containerDefault, n)
 	c.Height = h * 1e-3
@@ -201,6 +203,7 @@ func resolveStorage(s *Sample, c *Conditions, n *Notes) {
 	if st.ShearRatePerS != nil {
 		c.Shear = *st.ShearRatePerS
 	}
+	resolveProcessStep(st, c, bad, n)
 	c.YieldStress = 0
 	if s.Medium.YieldStressPa != nil {
 		c.YieldStress = *s.Medium.YieldStressPa

@@ -9,7 +9,7 @@ import (
 )
 
 func resolveStabilizer(st *Stabilizer, fp *FreePolymer, c *Conditions, n *Notes) {
-	c.Steric.CloudK = math.NaN()
+	c.Steric.CloudK, c.Steric.Factor = math.NaN(), math.NaN()
 	if st != nil {
 		if st.LayerThicknessNm != nil && *st.LayerThicknessNm > 0 {
 			c.Steric.Present, c.Steric.Thickness = true, *st.LayerThicknessNm*1e-9
@@ -29,6 +29,13 @@ func resolveStabilizer(st *Stabilizer, fp *FreePolymer, c *Conditions, n *Notes)
 		}
 		if ap := st.AdsorbingPolymer; ap != nil {
 			c.Adsorbing = Adsorbed{Present: true, MolarMass: *ap.MolarMassKgMol, Coverage: *ap.SurfaceCoverage}
+		}
+		if c.Steric.Present && c.Steric.CloudK > c.MediumTempK {
+			c.Steric.Factor = physics.CloudPointLayerFactor(c.StorageTempK, c.Steric.CloudK, c.MediumTempK)
+			if c.StorageTempK != c.MediumTempK && c.StorageTempK < c.Steric.CloudK {
+				n.Add("steric layer stated at the medium temperature %g degC: %s thick at storage, %g degC, by its approach to the cloud point (Flory chi, layer ~ (1 - 2 chi)^(1/3))",
+					c.MediumTempK-physics.CelsiusZero, number.Quantity(c.Steric.AtStorage()*1e9, "nm"), c.StorageTempK-physics.CelsiusZero)
+			}
 		}
 		if c.Steric.Present && !c.Steric.HasQuality {
 			n.Add("stabilizer solvent quality not given: good solvent assumed for the steric layer")

@@ -147,6 +147,66 @@ func TestResolveFills(t *testing.T) {
 				}
 			},
 		},
+		{
+			// 100 mM NaCl is 0.1 mol/kg of water: 0.1 mol/kg NaCl freezes
+			// at -0.348 degC (CRC, Concentrative Properties of Aqueous
+			// Solutions) [pub]; the ideal law says 0.373 K. A storage
+			// temperature below it is not an error.
+			name: "salt water frozen in storage",
+			js: `{"symptom":"flocculation","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"medium":{"temperature_c":20,"electrolytes":[{"formula":"NaCl","concentration_mM":100}]},
+				"storage":{"min_temperature_c":-8,"freeze_thaw_cycles":3}}`,
+			check: func(t *testing.T, c *input.Conditions) {
+				if got := c.FreezingK - 273.15; !near(got, -0.348, 0.08) {
+					t.Errorf("freezing point %g degC, want -0.348 within 8 %%", got)
+				}
+				if !near(c.MinStorageTempK, 265.15, 1e-12) || !near(c.StorageTempK, 293.15, 1e-12) || !c.StorageRange || c.FreezeThawCycles != 3 {
+					t.Errorf("cold end %g K, warm end %g K, range %v, cycles %g; want 265.15, 293.15, true, 3",
+						c.MinStorageTempK, c.StorageTempK, c.StorageRange, c.FreezeThawCycles)
+				}
+			},
+			notes: []string{"storage range -8 to 20 degC", "freezing at the cold end"},
+		},
+		{
+			// ASHRAE Handbook Fundamentals (2009) ch. 31 [pub]: 40 % w/w
+			// propylene glycol freezes at -21.1 degC, 1036.2 kg/m^3 at 20 degC.
+			name: "propylene glycol in water",
+			js: `{"symptom":"flocculation","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"medium":{"temperature_c":20,"cosolvents":[{"name":"propylene_glycol","mass_fraction":0.4}]}}`,
+			check: func(t *testing.T, c *input.Conditions) {
+				if got := c.FreezingK - 273.15; math.Abs(got+21.1) > 0.6 {
+					t.Errorf("freezing point %g degC, want -21.1 within 0.6 K", got)
+				}
+				if !near(c.Liquid.Density, 1036.2, 0.007) || c.CosolventFraction != 0.4 {
+					t.Errorf("density %g kg/m^3, fraction %g; want 1036.2, 0.4", c.Liquid.Density, c.CosolventFraction)
+				}
+			},
+			notes: []string{"liquid: water with propylene_glycol at mass fraction 0.4"},
+		},
+		{
+			// A gear pump shears at 1e4 to 1e5 1/s (tip speed over
+			// clearance, v/h) [practice]: geometric mean 3.16e4 1/s.
+			name: "process step",
+			js: `{"symptom":"flocculation","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"storage":{"process_step":"gear_pump"}}`,
+			check: func(t *testing.T, c *input.Conditions) {
+				if !near(c.Shear, 31622.8, 1e-5) || c.ProcessStep != "gear_pump" {
+					t.Errorf("shear %g 1/s from %q, want 31622.8 from gear_pump", c.Shear, c.ProcessStep)
+				}
+			},
+			notes: []string{"from storage.process_step gear_pump"},
+		},
+		{
+			name: "explicit shear wins over the process step",
+			js: `{"symptom":"flocculation","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"storage":{"process_step":"gear_pump","shear_rate_per_s":50}}`,
+			check: func(t *testing.T, c *input.Conditions) {
+				if c.Shear != 50 || c.ProcessStep != "" {
+					t.Errorf("shear %g 1/s from %q, want 50 stated", c.Shear, c.ProcessStep)
+				}
+			},
+			notes: []string{"storage.shear_rate_per_s given: it wins"},
+		},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
@@ -192,6 +252,50 @@ func TestResolveErrors(t *testing.T) {
 			js: `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},
 				"medium":{"electrolytes":[{"formula":"NaCl","concentration_mM":1},{"formula":"XyZ2","concentration_mM":1}]}}`,
 			want: input.FieldProblem{Pointer: "/medium/electrolytes/1/formula"},
+		},
+		{
+			name: "unknown co-solvent",
+			js: `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"medium":{"cosolvents":[{"name":"methanol","mass_fraction":0.2}]}}`,
+			want: input.FieldProblem{Pointer: "/medium/cosolvents/0/name", Valid: "one of: ethylene_glycol, propylene_glycol, glycerol, ethanol"},
+		},
+		{
+			name: "co-solvent in an oil",
+			js: `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"medium":{"liquid":"toluene","cosolvents":[{"name":"glycerol","mass_fraction":0.2}]}}`,
+			want: input.FieldProblem{Pointer: "/medium/cosolvents"},
+		},
+		{
+			// Lange's table 5.13 ends at 56.1 % ethanol.
+			name: "ethanol beyond its table",
+			js: `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"medium":{"cosolvents":[{"name":"ethanol","mass_fraction":0.58}]}}`,
+			want: input.FieldProblem{Pointer: "/medium/cosolvents/0/mass_fraction", Unit: "1", Valid: "0 <= value <= 0.561"},
+		},
+		{
+			// Water melts at 0 degC and boils at 99.97 degC (ITS-90).
+			name: "medium water below its freezing point",
+			js:   `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},"medium":{"temperature_c":-5}}`,
+			want: input.FieldProblem{Pointer: "/medium/temperature_c", Unit: "degC", Valid: "0 <= value <= 99.97"},
+		},
+		{
+			// n-hexadecane melts at 18.2 degC (CRC).
+			name: "medium hexadecane below its melting point",
+			js:   `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},"medium":{"liquid":"hexadecane","temperature_c":16}}`,
+			want: input.FieldProblem{Pointer: "/medium/temperature_c", Unit: "degC", Valid: "18.2 <= value <= 286.9"},
+		},
+		{
+			// 50 % w/w glycerol-water freezes at -22.0 degC (Lange table
+			// 5.13) and boils at about 106 degC [memory].
+			name: "medium glycerol-water above its boiling point",
+			js:   `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},"medium":{"liquid":"glycerol_water_50","temperature_c":108}}`,
+			want: input.FieldProblem{Pointer: "/medium/temperature_c", Unit: "degC", Valid: "-22 <= value <= 106"},
+		},
+		{
+			name: "storage range upside down",
+			js: `{"symptom":"settling","particles":{"diameter_nm":200,"density_kg_m3":2650},
+				"storage":{"min_temperature_c":30,"max_temperature_c":10}}`,
+			want: input.FieldProblem{Pointer: "/storage/min_temperature_c", Unit: "degC", Valid: "value <= 10"},
 		},
 		{
 			name: "no density",

@@ -65,6 +65,14 @@ type Medium struct {
 	ConductivityUSCm *float64      `json:"conductivity_uS_cm,omitempty" validate:"omitempty,gte=0,lte=300000" unit:"uS/cm"`
 	YieldStressPa    *float64      `json:"yield_stress_Pa,omitempty" validate:"omitempty,gte=0,lte=10000" unit:"Pa"`
 	FreePolymer      *FreePolymer  `json:"free_polymer,omitempty"`
+	Cosolvents       []Cosolvent   `json:"cosolvents,omitempty" validate:"omitempty,max=1,dive"`
+}
+
+// Cosolvent is a water-miscible liquid mixed into an aqueous medium (a
+// freeze protectant), by name and mass fraction of the liquid phase.
+type Cosolvent struct {
+	Name         string   `json:"name" validate:"oneof=ethylene_glycol propylene_glycol glycerol ethanol"`
+	MassFraction *float64 `json:"mass_fraction" validate:"required,gte=0,lte=0.6" unit:"1"`
 }
 
 // Electrolyte is one dissolved salt, by formula or by explicit valences.
@@ -104,6 +112,10 @@ type Storage struct {
 	TemperatureC      *float64 `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
 	ShearRatePerS     *float64 `json:"shear_rate_per_s,omitempty" validate:"omitempty,gte=0,lte=1e7" unit:"1/s"`
 	MaxClearLayerMm   *float64 `json:"max_clear_layer_mm,omitempty" validate:"omitempty,gte=0.01,lte=20000" unit:"mm"`
+	MinTemperatureC   *float64 `json:"min_temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
+	MaxTemperatureC   *float64 `json:"max_temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
+	FreezeThawCycles  *int     `json:"freeze_thaw_cycles,omitempty" validate:"omitempty,gte=0,lte=1000" unit:"1"`
+	ProcessStep       string   `json:"process_step,omitempty" validate:"omitempty,oneof=stirring pumping gear_pump high_shear_mixing milling filling spraying brushing rolling"`
 }
 
 // Observation is what the complaint reports.

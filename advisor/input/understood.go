@@ -30,6 +30,12 @@ func Understood(s *Sample, c *Conditions) Sample {
 		u.Medium.TemperatureC = ptr(defaultTemperatureC)
 	}
 	u.Storage.TemperatureC = ptr(c.StorageTempK - physics.CelsiusZero)
+	if c.StorageRange {
+		u.Storage.MinTemperatureC = ptr(c.MinStorageTempK - physics.CelsiusZero)
+	}
+	if c.ProcessStep != "" {
+		u.Storage.ShearRatePerS = ptr(c.Shear)
+	}
 	u.Storage.ContainerHeightMm = ptr(c.Height * 1e3)
 	u.Storage.ShelfLifeDays = ptr(c.ShelfLife / Day)
 	u.Storage.MaxClearLayerMm = ptr(c.MaxClear * 1e3)

@@ -201,7 +201,7 @@ func TestLibraryListingJSON(t *testing.T) {
 	}
 	for _, field := range []string{`"density_kg_m3"`, `"hamaker_water_zJ"`, `"isoelectric_ph"`, `"viscosity_points"`,
 		`"viscosity_mPa_s"`, `"density_points"`, `"relative_permittivity_points"`, `"temperature_c"`, `"source"`,
-		`"min_temperature_c"`, `"flash_point_c"`, `"model":"iapws"`} {
+		`"min_temperature_c"`, `"flash_point_c"`, `"model":"iapws"`, `"melting_c"`, `"boiling_c"`} {
 		if !bytes.Contains(first, []byte(field)) {
 			t.Errorf("listing lacks %s", field)
 		}
@@ -253,6 +253,7 @@ const validLiquids = `liquids:
     refractive_index: {value: 1.333, source: "test"}
     aqueous: true
     flammable: false
+    melting_c: {value: 0, source: "test"}
 `
 
 const validSolvent = `liquids:
@@ -278,6 +279,8 @@ const validSolvent = `liquids:
     flash_point_c: {value: 12, source: "test"}
     aqueous: false
     flammable: true
+    melting_c: {value: -100, source: "test"}
+    boiling_c: {value: 70, source: "test"}
 `
 
 func TestLibraryBrokenFiles(t *testing.T) {
@@ -330,6 +333,10 @@ func TestLibraryBrokenFiles(t *testing.T) {
 			[]string{`library/materials.yaml:6: unknown key "colour"`, `library/materials.yaml:4: kind "mineral" is not one of`}},
 		{"text for a number", validMaterials, strings.Replace(validSolvent, "value_mPa_s: 0.6", "value_mPa_s: thin", 1),
 			[]string{"library/liquids.yaml:15: want a number"}},
+		{"no melting point", validMaterials, strings.Replace(validSolvent, "    melting_c: {value: -100, source: \"test\"}\n", "", 1),
+			[]string{`library/liquids.yaml:2: "solvent": melting_c is required`}},
+		{"boiling below melting", validMaterials, strings.Replace(validSolvent, "boiling_c: {value: 70", "boiling_c: {value: -120", 1),
+			[]string{`library/liquids.yaml:25: "solvent": boiling_c must be above melting_c`}},
 		{"unphysical extrapolation", validMaterials, strings.Replace(validSolvent, "value_kg_m3: 760", "value_kg_m3: 650", 1),
 			[]string{`library/liquids.yaml:2: "solvent": extrapolated to 300 °C its properties become unphysical`}},
 	}

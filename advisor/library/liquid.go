@@ -61,7 +61,36 @@ type Liquid struct {
 	Aqueous         bool          // water is the continuous phase or its main part
 	Flammable       bool          // flash point below 60 °C (UN GHS categories 1-3)
 
+	// MeltingC is the melting point at 101.325 kPa, °C (the pour point for
+	// oils without a sharp one). BoilingC is the normal boiling point, °C;
+	// nil where the liquid decomposes or has none below the request range.
+	// SupercoolsToC, for liquids that in practice stay liquid far below
+	// their melting point and set to a glass rather than crystallise, is
+	// the lowest temperature at which they are still taken as liquid, °C.
+	MeltingC      SourcedValue
+	BoilingC      *SourcedValue
+	SupercoolsToC *SourcedValue
+
 	Notes string
+}
+
+// LowestLiquidK returns the lowest temperature, in K, at which the library
+// takes the pure liquid to be liquid: SupercoolsToC where given, else its
+// melting point.
+func (l Liquid) LowestLiquidK() float64 {
+	if l.SupercoolsToC != nil {
+		return physics.Kelvin(l.SupercoolsToC.Value)
+	}
+	return physics.Kelvin(l.MeltingC.Value)
+}
+
+// BoilingK returns the normal boiling point, in K, or +Inf where the
+// liquid has none (BoilingC nil).
+func (l Liquid) BoilingK() float64 {
+	if l.BoilingC == nil {
+		return math.Inf(1)
+	}
+	return physics.Kelvin(l.BoilingC.Value)
 }
 
 // LiquidProperties are a liquid's properties at one temperature, in SI units.
@@ -232,6 +261,9 @@ type LiquidListing struct {
 	PermittivityPoints []LiquidPermittivityPoint `json:"relative_permittivity_points"`
 	RefractiveIndex    SourcedValue              `json:"refractive_index"`
 	FlashPointC        *SourcedValue             `json:"flash_point_c,omitempty"`
+	MeltingC           SourcedValue              `json:"melting_c"`
+	BoilingC           *SourcedValue             `json:"boiling_c,omitempty"`
+	SupercoolsToC      *SourcedValue             `json:"supercools_to_c,omitempty"`
 	Aqueous            bool                      `json:"aqueous"`
 	Flammable          bool                      `json:"flammable"`
 	Notes              string                    `json:"notes,omitempty"`
@@ -266,6 +298,7 @@ func (l Liquid) listing() LiquidListing {
 		DensitySource:   l.Density.Source, ViscositySource: l.Viscosity.Source,
 		PermittivitySource: l.RelativePermittivity.Source,
 		RefractiveIndex:    l.RefractiveIndex, FlashPointC: copySourced(l.FlashPointC),
+		MeltingC: l.MeltingC, BoilingC: copySourced(l.BoilingC), SupercoolsToC: copySourced(l.SupercoolsToC),
 		Aqueous: l.Aqueous, Flammable: l.Flammable, Notes: l.Notes,
 	}
 	density, viscosity, permittivity := l.Density.Points, l.Viscosity.Points, l.RelativePermittivity.Points
@@ -301,7 +334,8 @@ func (l Liquid) listing() LiquidListing {
 const (
 	minViscosityMPaS, maxViscosityMPaS = 0.01, 1e9
 	minFlashPointC, maxFlashPointC     = -60.0, 400.0
-	flammableBelowC                    = 60.0 // UN GHS, chapter 2.6: categories 1-3
+	minPhaseC, maxPhaseC               = -200.0, 400.0 // melting, boiling and glass points
+	flammableBelowC                    = 60.0          // UN GHS, chapter 2.6: categories 1-3
 )
 
 type liquidsFileYAML struct {
@@ -319,6 +353,9 @@ type liquidYAML struct {
 	RelativePermittivity *yamlTable[permittivityPointYAML] `yaml:"relative_permittivity"`
 	RefractiveIndex      *yamlSourced                      `yaml:"refractive_index"`
 	FlashPointC          *yamlSourced                      `yaml:"flash_point_c"`
+	MeltingC             *yamlSourced                      `yaml:"melting_c"`
+	BoilingC             *yamlSourced                      `yaml:"boiling_c"`
+	SupercoolsToC        *yamlSourced                      `yaml:"supercools_to_c"`
 	Aqueous              *bool                             `yaml:"aqueous"`
 	Flammable            *bool                             `yaml:"flammable"`
 	Notes                string                            `yaml:"notes"`
@@ -412,6 +449,7 @@ func (c *checker) liquid(e liquidYAML, key string, line int) (l Liquid, complete
 		c.add(line, "%q: refractive_index is required", key)
 	}
 	l.FlashPointC = c.sourced(e.FlashPointC, "flash_point_c", minFlashPointC, maxFlashPointC, 1)
+	c.phaseLimits(&l, e, line)
 	if e.Aqueous == nil || e.Flammable == nil {
 		c.add(line, "%q: aqueous and flammable are required (true or false)", key)
 		return l, complete
@@ -425,6 +463,25 @@ func (c *checker) liquid(e liquidYAML, key string, line int) (l Liquid, complete
 			key, !l.Flammable, l.FlashPointC.Value, flammableBelowC)
 	}
 	return l, complete
+}
+
+// phaseLimits converts and checks the melting point (required), the
+// boiling point and the supercooling limit: each sourced, the boiling point
+// above the melting point and the supercooling limit below it.
+func (c *checker) phaseLimits(l *Liquid, e liquidYAML, line int) {
+	if m := c.sourced(e.MeltingC, "melting_c", minPhaseC, maxPhaseC, 1); m != nil {
+		l.MeltingC = *m
+	} else if e.MeltingC == nil {
+		c.add(line, "%q: melting_c is required", l.Key)
+	}
+	l.BoilingC = c.sourced(e.BoilingC, "boiling_c", minPhaseC, maxPhaseC, 1)
+	l.SupercoolsToC = c.sourced(e.SupercoolsToC, "supercools_to_c", minPhaseC, maxPhaseC, 1)
+	if l.BoilingC != nil && !(l.BoilingC.Value > l.MeltingC.Value) {
+		c.add(e.BoilingC.line, "%q: boiling_c must be above melting_c", l.Key)
+	}
+	if l.SupercoolsToC != nil && !(l.SupercoolsToC.Value < l.MeltingC.Value) {
+		c.add(e.SupercoolsToC.line, "%q: supercools_to_c must be below melting_c", l.Key)
+	}
 }
 
 // tabulated converts and checks the range and tables of a tabulated liquid

@@ -284,6 +284,33 @@ func TestLiquidFlags(t *testing.T) {
 	}
 }
 
+// TestLiquidPhaseLimits checks the library's melting and boiling points
+// against published values (CRC Handbook, 97th ed., Physical Constants of
+// Organic Compounds and Fixed Points on the ITS-90, [memory]; Lange's
+// Handbook table 5.13 for 50 % glycerol-water, [pub]) and the lowest
+// liquid temperature of a supercooling liquid.
+func TestLiquidPhaseLimits(t *testing.T) {
+	t.Parallel()
+	lib := loadEmbedded(t)
+	for key, want := range map[string]struct{ lowestC, boilingC float64 }{
+		"water": {0, 99.97}, "glycerol_water_50": {-22.0, 106}, "glycerol": {-93, 290},
+		"ethylene_glycol": {-12.7, 197.3}, "propylene_glycol": {-60, 187.6},
+		"ethanol": {-114.1, 78.3}, "isopropanol": {-87.9, 82.3}, "hexadecane": {18.2, 286.9},
+		"toluene": {-94.9, 110.6}, "pdms_100cst": {-55, math.Inf(1)}, "white_mineral_oil": {-15, math.Inf(1)},
+	} {
+		l := liquid(t, lib, key)
+		if got := l.LowestLiquidK() - physics.CelsiusZero; math.Abs(got-want.lowestC) > 1e-9 {
+			t.Errorf("%s: lowest liquid temperature %g degC, want %g", key, got, want.lowestC)
+		}
+		if got := l.BoilingK() - physics.CelsiusZero; !(math.Abs(got-want.boilingC) <= 1e-9 || got == want.boilingC) {
+			t.Errorf("%s: boiling point %g degC, want %g", key, got, want.boilingC)
+		}
+	}
+	if g := liquid(t, lib, "glycerol"); g.MeltingC.Value != 18.1 {
+		t.Errorf("glycerol melts at %g degC, want 18.1 (CRC)", g.MeltingC.Value)
+	}
+}
+
 func ExampleLiquid_Properties() {
 	lib, err := library.Load(rules.FS)
 	if err != nil {

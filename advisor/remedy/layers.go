@@ -12,6 +12,12 @@ import (
 // (common practice: the layer already thins a few kelvin below it).
 const cloudPointMarginK = 10.0
 
+// freezeMarginK keeps the lowest storage temperature this far above the
+// freezing point of the continuous phase, and a protectant this far below
+// the lowest storage temperature (common practice: allow a few kelvin for
+// the spread of transport temperatures and of the freezing-point data).
+const freezeMarginK = 3.0
+
 func stericCriterion(cs *Case) string {
 	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(cs.Cond.Criteria.MaxStericKT) + " kT"
 }
@@ -125,26 +131,55 @@ func solveSizeSpan(cs *Case) (Target, string, bool) {
 	return Target{"particles.size_span", ">=", span, "1"}, crit, true
 }
 
+// solveStorageTemperature keeps the storage range inside the liquid's and
+// the stabiliser's window: when the liquid freezes at the cold end, the
+// lowest storage temperature freezeMarginK above its freezing point; when
+// it boils at the warm end, the highest as far below its boiling point;
+// else the highest storage temperature at which the steric layer keeps the
+// thickness the van der Waals criterion needs (physics.CloudPointMaxTemp),
+// or, where that cannot be solved, cloudPointMarginK below the cloud point.
 func solveStorageTemperature(cs *Case) (Target, string, bool) {
 	c := cs.Cond
+	if c.MinStorageTempK < c.FreezingK {
+		return Target{"storage.min_temperature_c", ">=", c.FreezingK + freezeMarginK - physics.CelsiusZero, "degC"},
+			fmt.Sprintf("lowest storage and transport temperature at least %g K above the freezing point of the continuous phase, %s degC",
+				freezeMarginK, number.Shortest(number.Round(c.FreezingK-physics.CelsiusZero, 3))), true
+	}
+	if c.StorageTempK > c.Liquid.BoilingK {
+		return Target{"storage.max_temperature_c", "<=", c.Liquid.BoilingK - freezeMarginK - physics.CelsiusZero, "degC"},
+			fmt.Sprintf("highest storage temperature at least %g K below the boiling point of the liquid", freezeMarginK), true
+	}
 	if math.IsNaN(c.Steric.CloudK) {
 		return Target{}, "no cloud point stated", false
 	}
-	return Target{"storage.temperature_c", "<=", c.Steric.CloudK - physics.CelsiusZero - cloudPointMarginK, "degC"},
-		fmt.Sprintf("storage at least %g K below the stabiliser's cloud point", cloudPointMarginK), true
+	margin := Target{"storage.max_temperature_c", "<=", c.Steric.CloudK - physics.CelsiusZero - cloudPointMarginK, "degC"}
+	marginText := fmt.Sprintf("storage at least %g K below the stabiliser's cloud point", cloudPointMarginK)
+	if !c.Steric.Present || math.IsNaN(c.Steric.Factor) {
+		return margin, marginText, true
+	}
+	need := physics.MinimumStericThickness(cs.VanDerWaalsOnly.EnergyCurve(), c.StorageTempK, c.Criteria.MaxStericKT) / c.Steric.Thickness
+	if !(need > 0 && need <= 1) {
+		return margin, marginText + "; the stated layer is too thin for the van der Waals criterion even at the medium temperature", true
+	}
+	top := physics.CloudPointMaxTemp(c.Steric.CloudK, c.MediumTempK, need)
+	return Target{"storage.max_temperature_c", "<=", top - physics.CelsiusZero, "degC"},
+		fmt.Sprintf("the steric layer keeps %s of its stated thickness, the %s the van der Waals criterion needs, as the chains approach their cloud point (Flory chi, layer ~ (1 - 2 chi)^(1/3))",
+			number.Shortest(number.Round(need, 3)), number.Quantity(need*c.Steric.Thickness*1e9, "nm")), true
 }
 
 // solveProcessShear keeps shear-driven collisions no more frequent than
 // Brownian ones and, when there is a barrier, the work of shear across one
-// Debye length below the barrier height.
+// Debye length below the barrier height, both with the viscosity of the
+// suspension (the liquid's times the relative viscosity).
 func solveProcessShear(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	g := physics.OrthoPerikineticShearRate(1, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK)
+	eta := c.Liquid.Viscosity * cs.Facts.Number("relative_viscosity") // the suspension's, as in the shear energy
+	g := physics.OrthoPerikineticShearRate(1, 2*c.Radius, eta, c.StorageTempK)
 	crit := "orthokinetic over perikinetic collision rate <= 1"
 	if b, ok := cs.Reported("energy_barrier"); ok && b > 0 && cs.Pair.Kappa > 0 {
 		kT := physics.Boltzmann * c.StorageTempK
 		width := physics.DoubleLayerRange(cs.Pair.Kappa, c.Radius)
-		byBarrier := physics.HydrodynamicShearRate(b*kT, c.Liquid.Viscosity, c.Radius, width)
+		byBarrier := physics.HydrodynamicShearRate(b*kT, eta, c.Radius, width)
 		if byBarrier > g {
 			g, crit = byBarrier, "work of shear across one Debye length below the energy barrier"
 		}

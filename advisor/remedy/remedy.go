@@ -34,6 +34,7 @@ var solvers = map[string]Solver{
 	"controlled_flocculation":     solveControlledFlocculation,
 	"control_storage_temperature": solveStorageTemperature,
 	"reduce_process_shear":        solveProcessShear,
+	"add_freeze_protectant":       solveFreezeProtectant,
 }
 
 // Target is a quantitative goal: quantity op value unit, e.g. "diameter_nm <= 420 nm".
