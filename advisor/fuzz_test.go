@@ -330,6 +330,10 @@ func fillRequired(v reflect.Value) {
 		ff := fuzzField{kind: reflect.Float64}
 		for _, part := range strings.Split(tag, ",") {
 			k, val, _ := strings.Cut(part, "=")
+			if k == "oneof" && v.Field(i).Kind() == reflect.String {
+				first, _, _ := strings.Cut(val, " ")
+				v.Field(i).SetString(first)
+			}
 			if x, err := strconv.ParseFloat(val, 64); err == nil && (k == "gt" || k == "gte") {
 				ff.lo = x
 			} else if err == nil && (k == "lt" || k == "lte") {
@@ -338,6 +342,9 @@ func fillRequired(v reflect.Value) {
 		}
 		mid := (ff.lo + ff.hi) / 2
 		f := v.Field(i)
+		if f.Kind() == reflect.String {
+			continue
+		}
 		if f.Kind() == reflect.Pointer {
 			f.Set(reflect.New(f.Type().Elem()))
 			f = f.Elem()

@@ -230,6 +230,9 @@ func requiredMembers(t reflect.Type, leaf string) map[string]any {
 			m[name] = midValue(f)
 		}
 	}
+	if t == reflect.TypeOf(input.Cosolvent{}) && leaf != "name" {
+		m["name"] = "propylene_glycol"
+	}
 	if t == reflect.TypeOf(input.Electrolyte{}) {
 		if strings.HasSuffix(leaf, "_valence") {
 			m["cation_valence"], m["anion_valence"] = 1, 1

@@ -71,7 +71,7 @@ type Medium struct {
 // Cosolvent is a water-miscible liquid mixed into an aqueous medium (a
 // freeze protectant), by name and mass fraction of the liquid phase.
 type Cosolvent struct {
-	Name         string   `json:"name" validate:"oneof=ethylene_glycol propylene_glycol glycerol ethanol"`
+	Name         string   `json:"name" validate:"required,oneof=ethylene_glycol propylene_glycol glycerol ethanol"`
 	MassFraction *float64 `json:"mass_fraction" validate:"required,gte=0,lte=0.6" unit:"1"`
 }
 
