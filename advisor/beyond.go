@@ -61,7 +61,7 @@ func (ev *evaluation) shear(kT float64) {
 	}
 	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, c.Liquid.Viscosity, c.StorageTempK),
 		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT)")
-	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
+	if b, ok := ev.reported("energy_barrier"); ok && b > 0 {
 		width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
 		w := physics.HydrodynamicShearForceEnergy(c.Liquid.Viscosity, c.Shear, c.Radius, width)
 		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977)")
@@ -91,8 +91,8 @@ func (ev *evaluation) bridging() {
 	size := physics.PolymerCoilSize(c.Adsorbing.MolarMass)
 	debye := 1 / ev.pair.Kappa // +Inf without ions: no double layer to span
 	gap := 0.0
-	if b, ok := ev.scales["barrier_position"]; ok {
-		gap = b.Value * 1e-9
+	if b, ok := ev.reported("barrier_position"); ok {
+		gap = b * 1e-9
 	}
 	likely, reason := physics.BridgingLikely(c.Adsorbing.MolarMass, c.Adsorbing.Coverage, size, debye, gap)
 	ev.set("bridging_likely", map[bool]float64{true: 1, false: 0}[likely], "La Mer-Healy coverage, molar mass and reach rules: "+reason)
