@@ -61,9 +61,18 @@ func (ev *evaluation) shear(kT float64) {
 	}
 	eta := ev.suspensionViscosity()
 	ev.set("suspension_viscosity", eta*1e3, "liquid viscosity times the Krieger-Dougherty relative viscosity")
+	if !(eta > 0) || math.IsInf(eta, 1) {
+		// At or above the maximum packing the suspension does not flow as a
+		// viscous medium: the effective-medium shear estimate has no meaning
+		// there (near_jamming speaks for that state).
+		if !ev.lean {
+			ev.notes.Text("no shear energy or orthokinetic ratio: the effective volume fraction is at or above the maximum packing, where the suspension has no finite viscosity")
+		}
+		return
+	}
 	ev.set("orthokinetic_ratio", physics.OrthoPerikineticRatio(c.Shear, 2*c.Radius, eta, c.StorageTempK),
 		"Smoluchowski shear over Brownian kernel, G d^3 eta/(2 kT), eta of the suspension")
-	if b, ok := ev.scales["energy_barrier"]; ok && b.Value > 0 {
+	if b, ok := ev.reported("energy_barrier"); ok && b > 0 {
 		width := physics.DoubleLayerRange(ev.pair.Kappa, c.Radius)
 		w := physics.HydrodynamicShearForceEnergy(eta, c.Shear, c.Radius, width)
 		ev.set("shear_energy", w/kT, "6 pi eta a^2 G over one Debye length (van de Ven & Mason 1977), eta of the suspension")
@@ -103,8 +112,8 @@ func (ev *evaluation) bridging() {
 	size := physics.PolymerCoilSize(c.Adsorbing.MolarMass)
 	debye := 1 / ev.pair.Kappa // +Inf without ions: no double layer to span
 	gap := 0.0
-	if b, ok := ev.scales["barrier_position"]; ok {
-		gap = b.Value * 1e-9
+	if b, ok := ev.reported("barrier_position"); ok {
+		gap = b * 1e-9
 	}
 	likely, reason := physics.BridgingLikely(c.Adsorbing.MolarMass, c.Adsorbing.Coverage, size, debye, gap)
 	ev.set("bridging_likely", map[bool]float64{true: 1, false: 0}[likely], "La Mer-Healy coverage, molar mass and reach rules: "+reason)

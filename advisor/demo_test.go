@@ -113,12 +113,17 @@ type goldenReport struct {
 	Cautions    []string                 `json:"cautions"`
 	Assumptions []string                 `json:"assumptions"`
 	Models      map[string]string        `json:"models"`
+	Consistency []advisor.Consistency    `json:"consistency,omitempty"`
+	MeasureNext []advisor.Measurement    `json:"measure_next,omitempty"`
+	RuledOut    []advisor.RuledOut       `json:"ruled_out,omitempty"`
+	Analysis    *advisor.Analysis        `json:"analysis,omitempty"`
 }
 
 func goldenJSON(t *testing.T, rep *advisor.Report) []byte {
 	t.Helper()
 	g := goldenReport{SampleID: rep.SampleID, Symptom: rep.Symptom, Scales: rep.Scales, Causes: rep.Causes,
-		Cautions: rep.Cautions, Assumptions: rep.Assumptions, Models: rep.Models}
+		Cautions: rep.Cautions, Assumptions: rep.Assumptions, Models: rep.Models, Consistency: rep.Consistency,
+		MeasureNext: rep.MeasureNext, RuledOut: rep.RuledOut, Analysis: rep.Analysis}
 	var buf bytes.Buffer
 	enc := json.NewEncoder(&buf)
 	enc.SetEscapeHTML(false)

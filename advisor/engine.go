@@ -9,6 +9,7 @@ import (
 	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
 	"colloidtriage/advisor/rule"
+	"colloidtriage/advisor/uncertainty"
 )
 
 // EngineVersion identifies this build of the engine in every report.
@@ -52,12 +53,15 @@ func (e *Engine) Library() *library.Library { return e.lib }
 // symptom and solves the remedies' targets. It returns an *input.Error when
 // the sample is physically inconsistent.
 func (e *Engine) Triage(s *input.Sample) (*Report, error) {
+	if err := uncertainty.Check(s.Uncertainty); err != nil {
+		return nil, err
+	}
 	ev, err := e.evaluate(s)
 	if err != nil {
 		return nil, err
 	}
 	causes := e.rank(ev)
-	return &Report{
+	r := &Report{
 		SampleID:    s.SampleID,
 		Symptom:     s.Symptom,
 		Versions:    Versions{Engine: EngineVersion, Rules: e.rules.Hash},
@@ -67,7 +71,13 @@ func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 		Assumptions: ev.notes.List(),
 		Models:      ev.models,
 		Inputs:      input.Understood(s, ev.cond),
-	}, nil
+	}
+	if draws := uncertainty.Draws(s); draws > 0 {
+		if err := e.analyse(s, ev, r, draws, uncertainty.Seed(s)); err != nil {
+			return nil, err
+		}
+	}
+	return r, nil
 }
 
 // Scales computes only the physics of a sample, without rules.
@@ -86,12 +96,18 @@ func (e *Engine) evaluate(s *input.Sample) (*evaluation, error) {
 		return nil, err
 	}
 	ev.cond = c
+	ev.compute()
+	return ev, nil
+}
+
+// compute sets the facts (and, unless lean, the scales, notes and models)
+// of the evaluation's conditions.
+func (ev *evaluation) compute() {
 	ev.inputFacts()
 	ev.computeGravity()
 	ev.computeInteraction()
 	ev.computeBeyondDLVO()
 	ev.computeTemperature()
-	return ev, nil
 }
 
 // rank ranks the causes of the sample's symptom (see rule.Set.Rank) and

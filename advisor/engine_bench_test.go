@@ -32,7 +32,13 @@ func benchSample(b testing.TB, name string) *input.Sample {
 	return &s
 }
 
+// benchTriage triages s at the nominal point only (analysis.draws 0), the
+// triage of before the uncertainty analysis, unless s sets its analysis.
 func benchTriage(b *testing.B, s *input.Sample) {
+	if s.Analysis == nil {
+		zero := 0
+		s.Analysis = &input.Analysis{Draws: &zero}
+	}
 	e := benchEngine(b)
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -47,6 +53,16 @@ func benchTriage(b *testing.B, s *input.Sample) {
 // its remedy targets (issue target: at most 50 us median on one core).
 func BenchmarkTriageSingleSize(b *testing.B) {
 	benchTriage(b, benchSample(b, "electrostatic_screening.json"))
+}
+
+// BenchmarkTriageDraws200 is the same sample with the default uncertainty
+// analysis: 200 Monte Carlo draws, remedy intervals on 32 of them (issue
+// target: at most 10 ms on one core).
+func BenchmarkTriageDraws200(b *testing.B) {
+	s := benchSample(b, "electrostatic_screening.json")
+	draws := 200
+	s.Analysis = &input.Analysis{Draws: &draws}
+	benchTriage(b, s)
 }
 
 // BenchmarkTriageGravity is the walking-skeleton demo, a settling complaint.

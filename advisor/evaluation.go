@@ -28,6 +28,10 @@ type evaluation struct {
 	lastBarrier float64 // separation of the last barrier found, a warm start
 
 	remedies *remedy.Case // built on the first remedy, see remedyCase
+
+	// lean is the evaluation of one Monte Carlo draw: facts only, no
+	// scales map, notes or models (nil).
+	lean bool
 }
 
 // remedyCase is the evaluation as the remedy solvers see it, built on the
@@ -40,10 +44,15 @@ func (ev *evaluation) remedyCase() *remedy.Case {
 	return ev.remedies
 }
 
-// reported returns a scale as the report gives it.
+// reported returns a scale as the report gives it: the fact rounded to 6
+// significant digits, ok false when the report leaves it out (not set or
+// not finite). It reads the facts, so a lean evaluation answers alike.
 func (ev *evaluation) reported(name string) (float64, bool) {
-	s, ok := ev.scales[name]
-	return s.Value, ok
+	v := ev.facts.Number(name)
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return 0, false
+	}
+	return number.Round(v, 6), true
 }
 
 // scaleIndex holds the declared scales by name.
@@ -64,6 +73,9 @@ func (ev *evaluation) set(name string, v float64, basis string) {
 		panic("advisor: undeclared scale " + name)
 	}
 	ev.facts.SetNumber(name, v)
+	if ev.lean {
+		return
+	}
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		if !math.IsNaN(v) {
 			ev.notes.Add("%s is unbounded for this sample and is not reported as a number", name)
@@ -95,6 +107,9 @@ var (
 
 // model records a model choice in the report's models and assumptions.
 func (ev *evaluation) model(m modelChoice) {
+	if ev.lean {
+		return
+	}
 	ev.models[m.key] = m.text
 	ev.notes.Text(m.note)
 }

@@ -785,7 +785,7 @@ func checkObject(t *testing.T, n *node, s *openapi3.Schema, at string) {
 func coded(n *node, alternative string) fixed {
 	f := fixed{Unit: n.unit, Required: n.required, Alternative: alternative,
 		Type: map[reflect.Kind]string{reflect.Float64: "number", reflect.Int: "integer", reflect.String: "string",
-			reflect.Bool: "boolean", reflect.Slice: "array", reflect.Struct: "object"}[n.kind]}
+			reflect.Bool: "boolean", reflect.Slice: "array", reflect.Struct: "object", reflect.Map: "object"}[n.kind]}
 	number := func(v string) string {
 		x, _ := strconv.ParseFloat(v, 64)
 		return strconv.FormatFloat(x, 'g', -1, 64)

@@ -51,6 +51,10 @@ type Conditions struct {
 	ZetaSource        string  // measured, mobility, estimated or ""
 	Henry             float64 // Henry's function when zeta came from mobility
 	Hamaker           float64 // J
+	HamakerSource     string  // request, library, estimated (Tabor-Winterton) or default
+	// ParticlePermittivity and ParticleIndex are what the Tabor-Winterton
+	// estimate used, NaN for any other source.
+	ParticlePermittivity, ParticleIndex float64
 
 	Steric      StericLayer
 	FreePolymer Depletant

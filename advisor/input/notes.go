@@ -11,14 +11,22 @@ type Notes struct{ list []string }
 // NewNotes returns an empty list with room for n notes.
 func NewNotes(n int) *Notes { return &Notes{list: make([]string, 0, n)} }
 
-// Add adds a note formatted as by fmt.Sprintf.
+// Add adds a note formatted as by fmt.Sprintf. Add and Text on nil Notes
+// do nothing: the lean evaluation of a Monte Carlo draw keeps no notes.
 func (n *Notes) Add(format string, args ...any) {
+	if n == nil {
+		return
+	}
 	n.list = append(n.list, fmt.Sprintf(format, args...))
 }
 
 // Text adds a note already written out; the frequent notes are built by
 // concatenation with number.Shortest, which spares fmt's formatting.
-func (n *Notes) Text(s string) { n.list = append(n.list, s) }
+func (n *Notes) Text(s string) {
+	if n != nil {
+		n.list = append(n.list, s)
+	}
+}
 
 // List returns the notes in the order they were made (the list itself, not
 // a copy).

@@ -160,22 +160,24 @@ func resolveSize(p *Particles, c *Conditions, bad *Error, n *Notes) {
 }
 
 func resolveHamaker(p *Particles, c *Conditions, mat materialProps, n *Notes) {
+	c.ParticlePermittivity, c.ParticleIndex = math.NaN(), math.NaN()
 	switch {
 	case p.HamakerZJ != nil:
-		c.Hamaker = *p.HamakerZJ * 1e-21
+		c.Hamaker, c.HamakerSource = *p.HamakerZJ*1e-21, "request"
 	case !math.IsNaN(mat.hamakerWater) && c.Liquid.Key == "water":
-		c.Hamaker = mat.hamakerWater
+		c.Hamaker, c.HamakerSource = mat.hamakerWater, "library"
 		n.Text("hamaker_zJ = " + number.Quantity(c.Hamaker*1e21, "zJ") + " across water from the library entry " + strconv.Quote(p.Material))
 	default:
 		epsP := pick(p.Permittivity, mat.epsR)
 		nP := pick(p.RefractiveIndex, mat.refrIndex)
 		if !math.IsNaN(epsP) && !math.IsNaN(nP) && c.Liquid.Permittivity > 0 && c.Liquid.RefractiveIndex > 0 {
 			c.Hamaker = physics.HamakerTaborWinterton(epsP, nP, c.Liquid.Permittivity, c.Liquid.RefractiveIndex, c.StorageTempK)
+			c.HamakerSource, c.ParticlePermittivity, c.ParticleIndex = "estimated", epsP, nP
 			n.Add("hamaker constant %s estimated by the Tabor-Winterton (Lifshitz) approximation from permittivities and refractive indices",
 				number.Quantity(c.Hamaker*1e21, "zJ"))
 			return
 		}
-		c.Hamaker = defaultHamakerJ
+		c.Hamaker, c.HamakerSource = defaultHamakerJ, "default"
 		n.Add("hamaker constant not given and not estimable: default %s (typical of oxides and polymers across water)",
 			number.Quantity(defaultHamakerJ*1e21, "zJ"))
 	}

@@ -1,5 +1,11 @@
 package input
 
+import (
+	"bytes"
+	"encoding/json"
+	"errors"
+)
+
 // Sample is one complaint as a user states it: the batch's specification, its
 // storage and what was observed. Field names carry their units; optional
 // numbers are pointers so that "not given" differs from zero. The `validate`
@@ -16,6 +22,8 @@ type Sample struct {
 	Observation *Observation `json:"observation,omitempty"`
 	Criteria    *Criteria    `json:"criteria,omitempty"`
 	Models      *Models      `json:"models,omitempty"`
+	Uncertainty Uncertainty  `json:"uncertainty,omitempty"`
+	Analysis    *Analysis    `json:"analysis,omitempty"`
 }
 
 // Models selects optional physical models; the defaults are named in every report.
@@ -133,4 +141,56 @@ type Criteria struct {
 	HalfLifeToShelfLife  *float64 `json:"half_life_to_shelf_life,omitempty" validate:"omitempty,gte=1,lte=1e6" unit:"1"`
 	MaxRelativeViscosity *float64 `json:"max_relative_viscosity,omitempty" validate:"omitempty,gt=1,lte=1e4" unit:"1"`
 	MaxStericContactKT   *float64 `json:"max_steric_contact_kT,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"kT"`
+}
+
+// Uncertainty states the standard uncertainty of numeric inputs by their
+// dotted field path ("particles.zeta_mV"): an absolute standard deviation in
+// the field's unit, or a lognormal factor. Inputs it leaves out take the
+// default of their provenance (package advisor/uncertainty).
+type Uncertainty map[string]Spread
+
+// Spread is one stated uncertainty: a number is an absolute standard
+// deviation in the field's unit; {"factor": f} a lognormal one, the
+// value's geometric standard deviation f > 1.
+type Spread struct {
+	SD     float64
+	Factor float64
+}
+
+// UnmarshalJSON reads a number or {"factor": f}.
+func (s *Spread) UnmarshalJSON(data []byte) error {
+	var sd float64
+	if err := json.Unmarshal(data, &sd); err == nil {
+		*s = Spread{SD: sd}
+		return nil
+	}
+	var f struct {
+		Factor *float64 `json:"factor"`
+	}
+	dec := json.NewDecoder(bytes.NewReader(data))
+	dec.DisallowUnknownFields()
+	if err := dec.Decode(&f); err != nil || f.Factor == nil {
+		return errors.New(`an uncertainty is a number (standard deviation in the field's unit) or {"factor": f}`)
+	}
+	*s = Spread{Factor: *f.Factor}
+	return nil
+}
+
+// MarshalJSON writes the form UnmarshalJSON reads.
+func (s Spread) MarshalJSON() ([]byte, error) {
+	if s.Factor != 0 {
+		return json.Marshal(struct {
+			Factor float64 `json:"factor"`
+		}{s.Factor})
+	}
+	return json.Marshal(s.SD)
+}
+
+// Analysis sets the Monte Carlo propagation of the uncertainties: the
+// number of draws (0: the nominal point only) and the seed of the random
+// numbers (default: derived from the request, so identical requests give
+// identical reports).
+type Analysis struct {
+	Draws *int `json:"draws,omitempty" validate:"omitempty,gte=0,lte=2000" unit:"1"`
+	Seed  *int `json:"seed,omitempty" validate:"omitempty,gte=0,lte=9007199254740991" unit:"1"`
 }

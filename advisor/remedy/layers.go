@@ -22,16 +22,16 @@ func stericCriterion(cs *Case) string {
 	return "|van der Waals energy| at layer contact (h = 2 thickness) <= " + number.Shortest(cs.Cond.Criteria.MaxStericKT) + " kT"
 }
 
-// thickestAdsorbedLayer is about the largest thickness adsorbed polymer or
+// ThickestAdsorbedLayer, m, is about the largest thickness adsorbed polymer or
 // surfactant layers reach (2-20 nm typical, 50 nm for long block
 // copolymers; common practice, cf. Napper 1983).
-const thickestAdsorbedLayer = 50e-9
+const ThickestAdsorbedLayer = 50e-9
 
 func solveStericThickness(cs *Case) (Target, string, bool) {
 	d := physics.MinimumStericThickness(cs.VanDerWaalsOnly.EnergyCurve(), cs.Cond.StorageTempK, cs.Cond.Criteria.MaxStericKT)
 	crit := stericCriterion(cs) + "; the layer must stay in good solvent"
-	if d > thickestAdsorbedLayer {
-		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", thickestAdsorbedLayer*1e9)
+	if d > ThickestAdsorbedLayer {
+		crit += fmt.Sprintf("; beyond the %g nm that adsorbed layers reach: not practical for particles this large", ThickestAdsorbedLayer*1e9)
 	}
 	return Target{"stabilizer.layer_thickness_nm", ">=", d * 1e9, "nm"}, crit, true
 }
@@ -173,7 +173,10 @@ func solveStorageTemperature(cs *Case) (Target, string, bool) {
 // suspension (the liquid's times the relative viscosity).
 func solveProcessShear(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	eta := c.Liquid.Viscosity * cs.Facts.Number("relative_viscosity") // the suspension's, as in the shear energy
+	eta := cs.Facts.Number("suspension_viscosity") * 1e-3 // Pa s, as in the shear energy
+	if !(eta > 0) || math.IsInf(eta, 1) {
+		return Target{}, "the effective volume fraction is at or above the maximum packing, where the suspension has no finite viscosity", false
+	}
 	g := physics.OrthoPerikineticShearRate(1, 2*c.Radius, eta, c.StorageTempK)
 	crit := "orthokinetic over perikinetic collision rate <= 1"
 	if b, ok := cs.Reported("energy_barrier"); ok && b > 0 && cs.Pair.Kappa > 0 {

@@ -145,3 +145,12 @@ func (f Facts) appendFormat(b []byte, d declared) []byte {
 	}
 	return append(b, f.text[d.slot]...)
 }
+
+// Reset unsets every fact again (NaN, "" or false), for a Facts reused
+// across evaluations.
+func (f Facts) Reset() {
+	d := f.vocab.defaults
+	copy(f.num, d.num)
+	copy(f.text, d.text)
+	copy(f.flag, d.flag)
+}

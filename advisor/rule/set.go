@@ -257,3 +257,26 @@ func (r *Rule) WriteExplanation(b *strings.Builder, f Facts) {
 		}
 	}
 }
+
+// For returns the rules of symptom (its own and those of "any"), in load
+// order, after_causes rules included.
+func (rs *Set) For(symptom string) []*Rule {
+	var out []*Rule
+	for i := range rs.rules {
+		if rs.rules[i].appliesTo(symptom) {
+			out = append(out, &rs.rules[i])
+		}
+	}
+	return out
+}
+
+// Holds evaluates the rule's condition on f (top_cause_score as f holds
+// it); a condition the machine cannot run does not hold.
+func (r *Rule) Holds(f Facts) bool {
+	if r.cond != nil {
+		return r.cond(f)
+	}
+	var machine vm.VM
+	out, err := runRule(&machine, r.program, f.env(r.AfterCauses))
+	return err == nil && out
+}
