@@ -106,7 +106,7 @@ const GROUPS = [
 ];
 
 const UNITS = {
-  "1": "–", degC: "°C", "kg/m^3": "kg/m³", "mPa s": "mPa·s", "uS/cm": "µS/cm", "cm^3/mol": "cm³/mol",
+  "1": "", degC: "°C", "kg/m^3": "kg/m³", "mPa s": "mPa·s", "uS/cm": "µS/cm", "cm^3/mol": "cm³/mol",
   "um cm/(V s)": "µm·cm/(V·s)", "mol/m^3": "mol/m³", d: "days", "1/s": "1/s",
 };
 
@@ -170,7 +170,7 @@ function schemaAt(path) {
 
 function unitText(s) {
   const u = s && s["x-unit"];
-  return u === undefined ? "" : (UNITS[u] || u);
+  return u === undefined ? "" : (u in UNITS ? UNITS[u] : u);
 }
 
 // bound prints a range limit briefly (1e+7 as 1e7).
@@ -230,7 +230,7 @@ function field(path, label, kind) {
   return h("div", { class: "field", "data-field": path, title: desc || null },
     h("label", { for: id }, label, s && s.required ? " *" : ""),
     control(path, kind, s),
-    h("span", { class: "unit", id: `${id}-unit` }, unitText(s) && unitText(s) !== "–" ? unitText(s) : (s && s["x-unit"] === "1" ? "(ratio)" : "")),
+    h("span", { class: "unit", id: `${id}-unit` }, s && s["x-unit"] === "1" ? "(ratio)" : unitText(s)),
     range ? h("span", { class: "hint" }, `valid ${range}`) : null,
     h("p", { class: "err", id: `${id}-err` }));
 }
@@ -433,8 +433,8 @@ function clearProblems() {
 }
 
 function problemText(e) {
-  const unit = e.unit && e.unit !== "1" ? ` ${UNITS[e.unit] || e.unit}` : "";
-  return e.valid ? `${e.reason}; valid: ${e.valid}${unit}` : e.reason;
+  const u = e.unit ? unit(e.unit) : "";
+  return e.valid ? `${e.reason}; valid: ${e.valid}${u ? ` ${u}` : ""}` : e.reason;
 }
 
 function showProblem(p) {
@@ -472,10 +472,11 @@ function fmt(v) {
 }
 
 const human = (id) => id.replace(/_/g, " ");
+const unit = (u) => (u in UNITS ? UNITS[u] : u || "");
 const pct = (p) => `${Math.round(p * 100)} %`;
 
 function targetText(t) {
-  return `${t.quantity} ${t.op} ${fmt(t.value)} ${UNITS[t.unit] || t.unit}`;
+  return `${t.quantity} ${t.op} ${fmt(t.value)} ${unit(t.unit)}`;
 }
 
 function remedyItem(r) {
@@ -504,7 +505,7 @@ function causeCard(c) {
   const ev = (c.evidence || []).length
     ? h("table", { class: "evidence" }, h("thead", {}, h("tr", {}, h("th", {}, "Evidence"), h("th", {}, "Value"))),
       h("tbody", {}, c.evidence.map((e) => h("tr", { title: e.test || "" }, h("td", {}, human(e.scale)),
-        h("td", { class: "num" }, `${fmt(e.value)} ${UNITS[e.unit] || e.unit}`)))))
+        h("td", { class: "num" }, `${fmt(e.value)} ${unit(e.unit)}`)))))
     : null;
   const remedies = (c.remedies || []).length ? [h("h4", { class: "visually-hidden" }, "Remedies"), h("ul", { class: "remedies" }, c.remedies.map(remedyItem))] : null;
   return h("li", { class: `cause rank-${c.rank}${c.rank > 1 ? " minor" : ""}`, "data-cause": c.id },
@@ -515,7 +516,7 @@ function consistencySection(rows) {
   return h("div", { class: "section" }, h("h3", {}, "Observations against the prediction"),
     h("table", {}, h("thead", {}, h("tr", {}, ["Observable", "Observed", "Predicted", "Verdict"].map((t) => h("th", {}, t)))),
       h("tbody", {}, rows.map((r) => {
-        const u = UNITS[r.unit] || r.unit || "";
+        const u = unit(r.unit);
         const p = r.predicted || {};
         const range = p.low !== undefined ? ` (${fmt(p.low)} to ${fmt(p.high)})` : "";
         const good = /^(consistent|agree|within)/i.test(r.verdict || "");
@@ -534,9 +535,9 @@ function renderReport(rep) {
     h("span", {}, "Symptom ", h("b", {}, human(rep.symptom))),
     h("span", {}, "Date ", h("b", {}, when)),
     h("span", {}, "Engine ", h("b", {}, v.engine || "?")),
-    h("span", {}, "Rules ", h("b", { class: "hash" }, (v.rules || "?").slice(0, 16))),
+    h("span", {}, "Rules ", h("b", { class: "screen-only", title: v.rules }, (v.rules || "?").slice(0, 19)), h("b", { class: "print-only" }, v.rules || "?")),
     rep.request_id ? h("span", { class: "no-print" }, "Request ", h("b", {}, rep.request_id)) : null);
-  const parts = [h("p", { class: "print-only" }, "colloidtriage report"), meta];
+  const parts = [h("h2", { class: "print-only" }, "colloidtriage report"), meta];
   parts.push(h("h3", {}, "Causes, most likely first"));
   parts.push(rep.causes && rep.causes.length ? h("ol", { class: "causes", id: "causes" }, rep.causes.map(causeCard))
     : h("p", {}, "No cause fired for this symptom."));
@@ -548,7 +549,7 @@ function renderReport(rep) {
   if (rep.ruled_out && rep.ruled_out.length) {
     parts.push(h("div", { class: "section" }, h("h3", {}, "Ruled out"),
       h("ul", {}, rep.ruled_out.map((r) => h("li", {}, h("b", {}, human(r.id)), `: ${r.reason}`,
-        r.scale ? ` (${human(r.scale)} ${fmt(r.value)} ${UNITS[r.unit] || r.unit || ""})` : "")))));
+        r.scale ? ` (${human(r.scale)} ${fmt(r.value)} ${unit(r.unit)})` : "")))));
   }
   parts.push(h("div", { class: "section chart", id: "chart" }, h("h3", {}, "Interaction energy"), h("p", { class: "hint" }, "Drawing the chart…")));
   if (rep.cautions && rep.cautions.length) {
@@ -559,7 +560,7 @@ function renderReport(rep) {
     h("h4", {}, "Models"), h("ul", {}, Object.entries(rep.models || {}).map(([k, m]) => h("li", {}, `${human(k)}: ${m}`)))));
   parts.push(h("details", { class: "fold" }, h("summary", {}, `All computed scales (${Object.keys(rep.scales || {}).length})`),
     h("table", {}, h("tbody", {}, Object.entries(rep.scales || {}).map(([k, s]) =>
-      h("tr", {}, h("td", {}, human(k)), h("td", { class: "num" }, `${fmt(s.value)} ${UNITS[s.unit] || s.unit}`), h("td", { class: "hint" }, s.basis)))))));
+      h("tr", {}, h("td", {}, human(k)), h("td", { class: "num" }, `${fmt(s.value)} ${unit(s.unit)}`), h("td", { class: "hint" }, s.basis)))))));
   parts.push(h("p", { class: "print-only" }, "This report aids qualified staff. It does not replace stability testing, and it defers to safety data sheets, local codes and regulations, and licensed professional practice."));
   $("#answer").replaceChildren(...parts);
   $("#print").disabled = false;
@@ -600,6 +601,7 @@ async function triage(ev) {
     clearProblems();
     renderReport(data);
     status(data.causes && data.causes.length ? `Top cause: ${data.causes[0].title}` : "No cause fired.");
+    if (ev) $("#report").focus();
     await drawChart(body);
   } catch (e) {
     status(`The service did not answer: ${e.message}`);

@@ -107,7 +107,10 @@ func TestWorkbenchInBrowser(t *testing.T) {
 	defer cancelAlloc()
 	ctx, cancel := chromedp.NewContext(allocCtx)
 	defer cancel()
-	ctx, cancelTime := context.WithTimeout(ctx, 90*time.Second)
+	if err := chromedp.Do(ctx); err != nil { // starts the browser on a context without a deadline
+		t.Fatalf("starting chromium: %v", err)
+	}
+	ctx, cancelTime := context.WithTimeout(ctx, 60*time.Second)
 	defer cancelTime()
 
 	// The demo scenario as a support engineer types it.
@@ -148,6 +151,7 @@ func TestWorkbenchInBrowser(t *testing.T) {
 		chromedp.WaitVisible(chromedp.CSS(`#causes li.cause`)),
 		chromedp.WaitVisible(chromedp.CSS(`#chart img`)))
 	if err := chromedp.Do(ctx, steps...); err != nil {
+		failShot(ctx, t, dir)
 		t.Fatalf("filling and submitting the form: %v", err)
 	}
 	topCause := attribute(ctx, t, `#causes li.cause`, "data-cause")
@@ -185,12 +189,15 @@ func TestWorkbenchInBrowser(t *testing.T) {
 	}
 
 	// A value out of range: the API's problem appears beside its field.
+	if _, err := chromedp.Run(ctx, chromedp.Evaluate[bool](`document.querySelector("#f-particles-diameter_nm").value = ""; true`)); err != nil {
+		t.Fatal(err)
+	}
 	if err := chromedp.Do(ctx,
-		chromedp.Clear(chromedp.CSS("#f-particles-diameter_nm")),
 		chromedp.SendKeys(chromedp.CSS("#f-particles-diameter_nm"), "0.1"),
 		chromedp.Click(chromedp.CSS("#submit")),
 		chromedp.WaitVisible(chromedp.CSS(`#f-particles-diameter_nm-err`)),
 	); err != nil {
+		failShot(ctx, t, dir)
 		t.Fatalf("submitting an out-of-range diameter: %v", err)
 	}
 	problem := text(ctx, t, `#f-particles-diameter_nm-err`)
@@ -199,6 +206,23 @@ func TestWorkbenchInBrowser(t *testing.T) {
 		t.Errorf("problem beside the diameter %q, aria-invalid %q; want the reason and the valid range", problem, invalid)
 	}
 	shoot(ctx, t, filepath.Join(dir, "workbench-problem.png"), 1280, 1000)
+}
+
+// failShot saves what the page shows when a step fails, on a fresh
+// deadline (the step's own may be spent).
+func failShot(ctx context.Context, t *testing.T, dir string) {
+	t.Helper()
+	ctx, cancel := context.WithTimeout(context.WithoutCancel(ctx), 10*time.Second)
+	defer cancel()
+	if status, err := chromedp.Run(ctx, chromedp.Evaluate[string](`document.querySelector("#status").textContent`)); err == nil {
+		t.Logf("the page's status line at the failure: %q", status)
+	}
+	if png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100)); err == nil {
+		path := filepath.Join(dir, "failure.png")
+		if os.WriteFile(path, png, 0o644) == nil {
+			t.Logf("the page at the failure: %s", path)
+		}
+	}
 }
 
 // text is the visible text of the first element a CSS selector matches.
