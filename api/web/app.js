@@ -595,6 +595,8 @@ async function triage(ev) {
     const data = await res.json().catch(() => ({ title: `HTTP ${res.status}` }));
     if (!res.ok) {
       showProblem(data);
+      $("#answer").replaceChildren(h("p", { class: "placeholder" }, "No report: correct the fields marked in the form and press Triage again."));
+      $("#print").disabled = true;
       status(`Refused: ${data.title || res.status}`);
       return;
     }
