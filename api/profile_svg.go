@@ -11,10 +11,12 @@ import (
 	"unicode/utf8"
 
 	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/font"
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
+	"gonum.org/v1/plot/vg/vgsvg"
 
 	"colloidtriage/advisor"
 )
@@ -53,6 +55,36 @@ var (
 	colourZero        = color.RGBA{R: 150, G: 150, B: 150, A: 255}
 )
 
+// Layout of the chart, in points: the title block at the top, the legend in
+// a column to the right of the plot (never over the curves or the frame),
+// and a margin all round so that no label touches the edge. Text is laid
+// out with Liberation Sans metrics; a viewer without that font substitutes
+// one of the same metrics (Arial, Helvetica) named in the SVG, and
+// chartFontSlack leaves room for a substitute up to 12 % wider.
+const (
+	chartMargin     = vg.Length(8)
+	chartGap        = vg.Length(10)
+	chartThumbWidth = vg.Length(26)
+	chartTitleSize  = vg.Length(11)
+	chartLabelSize  = vg.Length(10)
+	chartTickSize   = vg.Length(9)
+	chartFontSlack  = 1.12
+)
+
+// chartFontFamily is what the SVG names for Liberation Sans: the font and
+// two of the same metrics, then the generic family.
+const chartFontFamily = "font-family:Liberation Sans,Arial,Helvetica,sans-serif;"
+
+// chartFont is the chart's typeface at a size.
+func chartFont(size vg.Length) font.Font {
+	return font.Font{Typeface: "Liberation", Variant: "Sans", Size: size}
+}
+
+// chartText is a text style of the chart at a size.
+func chartText(size vg.Length) text.Style {
+	return text.Style{Color: colourTotal, Font: chartFont(size), Handler: plot.DefaultTextHandler}
+}
+
 // profileChart draws a profile as a labelled SVG chart: energy in kT against
 // separation in nm on a logarithmic axis (the grid is log-spaced, and the
 // barrier sits at a few nm while the curve runs to hundreds), the total and
@@ -63,9 +95,10 @@ func profileChart(pr *advisor.Profile) ([]byte, error) {
 		return nil, errors.New("interaction profile has fewer than two finite points")
 	}
 	p := plot.New()
-	p.Title.Text = chartTitle(pr)
 	p.X.Label.Text = "surface separation h (nm, log scale)"
 	p.Y.Label.Text = "interaction energy V (kT)"
+	p.X.Label.TextStyle.Font, p.Y.Label.TextStyle.Font = chartFont(chartLabelSize), chartFont(chartLabelSize)
+	p.X.Tick.Label.Font, p.Y.Tick.Label.Font = chartFont(chartTickSize), chartFont(chartTickSize)
 	// The x axis is linear in log10(h) with ticks labelled in nm: gonum's
 	// LogScale pads the plot for the axis label as if the axis were linear.
 	p.X.Tick.Marker = logTicks125{}
@@ -89,6 +122,11 @@ func profileChart(pr *advisor.Profile) ([]byte, error) {
 		parts = append(parts, chartSeries{"depletion", func(q advisor.ProfilePoint) float64 { return *q.DepletionKT },
 			colourDepletion, 1.25, []vg.Length{8, 2, 2, 2}})
 	}
+	legend := plot.NewLegend()
+	legend.TextStyle = chartText(chartLabelSize)
+	legend.ThumbnailWidth = chartThumbWidth
+	legend.Top, legend.Left = true, true
+	legend.Padding = vg.Points(4)
 	for _, part := range parts {
 		xys := make(plotter.XYs, len(pr.Points))
 		for i, q := range pr.Points {
@@ -100,7 +138,7 @@ func profileChart(pr *advisor.Profile) ([]byte, error) {
 		}
 		l.Color, l.Width, l.Dashes = part.colour, vg.Points(part.width), part.dashes
 		p.Add(l)
-		p.Legend.Add(part.name, l)
+		legend.Add(part.name, l)
 	}
 
 	bottom, top := chartYRange(pr)
@@ -121,25 +159,80 @@ func profileChart(pr *advisor.Profile) ([]byte, error) {
 			return nil, err
 		}
 	}
-
 	p.X.Min, p.X.Max = first, last
 	p.Y.Min, p.Y.Max = bottom, top
-	// Keep the legend clear of the curve, which ends near zero on the right.
-	p.Legend.Top = -bottom <= top
-	p.Legend.XOffs, p.Legend.YOffs = -vg.Points(4), vg.Points(4)
-	if p.Legend.Top {
-		p.Legend.YOffs = -p.Legend.YOffs
-	}
 
-	w, err := p.WriterTo(chartWidth, chartHeight, "svg")
-	if err != nil {
-		return nil, err
+	svg := vgsvg.New(chartWidth, chartHeight)
+	c := draw.New(svg)
+	c.SetColor(color.White)
+	c.Fill(c.Rectangle.Path())
+	inner := draw.Crop(c, chartMargin, -chartMargin, chartMargin, -chartMargin)
+	titleStyle := chartText(chartTitleSize)
+	titleStyle.XAlign = text.XCenter
+	lines := chartTitleLines(pr, titleStyle, inner.Size().X)
+	lineHeight := titleStyle.Height("Ag")
+	for i, line := range lines {
+		at := vg.Point{X: inner.Center().X, Y: inner.Max.Y - vg.Length(i+1)*lineHeight + titleStyle.FontExtents().Descent}
+		c.FillText(titleStyle, at, line)
 	}
+	body := draw.Crop(inner, 0, 0, 0, -(vg.Length(len(lines))*lineHeight + chartGap))
+	column := legendWidth(legend, parts)
+	p.Draw(draw.Crop(body, 0, -(column + chartGap), 0, 0))
+	legend.Draw(draw.Crop(body, body.Size().X-column, 0, 0, 0))
+
 	var buf bytes.Buffer
-	if _, err := w.WriteTo(&buf); err != nil {
+	if _, err := svg.WriteTo(&buf); err != nil {
 		return nil, err
 	}
-	return buf.Bytes(), nil
+	return bytes.ReplaceAll(buf.Bytes(), []byte("font-family:Liberation Sans;"), []byte(chartFontFamily)), nil
+}
+
+// legendWidth is the width of the legend column: the line sample, a space
+// and the longest name, with room for a wider substitute font.
+func legendWidth(l plot.Legend, parts []chartSeries) vg.Length {
+	var widest vg.Length
+	for _, part := range parts {
+		widest = max(widest, l.TextStyle.Width(part.name))
+	}
+	return l.ThumbnailWidth + l.TextStyle.Width(" ") + vg.Length(chartFontSlack)*widest
+}
+
+// chartTitleLines is the title block: what is drawn and for which sample,
+// then the pair's parameters, split over two lines when they would not fit
+// in width (with room for a wider substitute font); a sample id too long for
+// its line is cut with an ellipsis.
+func chartTitleLines(pr *advisor.Profile, sty text.Style, width vg.Length) []string {
+	fits := func(s string) bool { return vg.Length(chartFontSlack)*sty.Width(s) <= width }
+	title := "Interaction energy of two median particles"
+	if pr.SampleID != "" {
+		id := []rune(xmlSafe(pr.SampleID))
+		for n := len(id); n > 0; n-- {
+			s := title + ": " + string(id[:n])
+			if n < len(id) {
+				s += "…"
+			}
+			if fits(s) {
+				title = s
+				break
+			}
+		}
+	}
+	pp := pr.Pair
+	params := []string{fmt.Sprintf("a = %s nm", num(pp.RadiusNm)), fmt.Sprintf("A = %s zJ", num(pp.HamakerZJ)),
+		fmt.Sprintf("ζ = %s mV", num(pp.ZetaMV))}
+	if pp.DebyeLengthNm != nil {
+		params = append(params, fmt.Sprintf("Debye length %s nm", num(*pp.DebyeLengthNm)))
+	} else {
+		params = append(params, "no electrolyte")
+	}
+	if pp.ClosestApproachBy == advisor.ContactSteric {
+		params = append(params, fmt.Sprintf("steric wall at %s nm", num(pp.ClosestApproachNm)))
+	}
+	params = append(params, fmt.Sprintf("%s °C", num(pr.Units.TemperatureC)))
+	if all := strings.Join(params, ", "); fits(all) {
+		return []string{title, all}
+	}
+	return []string{title, strings.Join(params[:3], ", "), strings.Join(params[3:], ", ")}
 }
 
 // chartSeries is one line of the chart: a part of the energy and its style
@@ -150,24 +243,6 @@ type chartSeries struct {
 	colour color.Color
 	width  float64
 	dashes []vg.Length
-}
-
-func chartTitle(pr *advisor.Profile) string {
-	title := "Interaction energy of two median particles"
-	if pr.SampleID != "" {
-		title += ": " + xmlSafe(pr.SampleID)
-	}
-	pp := pr.Pair
-	sub := fmt.Sprintf("a = %s nm, A = %s zJ, ζ = %s mV", num(pp.RadiusNm), num(pp.HamakerZJ), num(pp.ZetaMV))
-	if pp.DebyeLengthNm != nil {
-		sub += fmt.Sprintf(", Debye length %s nm", num(*pp.DebyeLengthNm))
-	} else {
-		sub += ", no electrolyte"
-	}
-	if pp.ClosestApproachBy == advisor.ContactSteric {
-		sub += fmt.Sprintf(", steric wall at %s nm", num(pp.ClosestApproachNm))
-	}
-	return title + "\n" + sub + fmt.Sprintf(", %s °C", num(pr.Units.TemperatureC))
 }
 
 // chartYRange applies the y-range rule documented above.
@@ -212,6 +287,9 @@ func addMark(p *plot.Plot, at *advisor.ProfileExtremum, name string, glyph draw.
 	l, err := plotter.NewLabels(plotter.XYLabels{XYs: xy, Labels: []string{label}})
 	if err != nil {
 		return err
+	}
+	for i := range l.TextStyle {
+		l.TextStyle[i].Font = chartFont(chartTickSize)
 	}
 	right := xy[0].X > 0.5*(first+last)
 	dx, dy := vg.Points(6), vg.Points(4)
@@ -272,6 +350,9 @@ func (linearTicks) Ticks(min, max float64) []plot.Tick {
 	var ticks []plot.Tick
 	for k := math.Ceil(min / step * 2); k <= math.Floor(max/step*2); k++ {
 		v := k * step / 2
+		if v == 0 {
+			v = 0 // not −0
+		}
 		t := plot.Tick{Value: v}
 		if math.Mod(k, 2) == 0 {
 			t.Label = num(v)

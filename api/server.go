@@ -79,6 +79,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	v1.GET("/catalog", h.catalog, auth)
 	v1.GET("/rules", h.rules, auth)
 	v1.GET("/materials", h.materials, auth)
+	pageRoutes(e)
 	m.route(e.Routes())
 	return e
 }

@@ -17,6 +17,7 @@ import (
 	"sync/atomic"
 	"time"
 
+	"github.com/mattn/go-isatty"
 	"github.com/rs/zerolog"
 
 	"colloidtriage/advisor"
@@ -54,7 +55,8 @@ const usage = `usage:
                                                          $COLLOIDTRIAGE_API_KEYS, guard all but /healthz, /readyz, /metrics;
                                                          on SIGTERM /readyz turns 503, serving goes on for the drain delay,
                                                          then in-flight requests finish (at most 130 s) and it exits 0
-  colloidtriage triage FILE|-                            triage one sample (JSON file, or - for standard input)
+  colloidtriage triage [--format text|json] FILE|-      triage one sample (JSON file, or - for standard input); text, a
+                                                         summary for a ticket, is the default on a terminal, JSON otherwise
   colloidtriage rules check DIR                          compile a site rule pack with the built-in rules
   colloidtriage version                                  print the engine version and rule-set hash
 `
@@ -74,6 +76,14 @@ func Main(ctx context.Context, args []string, stdin io.Reader, stdout, stderr io
 	case "rules":
 		return rulesCheck(args[1:], stdout, stderr)
 	case "version":
+		if len(args) > 1 {
+			if isHelp(args[1]) {
+				fmt.Fprint(stdout, versionUsage)
+				return exitOK
+			}
+			fmt.Fprint(stderr, versionUsage)
+			return exitUsage
+		}
 		eng, err := newEngine()
 		if err != nil {
 			fmt.Fprintln(stderr, err)
@@ -119,6 +129,11 @@ func serve(ctx context.Context, args []string, stdout, stderr io.Writer, getenv 
 		"soft memory limit of the Go runtime in MiB (env COLLOIDTRIAGE_MEMORY_LIMIT_MIB); 0 leaves the runtime's own (GOMEMLIMIT)")
 	drainDelay := fs.Duration("drain-delay", 5*time.Second,
 		"on SIGTERM, how long to keep serving (with /readyz 503 and connections closed after each answer) before shutting down")
+	if len(args) > 0 && isHelp(args[0]) {
+		fs.SetOutput(stdout)
+		fs.Usage()
+		return exitOK
+	}
 	if err := fs.Parse(args); err != nil {
 		return exitUsage
 	}
@@ -218,19 +233,64 @@ func apiKeys(file, list string) ([]string, error) {
 	return keys, nil
 }
 
+// Usage of the subcommands, printed by --help and on a usage error.
+const (
+	triageUsage = `usage: colloidtriage triage [--format text|json] FILE|-
+  Triage one sample: a JSON request as POST /v1/triage takes it, from FILE or
+  from standard input (-). --format text prints a summary for a ticket (top
+  causes with score and probability, key evidence, remedies with targets,
+  cautions); --format json prints the report as the service answers. The
+  default is text when standard output is a terminal, JSON otherwise.
+  Exit status: 0 on a report, 3 when the sample is refused (the problem on
+  standard error), 2 on a usage error, 1 on any other failure.
+`
+	rulesUsage = `usage: colloidtriage rules check DIR
+  Compile the site rule files (*.rules.yaml) in DIR together with the
+  built-in rules, and report the rule count and the rule-set hash.
+`
+	versionUsage = `usage: colloidtriage version
+  Print the engine version and the hash of the built-in rule set.
+`
+)
+
+func isHelp(arg string) bool { return arg == "-h" || arg == "--help" || arg == "-help" }
+
+// isTerminal reports whether w is a terminal, where people read the text.
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	return ok && (isatty.IsTerminal(f.Fd()) || isatty.IsCygwinTerminal(f.Fd()))
+}
+
 // triage runs one sample through the same HTTP application in memory, so
 // that the CLI's reports and problem details are those of the service.
 func triage(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
-	if len(args) != 1 {
-		fmt.Fprint(stderr, usage)
+	fs := flag.NewFlagSet("triage", flag.ContinueOnError)
+	fs.SetOutput(io.Discard)
+	format := fs.String("format", "", "text or json")
+	if err := fs.Parse(args); err != nil {
+		if errors.Is(err, flag.ErrHelp) {
+			fmt.Fprint(stdout, triageUsage)
+			return exitOK
+		}
+		fmt.Fprintf(stderr, "triage: %v\n%s", err, triageUsage)
+		return exitUsage
+	}
+	if *format == "" {
+		*format = "json"
+		if isTerminal(stdout) {
+			*format = "text"
+		}
+	}
+	if (*format != "text" && *format != "json") || fs.NArg() != 1 {
+		fmt.Fprint(stderr, triageUsage)
 		return exitUsage
 	}
 	var body []byte
 	var err error
-	if args[0] == "-" {
+	if name := fs.Arg(0); name == "-" {
 		body, err = io.ReadAll(stdin)
 	} else {
-		body, err = os.ReadFile(args[0])
+		body, err = os.ReadFile(name)
 	}
 	if err != nil {
 		fmt.Fprintln(stderr, err)
@@ -247,12 +307,21 @@ func triage(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	rec := httptest.NewRecorder()
 	e.ServeHTTP(rec, req)
 	if rec.Code != http.StatusOK {
-		stderr.Write(rec.Body.Bytes())
-		fmt.Fprintln(stderr)
+		if *format == "text" {
+			writeProblem(stderr, rec.Body.Bytes())
+		} else {
+			stderr.Write(rec.Body.Bytes())
+			fmt.Fprintln(stderr)
+		}
 		return exitBadInput
 	}
 	var out bytes.Buffer
-	if err := indentJSON(&out, rec.Body.Bytes()); err != nil {
+	if *format == "text" {
+		err = writeSummary(&out, rec.Body.Bytes())
+	} else {
+		err = indentJSON(&out, rec.Body.Bytes())
+	}
+	if err != nil {
 		fmt.Fprintln(stderr, err)
 		return exitFailure
 	}
@@ -261,8 +330,12 @@ func triage(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 }
 
 func rulesCheck(args []string, stdout, stderr io.Writer) int {
+	if len(args) > 0 && isHelp(args[len(args)-1]) {
+		fmt.Fprint(stdout, rulesUsage)
+		return exitOK
+	}
 	if len(args) != 2 || args[0] != "check" {
-		fmt.Fprint(stderr, usage)
+		fmt.Fprint(stderr, rulesUsage)
 		return exitUsage
 	}
 	eng, err := newEngine(args[1])
