@@ -579,16 +579,17 @@ func (e *Engine) ruledOut(nominal *evaluation, causes []Cause) []RuledOut {
 		reported[c.ID] = true
 	}
 	deciding := map[string]*rule.Rule{}
-	against := map[string]bool{}
+	against, seen := map[string]bool{}, map[string]bool{}
 	var order []string
 	for _, r := range e.rules.For(nominal.cond.Symptom) {
 		if reported[r.Cause] || r.Cause == outsideColloidal {
 			continue
 		}
-		d, ok := deciding[r.Cause]
-		if !ok {
+		if !seen[r.Cause] {
+			seen[r.Cause] = true
 			order = append(order, r.Cause)
 		}
+		d := deciding[r.Cause]
 		switch {
 		case r.Certainty < 0 && !against[r.Cause] && r.Holds(nominal.facts):
 			deciding[r.Cause], against[r.Cause] = r, true

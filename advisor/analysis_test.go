@@ -194,6 +194,29 @@ func TestProbabilitiesSumToOne(t *testing.T) {
 	}
 }
 
+// TestRuledOutOncePerCause: every cause the rules of the symptom consider
+// and reject is listed once, and never one that is reported.
+func TestRuledOutOncePerCause(t *testing.T) {
+	t.Parallel()
+	e := engine(t)
+	for _, dc := range demoCases(t) {
+		r, err := e.Triage(loadDemo(t, dc.path))
+		if err != nil {
+			t.Fatal(err)
+		}
+		seen := map[string]bool{}
+		for _, c := range r.Causes {
+			seen[c.ID] = true
+		}
+		for _, ro := range r.RuledOut {
+			if seen[ro.ID] {
+				t.Errorf("%s: %s is ruled out twice or also reported", dc.name, ro.ID)
+			}
+			seen[ro.ID] = true
+		}
+	}
+}
+
 // A synthetic case where two inputs are uncertain: the zeta potential, on
 // the edge of the low-charge rule, and the container height, which no
 // charge rule reads. measure_next ranks zeta first.

@@ -547,7 +547,7 @@ function renderReport(rep) {
   }
   if (rep.consistency && rep.consistency.length) parts.push(consistencySection(rep.consistency));
   if (rep.ruled_out && rep.ruled_out.length) {
-    parts.push(h("div", { class: "section" }, h("h3", {}, "Ruled out"),
+    parts.push(h("div", { class: "section ruled-out" }, h("h3", {}, "Ruled out"),
       h("ul", {}, rep.ruled_out.map((r) => h("li", {}, h("b", {}, human(r.id)), `: ${r.reason}`,
         r.scale ? ` (${human(r.scale)} ${fmt(r.value)} ${unit(r.unit)})` : "")))));
   }

