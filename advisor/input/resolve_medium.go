@@ -69,8 +69,12 @@ func joinKeys(keys []string) string {
 }
 
 // resolveElectrolyte sums the ions of the stated salts (or takes the stated
-// ionic strength or its estimate from conductivity), adds H+ or OH- outside
-// pH 4-10, and floors aqueous media at the autoionisation of water.
+// ionic strength or its estimate from conductivity) and, in an aqueous
+// medium with a stated pH, adds the H+ and OH- of water at that pH with the
+// monovalent counter-ion of the acid or base that set it, so that the
+// mixture stays electroneutral and changes smoothly with pH. Without a pH,
+// an aqueous medium without salts holds the ions of neutral water, and one
+// with salts is floored at their ionic strength.
 func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 	var ions []physics.Ion
 	for i, el := range m.Electrolytes {
@@ -111,28 +115,57 @@ func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
 			number.Quantity(is, "mM"))
 	}
-	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
-		// The acid or base that set the pH brings its own monovalent
-		// counter-ion, so the ionic strength is that of a 1:1 salt at the
-		// concentration of the excess H+ or OH-.
-		pair := physics.IonsFromPH(*m.PH)
-		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
-		ions = append(ions, monovalent(excess)...)
-		n.Text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
-			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
-	}
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}
+	salts := physics.IonicStrength(ions)
+	if c.Liquid.Aqueous && (m.PH != nil || len(ions) == 0) {
+		ions = append(ions, waterIons(m.PH, c.StorageTempK, salts, n)...)
+	}
 	c.Ions = ions
 	c.IonicStrength = physics.IonicStrength(ions)
-	if c.Liquid.Aqueous && c.IonicStrength < AutoionisationMolM3 {
+	if c.Liquid.Aqueous && m.PH == nil && c.IonicStrength < AutoionisationMolM3 {
 		c.IonicStrength = AutoionisationMolM3
-		n.Add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(AutoionisationMolM3, "mM"))
+		n.Add("no pH stated and salts below the autoionisation of water: ionic strength floored at %s", number.Quantity(AutoionisationMolM3, "mM"))
 	}
 	if !c.Liquid.Aqueous && c.IonicStrength > 0 {
 		n.Add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
 	}
+}
+
+// acidBaseNoteShare is the share of the ionic strength above which the ions
+// of water and of the acid or base that set the pH are named in a note.
+const acidBaseNoteShare = 0.01
+
+// waterIons returns the H+ and OH- of water at pH (neutral water at the
+// temperature when pH is nil) and tempK, with the monovalent counter-ion of
+// the acid or base that set the pH (the excess of H+ over OH-, or of OH-
+// over H+). pKw is taken at tempK, kept within 0-150 degC, the range of
+// physics.WaterPKw. salts is the ionic strength of the other ions, for the
+// note.
+func waterIons(pH *float64, tempK, salts float64, n *Notes) []physics.Ion {
+	tK := math.Min(math.Max(tempK, physics.Kelvin(0)), physics.Kelvin(150))
+	at := physics.WaterPKw(tK) / 2
+	if pH != nil {
+		at = *pH
+	}
+	water := physics.WaterIons(at, tK)
+	h, oh := water[0].Concentration, water[1].Concentration
+	ions := water[:]
+	if excess := h - oh; excess > 0 {
+		ions = append(ions, physics.Ion{Valence: -1, Concentration: excess})
+	} else if excess < 0 {
+		ions = append(ions, physics.Ion{Valence: 1, Concentration: -excess})
+	}
+	added := physics.IonicStrength(ions)
+	switch {
+	case salts == 0 && pH == nil:
+		n.Add("no electrolyte and no pH stated: the H+ and OH- of neutral water only, ionic strength %s", number.Quantity(added, "mM"))
+	case salts == 0 || added > acidBaseNoteShare*(salts+added):
+		n.Add("pH %s: %s of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength (pKw %s at the temperature)",
+			number.Shortest(at), number.Quantity(math.Max(h, oh), "mM"), number.Shortest(number.Round(physics.WaterPKw(tK), 4)))
+	}
+	return ions
 }
 
 func monovalent(conc float64) []physics.Ion {
