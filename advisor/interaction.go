@@ -39,7 +39,7 @@ func (ev *evaluation) computeInteraction() {
 		return
 	}
 	ev.set("zeta_potential", c.Zeta*1e3, "zeta potential ("+c.ZetaSource+"), used as the diffuse-layer potential")
-	ev.pair.Potential = c.Zeta
+	ev.pair = ev.pair.WithPotential(c.Zeta).WithIons(c.Ions)
 	ev.addLayers()
 	ev.hasPair = true
 

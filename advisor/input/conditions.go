@@ -30,6 +30,7 @@ type Conditions struct {
 	MultivalentSalt       string  // formula of the multivalent salt present, if any
 	MultivalentConc       float64 // mol/m^3
 	MultivalentIonicShare float64 // ionic strength per mol/m^3 of that salt
+	MultivalentAt         int     // index of that salt's cation in Ions, its anion next
 	Models                *Models
 
 	PH, IsoelectricPH float64
@@ -116,6 +117,16 @@ func (c *Conditions) IonicStrengthPerMole() float64 {
 		return 1
 	}
 	return c.MultivalentIonicShare
+}
+
+// IonsWithMultivalent returns Ions with the multivalent salt at conc
+// (mol/m^3) instead of its present concentration, the others unchanged.
+func (c *Conditions) IonsWithMultivalent(conc float64) []physics.Ion {
+	ions := append([]physics.Ion(nil), c.Ions...)
+	for i := c.MultivalentAt; i < c.MultivalentAt+2; i++ {
+		ions[i].Concentration *= conc / c.MultivalentConc
+	}
+	return ions
 }
 
 // LargestRadius is the radius, m, of the largest particles: half the

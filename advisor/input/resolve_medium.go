@@ -90,16 +90,16 @@ func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 				continue
 			}
 			pair := salt.Ions(conc)
+			noteMultivalent(c, el.Formula, pair, conc, len(ions))
 			ions = append(ions, pair[:]...)
-			noteMultivalent(c, el.Formula, pair, conc)
 		case el.CationValence != nil && el.AnionValence != nil:
 			pair, err := physics.SymmetricIons(*el.CationValence, *el.AnionValence, conc)
 			if err != nil {
 				bad.add(pointerf("/medium/electrolytes/%d", i), err.Error(), "", "valences 1 to 4")
 				continue
 			}
+			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc, len(ions))
 			ions = append(ions, pair[:]...)
-			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc)
 		default:
 			bad.add(pointerf("/medium/electrolytes/%d", i), "each electrolyte needs a formula or both valences", "", "")
 		}
@@ -173,11 +173,12 @@ func monovalent(conc float64) []physics.Ion {
 }
 
 // noteMultivalent remembers the most concentrated salt with an ion of
-// valence above 1, for the multivalent-ion cause and its remedy.
-func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64) {
+// valence above 1, for the multivalent-ion cause and its remedy; at is the
+// index its two ions will take in Conditions.Ions.
+func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64, at int) {
 	multi := pair[0].Valence > 1 || pair[1].Valence < -1
 	if multi && conc > 0 && conc >= c.MultivalentConc {
-		c.MultivalentSalt, c.MultivalentConc = label, conc
+		c.MultivalentSalt, c.MultivalentConc, c.MultivalentAt = label, conc, at
 		c.MultivalentIonicShare = physics.IonicStrength(pair[:]) / conc
 	}
 }

@@ -402,12 +402,10 @@ func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, boo
 // withPotential is the pair at surface potential |psi| (V), of the sign of
 // the present one: a remedy raises the charge a surface has.
 func (cs *Case) withPotential(psi float64) physics.Pair {
-	p := cs.Pair
-	p.Potential = psi
 	if !(cs.Pair.Potential > 0) {
-		p.Potential = -psi
+		psi = -psi
 	}
-	return p
+	return cs.Pair.WithPotential(psi)
 }
 
 // potentialTol is the accuracy of potential targets, V.
@@ -457,9 +455,10 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	}
 	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	withConc := func(conc float64) physics.Pair {
-		return cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+		p := cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+		return p.WithIons(c.IonsWithMultivalent(conc))
 	}
-	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
+	crit := stabilityCriterion(cs) + "; the double layer's far field follows the ion mixture at each concentration"
 	conc := c.MultivalentConc
 	a := peakAnchor{cs: cs}
 	if m, _ := a.estimated(withConc(conc)); m >= 0 {
