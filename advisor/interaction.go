@@ -26,6 +26,10 @@ func (ev *evaluation) computeInteraction() {
 	if !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH) {
 		ev.set("ph_distance_from_iep", math.Abs(c.PH-c.IsoelectricPH), "|pH - isoelectric pH|")
 	}
+	if !math.IsNaN(c.SurfaceCharge) {
+		ev.set("surface_charge_density", c.SurfaceCharge, "site-binding model of the material (see assumptions) at the product's pH and ions")
+		ev.set("diffuse_layer_potential", c.DiffusePotential*1e3, "site-binding model: Stern-plane potential, Grahame equation in the product's ion mixture")
+	}
 	if !math.IsNaN(c.Henry) {
 		ev.set("henry_function", c.Henry, "Henry's function used to convert mobility to zeta (see assumptions)")
 	}

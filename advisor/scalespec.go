@@ -31,6 +31,8 @@ var scaleSpecs = []ScaleSpec{
 	{"counter_ion_valence", "1", "largest valence of the ions of charge opposite to the surface"},
 	{"zeta_potential", "mV", "zeta potential used for the double layer (measured, converted or estimated)"},
 	{"henry_function", "1", "Henry's function used to convert mobility to zeta potential"},
+	{"surface_charge_density", "C/m^2", "charge of the surface plane from the site-binding model in the product's liquid"},
+	{"diffuse_layer_potential", "mV", "potential at the start of the diffuse layer from the site-binding model in the product's liquid"},
 	{"ph_distance_from_iep", "pH", "distance of the pH from the isoelectric point"},
 	{"hamaker_constant", "zJ", "particle-medium-particle Hamaker constant"},
 	{"energy_barrier", "kT", "height of the primary maximum of the interaction energy"},

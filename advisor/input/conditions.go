@@ -34,10 +34,13 @@ type Conditions struct {
 	Models                *Models
 
 	PH, IsoelectricPH float64
-	Zeta              float64 // V used for the double layer
-	ZetaSource        string  // measured, mobility, estimated or ""
-	Henry             float64 // Henry's function when zeta came from mobility
-	Hamaker           float64 // J
+	Sites             *SurfaceSites // site-binding surface of the material, nil without one
+	SurfaceCharge     float64       // C/m^2 of the site model in the product, NaN without it
+	DiffusePotential  float64       // V, diffuse-layer potential of the site model in the product, NaN without it
+	Zeta              float64       // V used for the double layer
+	ZetaSource        string        // measured, mobility, estimated or ""
+	Henry             float64       // Henry's function when zeta came from mobility
+	Hamaker           float64       // J
 
 	Steric      StericLayer
 	FreePolymer Depletant
@@ -50,6 +53,42 @@ type Conditions struct {
 
 	Observed Observed
 	Criteria Acceptance
+}
+
+// SurfaceSites is the single-site basic Stern surface of the material
+// (physics.SiteSurface) and what the report says about it.
+type SurfaceSites struct {
+	Surface physics.SiteSurface
+	Model   string // one_pk or silica
+	Basis   string // the model, its parameters and their sources, for the assumptions
+}
+
+// SurfaceState is the equilibrium of the material's site-binding surface in
+// the product's ions at pH (Sites must be set).
+func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
+	return c.Sites.Surface.State(pH, c.Ions, c.Liquid.Permittivity, c.StorageTempK)
+}
+
+// EstimatedPotential is the surface-potential estimate at pH used when zeta
+// is not measured: the diffuse-layer potential of the material's site model
+// in the product's present ions (their H+ and OH- stay those of the present
+// pH), else physics.SurfacePotentialFromPH about the isoelectric point.
+func (c *Conditions) EstimatedPotential(pH float64) float64 {
+	if c.Sites != nil {
+		return c.SurfaceState(pH).DiffusePotential
+	}
+	return physics.SurfacePotentialFromPH(pH, c.IsoelectricPH, c.StorageTempK)
+}
+
+// ZeroPointPH is the pH at which EstimatedPotential changes sign: the point
+// of zero charge of a 1-pK site model, else the isoelectric point (NaN when
+// unknown). A silica surface is negative at every pH above about 2, so its
+// isoelectric point stands for it.
+func (c *Conditions) ZeroPointPH() float64 {
+	if c.Sites != nil && c.Sites.Model == "one_pk" {
+		return c.Sites.Surface.PK
+	}
+	return c.IsoelectricPH
 }
 
 // LiquidState is the continuous phase at the storage temperature, in SI

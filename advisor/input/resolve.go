@@ -17,7 +17,7 @@ import (
 func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	bad := &Error{}
 	c := &Conditions{Symptom: s.Symptom, Product: s.Product, PH: math.NaN(), IsoelectricPH: math.NaN(), Zeta: math.NaN(),
-		Henry: math.NaN()}
+		Henry: math.NaN(), SurfaceCharge: math.NaN(), DiffusePotential: math.NaN()}
 	p, m := &s.Particles, &s.Medium
 
 	mat, hasMat := resolveMaterial(lib, p, bad)
@@ -57,6 +57,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	if m.PH != nil {
 		c.PH = *m.PH
 	}
+	c.Sites = resolveSites(mat.sites, p.IsoelectricPH, c.Liquid.Aqueous)
 	resolveHamaker(p, c, mat, n)
 	resolveStorage(s, c, n)
 	resolveStabilizer(s.Stabilizer, m.FreePolymer, c, n)

@@ -416,7 +416,8 @@ const potentialTol = 1e-5
 // there is one (the estimate's shape, the measurement's scale).
 func solvePH(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	if math.IsNaN(c.IsoelectricPH) {
+	zero := c.ZeroPointPH()
+	if math.IsNaN(zero) {
 		return Target{}, "isoelectric point unknown", false
 	}
 	psi, ok := smallestAcceptablePotential(cs)
@@ -424,19 +425,22 @@ func solvePH(cs *Case) (Target, string, bool) {
 		return Target{}, stabilityCriterion(cs) + ": not reachable by pH alone at this ionic strength", false
 	}
 	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
+	if c.Sites != nil {
+		anchor = "; potential from the site-binding model of the surface in the present ions (see assumptions)"
+	}
 	if c.ZetaSource != "estimated" && !math.IsNaN(c.PH) {
-		if model := physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK); model*c.Zeta > 0 {
+		if model := c.EstimatedPotential(c.PH); model*c.Zeta > 0 {
 			scale = c.Zeta / model
-			anchor = "; pH estimate model scaled to the measured zeta at the present pH"
+			anchor += ", scaled to the measured zeta at the present pH"
 		}
 	}
-	above := math.IsNaN(c.PH) || c.PH >= c.IsoelectricPH
-	lo, hi, op := c.IsoelectricPH, 14.0, ">="
+	above := math.IsNaN(c.PH) || c.PH >= zero
+	lo, hi, op := zero, 14.0, ">="
 	if !above {
-		lo, hi, op = 0, c.IsoelectricPH, "<="
+		lo, hi, op = 0, zero, "<="
 	}
 	f := func(ph float64) float64 {
-		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.IsoelectricPH, c.StorageTempK)) - psi
+		return math.Abs(scale*c.EstimatedPotential(ph)) - psi
 	}
 	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
 	if !ok {
