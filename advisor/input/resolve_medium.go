@@ -83,11 +83,13 @@ func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 		switch {
 		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
 			bad.add(pointerf("/medium/electrolytes/%d", i), "give either formula or cation_valence and anion_valence, not both", "", "")
+		case el.Formula != "" && isBuffer(el.Formula):
+			ions = append(ions, bufferIons(el.Formula, bufferSalts[el.Formula], conc, m.PH, n)...)
 		case el.Formula != "":
 			salt, err := physics.ParseSalt(el.Formula)
 			if err != nil {
 				bad.add(pointerf("/medium/electrolytes/%d/formula", i), "unknown or unbalanced salt formula", "",
-					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2")
+					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2, or a buffer salt: "+bufferList)
 				continue
 			}
 			pair := salt.Ions(conc)
@@ -116,6 +118,7 @@ func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
 			number.Quantity(is, "mM"))
 	}
+	ions = resolveHardness(m.Hardness, c, ions, bad, n)
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}

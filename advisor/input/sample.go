@@ -61,6 +61,7 @@ type Medium struct {
 	RefractiveIndex  *float64      `json:"refractive_index,omitempty" validate:"omitempty,gte=1,lte=3" unit:"1"`
 	PH               *float64      `json:"ph,omitempty" validate:"omitempty,gte=0,lte=14" unit:"pH"`
 	Electrolytes     []Electrolyte `json:"electrolytes,omitempty" validate:"omitempty,max=20,dive"`
+	Hardness         *Hardness     `json:"hardness,omitempty"`
 	IonicStrengthMM  *float64      `json:"ionic_strength_mM,omitempty" validate:"omitempty,gte=0,lte=5000" unit:"mM"`
 	ConductivityUSCm *float64      `json:"conductivity_uS_cm,omitempty" validate:"omitempty,gte=0,lte=300000" unit:"uS/cm"`
 	YieldStressPa    *float64      `json:"yield_stress_Pa,omitempty" validate:"omitempty,gte=0,lte=10000" unit:"Pa"`
@@ -73,6 +74,15 @@ type Electrolyte struct {
 	CationValence   *int     `json:"cation_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
 	AnionValence    *int     `json:"anion_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
 	ConcentrationMM *float64 `json:"concentration_mM" validate:"required,gte=0,lte=5000" unit:"mM"`
+}
+
+// Hardness is the total hardness (calcium and magnesium) of the water the
+// product is made with, in one of four units: mg/L as CaCO3, German degrees
+// (dH, 10 mg/L CaO), French degrees (fH, 10 mg/L CaCO3) or mM of Ca2+ and
+// Mg2+ together; the value's unit is the one named in unit.
+type Hardness struct {
+	Value *float64 `json:"value" validate:"required,gte=0,lte=5000" unit:"hardness.unit"`
+	Unit  string   `json:"unit" validate:"required,oneof=mg_L_CaCO3 dH fH mM"`
 }
 
 // FreePolymer is dissolved, non-adsorbing polymer (a depletant).
