@@ -38,7 +38,7 @@ type Conditions struct {
 	SurfaceCharge     float64       // C/m^2 of the site model in the product, NaN without it
 	DiffusePotential  float64       // V, diffuse-layer potential of the site model in the product, NaN without it
 	Zeta              float64       // V used for the double layer
-	ZetaSource        string        // measured, mobility, estimated or ""
+	ZetaSource        string        // measured, mobility, carried (from another liquid), estimated or ""
 	Henry             float64       // Henry's function when zeta came from mobility
 	Hamaker           float64       // J
 

@@ -52,12 +52,13 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	}
 	c.VolumeFraction = valueOr(p.VolumeFraction, volumeFractionDefault, n)
 
-	resolveElectrolyte(m, c, bad, n)
+	resolveElectrolyte(m, "/medium", c, bad, n)
 	c.IsoelectricPH = firstKnown(p.IsoelectricPH, mat.iep, "particles.isoelectric_ph", "pH", p.Material, n)
 	if m.PH != nil {
 		c.PH = *m.PH
 	}
 	c.Sites = resolveSites(mat.sites, p.IsoelectricPH, c.Liquid.Aqueous)
+	meas := resolveMeasuredIn(p.ZetaMeasuredIn, c, bad)
 	resolveHamaker(p, c, mat, n)
 	resolveStorage(s, c, n)
 	resolveStabilizer(s.Stabilizer, m.FreePolymer, c, n)
@@ -68,7 +69,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	if err := bad.orNil(); err != nil {
 		return nil, err
 	}
-	resolveZeta(p, c, n)
+	resolveZeta(p, meas, c, n)
 	return c, nil
 }
 

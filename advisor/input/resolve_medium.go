@@ -75,20 +75,21 @@ func joinKeys(keys []string) string {
 // monovalent counter-ion of the acid or base that set it, so that the
 // mixture stays electroneutral and changes smoothly with pH. Without a pH,
 // an aqueous medium without salts holds the ions of neutral water, and one
-// with salts is floored at their ionic strength.
-func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
+// with salts is floored at their ionic strength. at is the JSON pointer of
+// the medium, for problems.
+func resolveElectrolyte(m *Medium, at string, c *Conditions, bad *Error, n *Notes) {
 	var ions []physics.Ion
 	for i, el := range m.Electrolytes {
 		conc := *el.ConcentrationMM // mM = mol/m^3
 		switch {
 		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
-			bad.add(pointerf("/medium/electrolytes/%d", i), "give either formula or cation_valence and anion_valence, not both", "", "")
+			bad.add(pointerf("%s/electrolytes/%d", at, i), "give either formula or cation_valence and anion_valence, not both", "", "")
 		case el.Formula != "" && isBuffer(el.Formula):
 			ions = append(ions, bufferIons(el.Formula, bufferSalts[el.Formula], conc, m.PH, n)...)
 		case el.Formula != "":
 			salt, err := physics.ParseSalt(el.Formula)
 			if err != nil {
-				bad.add(pointerf("/medium/electrolytes/%d/formula", i), "unknown or unbalanced salt formula", "",
+				bad.add(pointerf("%s/electrolytes/%d/formula", at, i), "unknown or unbalanced salt formula", "",
 					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2, or a buffer salt: "+bufferList)
 				continue
 			}
@@ -98,13 +99,13 @@ func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
 		case el.CationValence != nil && el.AnionValence != nil:
 			pair, err := physics.SymmetricIons(*el.CationValence, *el.AnionValence, conc)
 			if err != nil {
-				bad.add(pointerf("/medium/electrolytes/%d", i), err.Error(), "", "valences 1 to 4")
+				bad.add(pointerf("%s/electrolytes/%d", at, i), err.Error(), "", "valences 1 to 4")
 				continue
 			}
 			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc, len(ions))
 			ions = append(ions, pair[:]...)
 		default:
-			bad.add(pointerf("/medium/electrolytes/%d", i), "each electrolyte needs a formula or both valences", "", "")
+			bad.add(pointerf("%s/electrolytes/%d", at, i), "each electrolyte needs a formula or both valences", "", "")
 		}
 	}
 	switch {
@@ -190,14 +191,16 @@ func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc floa
 // resolveZeta chooses the surface potential for the double layer: measured
 // zeta, zeta from mobility by Henry's equation, or an estimate from pH and
 // the isoelectric point, in that order.
-func resolveZeta(p *Particles, c *Conditions, n *Notes) {
+func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 	kappa := physics.DebyeKappa(c.IonicStrength, c.Liquid.Permittivity, c.StorageTempK)
 	switch {
 	case p.ZetaMV != nil && p.Mobility != nil:
 		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
 		n.Add("both zeta_mV and mobility given: the measured zeta_mV is used")
+		carryZeta(c, meas, n)
 	case p.ZetaMV != nil:
 		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
+		carryZeta(c, meas, n)
 	case p.Mobility != nil:
 		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
 		model := EffectiveModels(c.Models).ZetaFromMobility
@@ -215,6 +218,7 @@ func resolveZeta(p *Particles, c *Conditions, n *Notes) {
 		c.Zeta = physics.ZetaHenry(mu, c.Liquid.Viscosity, c.Liquid.Permittivity, c.Henry)
 		c.ZetaSource = "mobility"
 		n.Add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.Zeta*1e3, "mV"), how, c.Henry)
+		carryZeta(c, meas, n)
 	case c.Sites != nil && !math.IsNaN(c.PH):
 		st := c.SurfaceState(c.PH)
 		c.Zeta, c.ZetaSource = st.DiffusePotential, "estimated"

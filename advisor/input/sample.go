@@ -43,6 +43,17 @@ type Particles struct {
 	SolubilityMolM3   *float64    `json:"solubility_mol_m3,omitempty" validate:"omitempty,gte=0,lte=1e4" unit:"mol/m^3"`
 	MolarVolumeCm3Mol *float64    `json:"molar_volume_cm3_mol,omitempty" validate:"omitempty,gte=1,lte=5000" unit:"cm^3/mol"`
 	TensionMNm        *float64    `json:"interfacial_tension_mN_m,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"mN/m"`
+	ZetaMeasuredIn    *ZetaLiquid `json:"zeta_measured_in,omitempty"`
+}
+
+// ZetaLiquid is the liquid a zeta potential or mobility was measured in,
+// when it is not the product itself (a diluted sample, a standard
+// electrolyte): its pH, its salts or ionic strength, its temperature.
+type ZetaLiquid struct {
+	PH              *float64      `json:"ph" validate:"required,gte=0,lte=14" unit:"pH"`
+	Electrolytes    []Electrolyte `json:"electrolytes,omitempty" validate:"omitempty,max=20,dive"`
+	IonicStrengthMM *float64      `json:"ionic_strength_mM,omitempty" validate:"omitempty,gte=0,lte=5000" unit:"mM"`
+	TemperatureC    *float64      `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
 }
 
 // SizeClass is one class of an explicit size distribution.

@@ -3,6 +3,7 @@ package input_test
 import (
 	"fmt"
 	"math"
+	"strings"
 	"testing"
 
 	"colloidtriage/advisor/input"
@@ -65,4 +66,54 @@ func TestSiteModelEstimate(t *testing.T) {
 		}
 		last = z
 	}
+}
+
+// TestZetaCarried carries a zeta potential measured in one liquid to the
+// product through the site model with its Stern capacitance fitted to the
+// measurement: measured in the product's own liquid it comes back unchanged;
+// measured in a diluted sample (1 mM) it falls in magnitude in a saltier
+// product (20 mM), as the diffuse potential of any charge-regulating
+// surface does (Hiemstra, Van Riemsdijk & Bolt 1989); a material without a
+// site model keeps the measured value, and a zeta without a stated liquid
+// is taken as measured in the product.
+func TestZetaCarried(t *testing.T) {
+	t.Parallel()
+	lib := loadLibrary(t)
+	resolve := func(material string, productMM float64, measuredIn string) (*input.Conditions, []string) {
+		js := fmt.Sprintf(`{"symptom":"settling","particles":{"material":%q,"diameter_nm":300,"zeta_mV":-40%s},
+			"medium":{"liquid":"water","temperature_c":25,"ph":8.5,"electrolytes":[{"formula":"NaCl","concentration_mM":%g}]}}`,
+			material, measuredIn, productMM)
+		n := input.NewNotes(32)
+		c, err := input.Resolve(sample(t, js), lib, n)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return c, n.List()
+	}
+	diluted := `,"zeta_measured_in":{"ph":8.5,"electrolytes":[{"formula":"NaCl","concentration_mM":1}],"temperature_c":25}`
+	same, _ := resolve("titania_rutile", 1, diluted)
+	if !near(same.Zeta, -0.040, 1e-5) || same.ZetaSource != "carried" {
+		t.Errorf("measured in the product's own liquid: zeta %g V (%s), want -0.040 back", same.Zeta, same.ZetaSource)
+	}
+	salty, _ := resolve("titania_rutile", 20, diluted)
+	if !(salty.Zeta > -0.040 && salty.Zeta < 0) {
+		t.Errorf("carried from 1 mM to 20 mM NaCl: zeta %g V, want between -0.040 and 0", salty.Zeta)
+	}
+	plain, notes := resolve("zirconia", 20, diluted)
+	if plain.Zeta != -0.040 || !hasNote(notes, "used unchanged in the product") {
+		t.Errorf("zirconia (no site model): zeta %g V, notes %q; want -0.040 used unchanged", plain.Zeta, notes)
+	}
+	_, notes = resolve("titania_rutile", 20, "")
+	if !hasNote(notes, "assumed measured in the product itself") {
+		t.Errorf("no zeta_measured_in: notes %q, want the assumption stated", notes)
+	}
+}
+
+func hasNote(notes []string, part string) bool {
+	for _, n := range notes {
+		if strings.Contains(n, part) {
+			return true
+		}
+	}
+	return false
 }
