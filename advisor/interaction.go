@@ -65,12 +65,30 @@ func (ev *evaluation) computeInteraction() {
 		ev.hasBarrier, ev.lastBarrier = true, b.Separation
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (logarithmic scan, Newton refinement)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
+		ev.flagBarrierPosition(b, kappa)
 	} else {
 		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
 	}
 	ev.setSecondaryMinimum(m, kT)
 	ev.kinetics(b)
 	ev.criticalCoagulation()
+}
+
+// flagBarrierPosition reports whether the barrier sits at the closest
+// approach, and says what that and a barrier well inside one Debye length
+// mean for the stability ratio.
+func (ev *evaluation) flagBarrierPosition(b physics.Extremum, kappa float64) {
+	closest := math.Max(physics.MinimumSeparation, 2*ev.pair.StericThickness)
+	atCutoff := b.Separation <= closest*(1+1e-6)
+	ev.set("barrier_at_cutoff", map[bool]float64{true: 1, false: 0}[atCutoff], "barrier position against the closest approach of the energy searches")
+	switch {
+	case atCutoff:
+		ev.notes.Add("the energy still rises towards the closest approach (%s): the barrier is the energy at that cut-off, so it and the stability ratio W depend on where continuum theory is cut off; read W as an order of magnitude",
+			number.Quantity(closest*1e9, "nm"))
+	case !ev.pair.ConstantPotential && kappa*b.Separation < 1:
+		ev.notes.Add("the barrier lies at kappa h = %s, inside one Debye length, where linear superposition is least accurate (it assumes weakly overlapping double layers)",
+			number.Quantity(kappa*b.Separation, ""))
+	}
 }
 
 func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {

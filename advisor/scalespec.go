@@ -38,6 +38,7 @@ var scaleSpecs = []ScaleSpec{
 	{"hamaker_constant", "zJ", "particle-medium-particle Hamaker constant"},
 	{"energy_barrier", "kT", "height of the primary maximum of the interaction energy"},
 	{"barrier_position", "nm", "surface separation at the energy barrier"},
+	{"barrier_at_cutoff", "1", "1 when the barrier lies at the closest approach (the 0.2 nm cut-off or steric contact), else 0"},
 	{"secondary_minimum", "kT", "depth of the secondary minimum (negative)"},
 	{"secondary_minimum_position", "nm", "surface separation at the secondary minimum"},
 	{"log10_stability_ratio", "1", "base-10 logarithm of the Fuchs stability ratio W"},

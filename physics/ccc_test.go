@@ -207,3 +207,31 @@ func TestSchulzeHardyAsymmetric(t *testing.T) {
 		t.Errorf("1:1 mixture energy %g J, z:z form %g J: want identical", a, b)
 	}
 }
+
+// TestCriticalIonicStrengthHighestMaximum holds the CCC to the highest
+// maximum of the whole curve. With a depletion well (a = 70 nm, A = 1e-20 J,
+// -20 mV, delta = 20 nm, n = 1e23 m^-3, 0.3 mM) the curve has two maxima;
+// followed from the inner one the search used to stop at 0.89 mol/m^3, where
+// the outer one still stood. Now the answer is the same from either hint or
+// none, and it is the CCC by definition [calc]: at 2 % below it Barrier
+// (the full scan) finds a maximum above 0, at 2 % above it none.
+func TestCriticalIonicStrengthHighestMaximum(t *testing.T) {
+	t.Parallel()
+	p := Pair{Radius: 70e-9, Hamaker: 1e-20, Potential: -0.02, EpsR: 78.4, TempK: 298.15,
+		DepletionRange: 20e-9, DepletionDensity: 1e23}.WithIonicStrength(0.3)
+	free, ok := CriticalIonicStrength(p, 0, 0)
+	if !ok {
+		t.Fatal("no CCC")
+	}
+	for _, hint := range []float64{6.19e-9, 25.5e-9} {
+		if got, _ := CriticalIonicStrength(p, 0, hint); interactionRelErr(got, free) > 1e-3 {
+			t.Errorf("hint %g m: CCC %g mol/m^3, without hint %g", hint, got, free)
+		}
+	}
+	if b := p.WithIonicStrength(free * 0.98).Barrier(); !b.Found {
+		t.Errorf("2 %% below the CCC %g mol/m^3: no barrier", free)
+	}
+	if b := p.WithIonicStrength(free * 1.02).Barrier(); b.Found {
+		t.Errorf("2 %% above the CCC %g mol/m^3: a barrier of %g J at %g m", free, b.Energy, b.Separation)
+	}
+}
