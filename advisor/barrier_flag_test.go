@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"colloidtriage/advisor/input"
+	"colloidtriage/advisor/remedy"
 	"colloidtriage/rules"
 )
 
@@ -36,5 +37,30 @@ func TestBarrierAtCutoff(t *testing.T) {
 	}
 	if !found {
 		t.Errorf("no note on the cut-off in %q", rep.Assumptions)
+	}
+}
+
+// TestMultivalentCCC holds multivalent_ccc to its definition [calc]: with
+// the other ions kept, the pair has a barrier (the highest maximum of the
+// full scan) 2 % below that concentration of the multivalent salt and none
+// 2 % above it.
+func TestMultivalentCCC(t *testing.T) {
+	e, err := LoadEngine(rules.FS)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ev, err := e.evaluate(benchSample(t, "multivalent_ions_2.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	ccc := ev.facts.Number("multivalent_ccc")
+	if !(ccc > 0) {
+		t.Fatalf("multivalent_ccc %g", ccc)
+	}
+	if !remedy.MultivalentPair(ev.pair, ev.cond, 0.98*ccc).Barrier().Found {
+		t.Errorf("no barrier 2 %% below the multivalent CCC %g mM", ccc)
+	}
+	if remedy.MultivalentPair(ev.pair, ev.cond, 1.02*ccc).Barrier().Found {
+		t.Errorf("a barrier 2 %% above the multivalent CCC %g mM", ccc)
 	}
 }

@@ -5,6 +5,7 @@ import (
 
 	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
 	"colloidtriage/physics"
 )
 
@@ -72,6 +73,37 @@ func (ev *evaluation) computeInteraction() {
 	ev.setSecondaryMinimum(m, kT)
 	ev.kinetics(b)
 	ev.criticalCoagulation()
+	ev.multivalent()
+}
+
+// multivalent reports the far field the ion mixture leaves the double layer
+// and, with a multivalent salt present, that salt's own critical
+// coagulation concentration: the concentration of it at which the highest
+// maximum of the energy vanishes, the other ions kept (bisection in log
+// concentration, 1e-6 to 5000 mM, to 0.1 %).
+func (ev *evaluation) multivalent() {
+	c := ev.cond
+	if len(c.Ions) > 0 {
+		ev.set("far_field_potential", physics.FarFieldPotential(c.Zeta, c.Ions, c.StorageTempK)*1e3,
+			"flat-plate Poisson-Boltzmann far field of the zeta potential in the actual ion mixture")
+	}
+	if c.MultivalentSalt == "" {
+		return
+	}
+	ev.set("multivalent_concentration", c.MultivalentConc, c.MultivalentSalt)
+	kT := physics.Boltzmann * c.StorageTempK
+	margin := func(log10C float64) float64 {
+		if b := remedy.MultivalentPair(ev.pair, c, math.Pow(10, log10C)).Barrier(); b.Found {
+			return b.Energy / kT
+		}
+		return -1
+	}
+	ccc, ok := physics.FindRoot(margin, -6, math.Log10(5000), math.Log10(1.001))
+	if !ok {
+		return
+	}
+	ev.set("multivalent_ccc", math.Pow(10, ccc), "barrier vanishes (highest maximum, chosen model) at this concentration of "+c.MultivalentSalt)
+	ev.set("multivalent_over_ccc", c.MultivalentConc/math.Pow(10, ccc), "multivalent salt over its own critical coagulation concentration")
 }
 
 // flagBarrierPosition reports whether the barrier sits at the closest

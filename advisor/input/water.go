@@ -53,14 +53,14 @@ func resolveHardness(h *Hardness, c *Conditions, ions []physics.Ion, bad *Error,
 		return ions
 	}
 	pair := [2]physics.Ion{{Valence: 2, Concentration: mM}, {Valence: -1, Concentration: 2 * mM}}
-	noteMultivalent(c, hardnessLabel, pair, mM, len(ions))
+	noteMultivalent(c, HardnessLabel, pair, mM, len(ions))
 	n.Add("medium.hardness %s %s = %s of Ca2+ and Mg2+, counted as Ca2+ (Mg2+ acts alike as a divalent counter-ion in the double layer) with two monovalent anions (chloride or bicarbonate) per ion",
 		number.Shortest(*h.Value), h.Unit, number.Quantity(mM, "mM"))
 	return append(ions, pair[:]...)
 }
 
-// hardnessLabel names the hardness where a remedy names the multivalent salt.
-const hardnessLabel = "medium.hardness (as Ca2+)"
+// HardnessLabel names the hardness where a remedy names the multivalent salt.
+const HardnessLabel = "medium.hardness (as Ca2+)"
 
 // bufferSalt is a salt of a weak acid that the advisor speciates at the pH:
 // cationsPerUnit monovalent cations with one anion of the acid.

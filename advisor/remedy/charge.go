@@ -457,11 +457,7 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	if c.MultivalentSalt == "" || !cs.HasPair {
 		return Target{}, "no multivalent salt stated", false
 	}
-	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
-	withConc := func(conc float64) physics.Pair {
-		p := cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
-		return p.WithIons(c.IonsWithMultivalent(conc))
-	}
+	withConc := func(conc float64) physics.Pair { return MultivalentPair(cs.Pair, c, conc) }
 	crit := stabilityCriterion(cs) + "; the double layer's far field follows the ion mixture at each concentration"
 	conc := c.MultivalentConc
 	a := peakAnchor{cs: cs}
@@ -490,7 +486,38 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	case !ok:
 		return Target{}, crit, false
 	}
+	if c.MultivalentSalt == input.HardnessLabel && conc < c.MultivalentConc {
+		crit += sequestrantDose(c.MultivalentConc - conc)
+	}
 	return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+}
+
+// MultivalentPair is the pair p with the sample's multivalent salt at conc
+// (mol/m^3) instead of its present concentration: the ionic strength and
+// the ion mixture of the far field both follow, the other ions stay.
+func MultivalentPair(p physics.Pair, c *input.Conditions, conc float64) physics.Pair {
+	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
+	floor := 1e-6
+	if c.Liquid.Aqueous {
+		floor = input.AutoionisationMolM3
+	}
+	return p.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, floor)).WithIons(c.IonsWithMultivalent(conc))
+}
+
+// molarMassNa2H2EDTA is the molar mass of disodium EDTA dihydrate,
+// Na2H2EDTA.2H2O (CAS 6381-92-6), g/mol.
+const molarMassNa2H2EDTA = 372.24
+
+// sequestrantDose says how much disodium EDTA binds excess mM of hardness:
+// one EDTA per Ca2+ or Mg2+ (1:1 chelates, log K 10.7 for CaY and 8.7 for
+// MgY, so binding is complete at the mM level above pH 7), as mg/L of the
+// dihydrate.
+//
+// Reference: A. E. Martell & R. M. Smith, Critical Stability Constants,
+// vol. 1 (Plenum, 1974), EDTA; molar mass from IUPAC atomic weights.
+func sequestrantDose(excess float64) string {
+	return "; or sequester the excess " + number.Quantity(excess, "mM") + " with at least " +
+		number.Quantity(excess*molarMassNa2H2EDTA, "mg/L") + " of disodium EDTA dihydrate (1:1 with Ca2+ and Mg2+)"
 }
 
 // looseFlocBarrierKT is the barrier below which particles join loose flocs
