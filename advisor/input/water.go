@@ -54,7 +54,7 @@ func resolveHardness(h *Hardness, c *Conditions, ions []physics.Ion, bad *Error,
 	}
 	pair := [2]physics.Ion{{Valence: 2, Concentration: mM}, {Valence: -1, Concentration: 2 * mM}}
 	noteMultivalent(c, HardnessLabel, pair, mM, len(ions))
-	n.Add("medium.hardness %s %s = %s of Ca2+ and Mg2+, counted as Ca2+ (Mg2+ acts alike as a divalent counter-ion in the double layer) with two monovalent anions (chloride or bicarbonate) per ion",
+	n.Add("medium.hardness %s %s = %s of Ca2+ and Mg2+, counted as Ca2+ (Mg2+ acts alike as a divalent counter-ion in the double layer) with two monovalent anions (chloride or bicarbonate) per ion; their specific adsorption, which lowers or reverses the charge of oxides at alkaline pH, is not modelled, so the barrier is an upper bound",
 		number.Shortest(*h.Value), h.Unit, number.Quantity(mM, "mM"))
 	return append(ions, pair[:]...)
 }
