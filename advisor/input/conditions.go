@@ -27,10 +27,11 @@ type Conditions struct {
 	Ions                  []physics.Ion
 	IonicStrength         float64 // mol/m^3
 	CounterValence        int
-	MultivalentSalt       string  // formula of the multivalent salt present, if any
-	MultivalentConc       float64 // mol/m^3
-	MultivalentIonicShare float64 // ionic strength per mol/m^3 of that salt
-	MultivalentAt         int     // index of that salt's cation in Ions, its anion next
+	MultivalentSalt       string     // formula of the multivalent salt present, if any
+	MultivalentConc       float64    // mol/m^3
+	MultivalentIonicShare float64    // ionic strength per mol/m^3 of that salt
+	MultivalentAt         int        // index of that salt's cation in Ions, its anion next
+	MultivalentUnit       [2]float64 // cations and anions per unit of that salt
 	Models                *Models
 
 	PH, IsoelectricPH float64
@@ -162,8 +163,8 @@ func (c *Conditions) IonicStrengthPerMole() float64 {
 // (mol/m^3) instead of its present concentration, the others unchanged.
 func (c *Conditions) IonsWithMultivalent(conc float64) []physics.Ion {
 	ions := append([]physics.Ion(nil), c.Ions...)
-	for i := c.MultivalentAt; i < c.MultivalentAt+2; i++ {
-		ions[i].Concentration *= conc / c.MultivalentConc
+	for k, unit := range c.MultivalentUnit {
+		ions[c.MultivalentAt+k].Concentration = conc * unit
 	}
 	return ions
 }

@@ -124,7 +124,7 @@ func resolveElectrolyte(m *Medium, at string, c *Conditions, bad *Error, n *Note
 		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}
 	salts := physics.IonicStrength(ions)
-	if c.Liquid.Aqueous && (m.PH != nil || len(ions) == 0) {
+	if c.Liquid.Aqueous && (m.PH != nil || salts == 0) {
 		ions = append(ions, waterIons(m.PH, c.StorageTempK, salts, n)...)
 	}
 	c.Ions = ions
@@ -184,6 +184,7 @@ func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc floa
 	multi := pair[0].Valence > 1 || pair[1].Valence < -1
 	if multi && conc > 0 && conc >= c.MultivalentConc {
 		c.MultivalentSalt, c.MultivalentConc, c.MultivalentAt = label, conc, at
+		c.MultivalentUnit = [2]float64{math.Round(pair[0].Concentration / conc), math.Round(pair[1].Concentration / conc)}
 		c.MultivalentIonicShare = physics.IonicStrength(pair[:]) / conc
 	}
 }

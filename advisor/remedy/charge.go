@@ -493,9 +493,11 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 }
 
 // MultivalentPair is the pair p with the sample's multivalent salt at conc
-// (mol/m^3) instead of its present concentration: the ionic strength and
-// the ion mixture of the far field both follow, the other ions stay.
+// (mol/m^3; below 0, as a search's step past none at all may ask, it is 0)
+// instead of its present concentration: the ionic strength and the ion
+// mixture of the far field both follow, the other ions stay.
 func MultivalentPair(p physics.Pair, c *input.Conditions, conc float64) physics.Pair {
+	conc = math.Max(conc, 0)
 	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 	floor := 1e-6
 	if c.Liquid.Aqueous {
