@@ -44,6 +44,7 @@ func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidSt
 type materialProps struct {
 	kind, phase                                 string
 	density, refrIndex, epsR, iep, hamakerWater float64
+	sites                                       *library.SurfaceSites
 }
 
 func resolveMaterial(lib *library.Library, p *Particles, bad *Error) (materialProps, bool) {
@@ -59,7 +60,7 @@ func resolveMaterial(lib *library.Library, p *Particles, bad *Error) (materialPr
 	}
 	out := materialProps{kind: m.Kind, phase: m.Phase, density: m.Density.Value,
 		refrIndex: valueOrNaN(m.RefractiveIndex), epsR: valueOrNaN(m.RelativePermittivity),
-		iep: valueOrNaN(m.IsoelectricPH), hamakerWater: valueOrNaN(m.HamakerWater)}
+		iep: valueOrNaN(m.IsoelectricPH), hamakerWater: valueOrNaN(m.HamakerWater), sites: m.SurfaceSites}
 	return out, true
 }
 
