@@ -5,7 +5,6 @@ import (
 	"math"
 
 	"colloidtriage/advisor/library"
-	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -23,7 +22,7 @@ func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidSt
 	if !(T >= lo && T <= hi) {
 		bad := &Error{}
 		bad.add(field, fmt.Sprintf("outside the range in which the properties of %s are known", l.Name), "degC",
-			fmt.Sprintf("%g <= value <= %g", number.Round(lo-physics.CelsiusZero, 4), number.Round(hi-physics.CelsiusZero, 4)))
+			celsiusRange(lo, hi))
 		return LiquidState{}, bad
 	}
 	p, lines := l.Properties(T)
