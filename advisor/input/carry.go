@@ -26,7 +26,7 @@ func resolveMeasuredIn(z *ZetaLiquid, c *Conditions, bad *Error) *measuredIn {
 		tmp.StorageTempK = physics.Kelvin(*z.TemperatureC)
 	}
 	m := Medium{PH: z.PH, Electrolytes: z.Electrolytes, IonicStrengthMM: z.IonicStrengthMM}
-	resolveElectrolyte(&m, "/particles/zeta_measured_in", &tmp, bad, NewNotes(8))
+	resolveElectrolyte(&m, "/particles/zeta_measured_in", &tmp, 1, bad, nil)
 	return &measuredIn{ions: tmp.Ions, pH: *z.PH, tempK: tmp.StorageTempK}
 }
 
@@ -38,7 +38,9 @@ const minFitStern, maxFitStern = 1e-3, 1e3
 // that the model's diffuse-layer potential in the measurement liquid equals
 // the measured zeta, and the model with it is evaluated in the product.
 // Without a stated liquid, zeta is taken as measured in the product, and
-// the site model's own value there is kept for comparison.
+// the site model's own value there is kept for comparison. The fitted
+// capacitance goes into a copy of c.Sites: the surface Resolve built is
+// shared by the draws that carry the zeta potential again (Rederive).
 func carryZeta(c *Conditions, meas *measuredIn, n *Notes) {
 	if meas == nil {
 		n.Add("particles.zeta_measured_in not given: the zeta potential is assumed measured in the product itself")
@@ -73,7 +75,9 @@ func carryZeta(c *Conditions, meas *measuredIn, n *Notes) {
 		number.Shortest(number.Round(meas.tempK-physics.CelsiusZero, 4)), c.PH, number.Quantity(c.IonicStrength, "mM"),
 		number.Quantity(st.DiffusePotential*1e3, "mV"), number.Quantity(surface.SternCapacitance, "F/m^2"),
 		number.Quantity(c.Sites.Surface.SternCapacitance, "F/m^2"))
-	c.Sites.Surface.SternCapacitance = surface.SternCapacitance
+	fitted := *c.Sites
+	fitted.Surface.SternCapacitance = surface.SternCapacitance
+	c.Sites = &fitted
 	c.Zeta, c.ZetaSource = st.DiffusePotential, "carried"
 	c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
 }

@@ -73,6 +73,8 @@ type Conditions struct {
 
 	Observed Observed
 	Criteria Acceptance
+
+	derived *derivation // what the ions and zeta potential were derived from, for Rederive
 }
 
 // SurfaceSites is the single-site basic Stern surface of the material

@@ -51,7 +51,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	}
 	c.VolumeFraction = valueOr(p.VolumeFraction, volumeFractionDefault, n)
 
-	resolveElectrolyte(m, "/medium", c, bad, n)
+	resolveElectrolyte(m, "/medium", c, 1, bad, n)
 	if liquidOK && len(bad.Problems) == before {
 		resolveFreezing(lib.Liquids[c.Liquid.Key], mediumT, c, bad, n)
 	}
@@ -71,6 +71,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	if err := bad.orNil(); err != nil {
 		return nil, err
 	}
+	c.derived = &derivation{medium: *m, particles: *p, sites: c.Sites, measuredIn: meas, iepStated: p.IsoelectricPH != nil}
 	resolveZeta(p, meas, c, n)
 	return c, nil
 }

@@ -76,11 +76,16 @@ func joinKeys(keys []string) string {
 // mixture stays electroneutral and changes smoothly with pH. Without a pH,
 // an aqueous medium without salts holds the ions of neutral water, and one
 // with salts is floored at their ionic strength. at is the JSON pointer of
-// the medium, for problems.
-func resolveElectrolyte(m *Medium, at string, c *Conditions, bad *Error, n *Notes) {
+// the medium, for problems. scale multiplies every stated concentration
+// (1 in Resolve; a Monte Carlo draw's factor in Rederive), and the ions of
+// water too when no salt is stated (then they stand for the unstated
+// background).
+func resolveElectrolyte(m *Medium, at string, c *Conditions, scale float64, bad *Error, n *Notes) {
 	var ions []physics.Ion
+	c.MultivalentSalt, c.MultivalentConc, c.MultivalentAt, c.MultivalentIonicShare = "", 0, 0, 0
+	c.MultivalentUnit = [2]float64{}
 	for i, el := range m.Electrolytes {
-		conc := *el.ConcentrationMM // mM = mol/m^3
+		conc := *el.ConcentrationMM * scale // mM = mol/m^3
 		switch {
 		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
 			bad.add(pointerf("%s/electrolytes/%d", at, i), "give either formula or cation_valence and anion_valence, not both", "", "")
@@ -111,21 +116,27 @@ func resolveElectrolyte(m *Medium, at string, c *Conditions, bad *Error, n *Note
 	switch {
 	case len(m.Electrolytes) > 0:
 	case m.IonicStrengthMM != nil:
-		ions = append(ions, monovalent(*m.IonicStrengthMM)...)
+		ions = append(ions, monovalent(*m.IonicStrengthMM*scale)...)
 		n.Add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
 	case m.ConductivityUSCm != nil:
-		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
+		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm*1e-4) * scale
 		ions = append(ions, monovalent(is)...)
 		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
 			number.Quantity(is, "mM"))
 	}
-	ions = resolveHardness(m.Hardness, c, ions, bad, n)
+	ions = resolveHardness(m.Hardness, c, ions, scale, bad, n)
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}
 	salts := physics.IonicStrength(ions)
 	if c.Liquid.Aqueous && (m.PH != nil || salts == 0) {
-		ions = append(ions, waterIons(m.PH, c.StorageTempK, salts, n)...)
+		water := waterIons(m.PH, c.StorageTempK, salts, n)
+		if salts == 0 && scale != 1 {
+			for i := range water {
+				water[i].Concentration *= scale
+			}
+		}
+		ions = append(ions, water...)
 	}
 	c.Ions = ions
 	c.IonicStrength = physics.IonicStrength(ions)

@@ -42,7 +42,9 @@ const maxHardnessMM = 50.0
 // resolveHardness adds the hardness of the water as Ca2+ with two
 // monovalent anions per ion (chloride or bicarbonate: either way a
 // monovalent co-ion), registered as the multivalent salt of the sample.
-func resolveHardness(h *Hardness, c *Conditions, ions []physics.Ion, bad *Error, n *Notes) []physics.Ion {
+// The stated hardness is checked against maxHardnessMM before scale
+// multiplies it (see resolveElectrolyte).
+func resolveHardness(h *Hardness, c *Conditions, ions []physics.Ion, scale float64, bad *Error, n *Notes) []physics.Ion {
 	if h == nil {
 		return ions
 	}
@@ -52,6 +54,7 @@ func resolveHardness(h *Hardness, c *Conditions, ions []physics.Ion, bad *Error,
 			"0 <= value <= "+number.Shortest(number.Round(*h.Value*maxHardnessMM/mM, 4)))
 		return ions
 	}
+	mM *= scale
 	pair := [2]physics.Ion{{Valence: 2, Concentration: mM}, {Valence: -1, Concentration: 2 * mM}}
 	noteMultivalent(c, HardnessLabel, pair, mM, len(ions))
 	n.Add("medium.hardness %s %s = %s of Ca2+ and Mg2+, counted as Ca2+ (Mg2+ acts alike as a divalent counter-ion in the double layer) with two monovalent anions (chloride or bicarbonate) per ion; their specific adsorption, which lowers or reverses the charge of oxides at alkaline pH, is not modelled, so the barrier is an upper bound",
