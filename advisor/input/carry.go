@@ -35,7 +35,7 @@ const minFitStern, maxFitStern = 1e-3, 1e3
 
 // carryZeta takes a zeta potential measured in another liquid to the
 // product: the Stern capacitance of the material's site model is fitted so
-// that the model's diffuse-layer potential in the measurement liquid equals
+// that the model's slip-plane potential in the measurement liquid equals
 // the measured zeta, and the model with it is evaluated in the product.
 // Without a stated liquid, zeta is taken as measured in the product, and
 // the site model's own value there is kept for comparison. The fitted
@@ -60,8 +60,8 @@ func carryZeta(c *Conditions, meas *measuredIn, n *Notes) {
 		surface.SternCapacitance = math.Pow(10, logC)
 		return surface.State(meas.pH, meas.ions, c.Liquid.Permittivity, meas.tempK)
 	}
-	miss := func(logC float64) float64 { return math.Abs(at(logC).DiffusePotential) - math.Abs(c.Zeta) }
-	model := at(math.Log10(c.Sites.Surface.SternCapacitance)).DiffusePotential
+	miss := func(logC float64) float64 { return math.Abs(at(logC).Zeta) - math.Abs(c.Zeta) }
+	model := at(math.Log10(c.Sites.Surface.SternCapacitance)).Zeta
 	logC, ok := physics.FindRoot(miss, math.Log10(minFitStern), math.Log10(maxFitStern), 1e-6)
 	if !ok || model*c.Zeta <= 0 {
 		n.Add("zeta %s measured at pH %g cannot be matched by the site model (model %s there): used unchanged in the product",
@@ -73,11 +73,11 @@ func carryZeta(c *Conditions, meas *measuredIn, n *Notes) {
 	n.Add("zeta %s measured at pH %g, ionic strength %s, %s degC, carried to the product (pH %g, ionic strength %s): %s, with the Stern capacitance of the site model fitted to the measurement (%s instead of %s)",
 		number.Quantity(c.Zeta*1e3, "mV"), meas.pH, number.Quantity(physics.IonicStrength(meas.ions), "mM"),
 		number.Shortest(number.Round(meas.tempK-physics.CelsiusZero, 4)), c.PH, number.Quantity(c.IonicStrength, "mM"),
-		number.Quantity(st.DiffusePotential*1e3, "mV"), number.Quantity(surface.SternCapacitance, "F/m^2"),
+		number.Quantity(st.Zeta*1e3, "mV"), number.Quantity(surface.SternCapacitance, "F/m^2"),
 		number.Quantity(c.Sites.Surface.SternCapacitance, "F/m^2"))
 	fitted := *c.Sites
 	fitted.Surface.SternCapacitance = surface.SternCapacitance
 	c.Sites = &fitted
-	c.Zeta, c.ZetaSource = st.DiffusePotential, "carried"
+	c.Zeta, c.ZetaSource = st.Zeta, "carried"
 	c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
 }

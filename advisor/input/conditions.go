@@ -92,12 +92,12 @@ func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
 }
 
 // EstimatedPotential is the surface-potential estimate at pH used when zeta
-// is not measured: the diffuse-layer potential of the material's site model
-// in the product's present ions (their H+ and OH- stay those of the present
-// pH), else physics.SurfacePotentialFromPH about the isoelectric point.
+// is not measured: the slip-plane potential (zeta) of the material's site
+// model in the product's present ions (their H+ and OH- stay those of the
+// present pH), else physics.SurfacePotentialFromPH about the isoelectric point.
 func (c *Conditions) EstimatedPotential(pH float64) float64 {
 	if c.Sites != nil {
-		return c.SurfaceState(pH).DiffusePotential
+		return c.SurfaceState(pH).Zeta
 	}
 	return physics.SurfacePotentialFromPH(pH, c.IsoelectricPH, c.StorageTempK)
 }

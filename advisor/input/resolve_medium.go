@@ -1,7 +1,6 @@
 package input
 
 import (
-	"fmt"
 	"math"
 
 	"colloidtriage/advisor/library"
@@ -233,10 +232,11 @@ func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 		carryZeta(c, meas, n)
 	case c.Sites != nil && !math.IsNaN(c.PH):
 		st := c.SurfaceState(c.PH)
-		c.Zeta, c.ZetaSource = st.DiffusePotential, "estimated"
+		c.Zeta, c.ZetaSource = st.Zeta, "estimated"
 		c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
-		n.Add("zeta potential not measured: %s ESTIMATED as the diffuse-layer potential of %s at pH %g in the product's ions (ionic strength %s), surface charge %s; without ion pairs in the Stern layer this potential is an upper bound, measured zeta potentials lie below it (by up to 40 %% at low ionic strength for hematite, Gunnarsson et al. 2001); measure it to confirm",
-			number.Quantity(c.Zeta*1e3, "mV"), c.Sites.Basis, c.PH, number.Quantity(c.IonicStrength, "mM"), number.Quantity(st.Charge, "C/m^2"))
+		n.Add("zeta potential not measured: %s ESTIMATED as the slip-plane potential of %s at pH %g in the product's ions (ionic strength %s), surface charge %s, diffuse-layer potential %s; basic Stern models tend to overestimate measured zeta potentials at low ionic strength (by up to 40 %% for hematite, Gunnarsson et al. 2001); measure it to confirm",
+			number.Quantity(c.Zeta*1e3, "mV"), c.Sites.Basis, c.PH, number.Quantity(c.IonicStrength, "mM"), number.Quantity(st.Charge, "C/m^2"),
+			number.Quantity(st.DiffusePotential*1e3, "mV"))
 	case !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH):
 		c.Zeta = physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK)
 		c.ZetaSource = "estimated"
@@ -252,33 +252,4 @@ func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 		surfaceSign = -1
 	}
 	c.CounterValence = physics.CounterIonValence(c.Ions, surfaceSign)
-}
-
-// resolveSites builds the site-binding surface of a library material in an
-// aqueous medium; a stated isoelectric point replaces a 1-pK surface's
-// point of zero charge (the two coincide without specific adsorption).
-func resolveSites(lib *library.SurfaceSites, iep *float64, aqueous bool) *SurfaceSites {
-	if lib == nil || !aqueous {
-		return nil
-	}
-	s := &SurfaceSites{Model: lib.Model, Surface: physics.SiteSurface{SiteDensity: lib.SiteDensity.Value,
-		PK: lib.PK.Value, SternCapacitance: lib.SternCapacitance.Value}}
-	pkSource := lib.PK.Source
-	var name, pkName string
-	switch lib.Model {
-	case "silica":
-		s.Surface.DeprotonatedCharge = -1
-		name, pkName = "the silica basic Stern model (Behrens & Grier 2001; silanols SiOH = SiO- + H+)", "silanol pK"
-	default:
-		s.Surface.DeprotonatedCharge = -0.5
-		name, pkName = "the 1-pK basic Stern model (Hiemstra, Van Riemsdijk & Bolt 1989)", "point of zero charge"
-		if iep != nil {
-			s.Surface.PK, pkSource = *iep, "particles.isoelectric_ph"
-		}
-	}
-	s.Basis = fmt.Sprintf("%s with site density %s (%s), %s %s (%s), Stern capacitance %s (%s), diffuse layer by the Grahame equation",
-		name, number.Quantity(s.Surface.SiteDensity*1e-18, "nm^-2"), lib.SiteDensity.Source,
-		pkName, number.Shortest(s.Surface.PK), pkSource,
-		number.Quantity(s.Surface.SternCapacitance, "F/m^2"), lib.SternCapacitance.Source)
-	return s
 }

@@ -59,6 +59,14 @@ type SurfaceSites struct {
 	SiteDensity      SourcedValue // 1/m^2
 	PK               SourcedValue // pH
 	SternCapacitance SourcedValue // F/m^2
+	// CationPairLogK and AnionPairLogK are log10 of the ion-pair constants
+	// (L/mol) of monovalent electrolyte cations and anions with the charged
+	// sites; nil where none is sourced (no pairs of that sign).
+	CationPairLogK, AnionPairLogK *SourcedValue
+	// SlipDistance is the distance of the electrokinetic slip plane
+	// outside the head end of the diffuse layer, m; nil where none is
+	// sourced (the two coincide).
+	SlipDistance *SourcedValue
 }
 
 // SitesListing is the SurfaceSites of a MaterialListing, in the library
@@ -200,6 +208,8 @@ const (
 	minHamakerZJ, maxHamakerZJ             = 0.1, 600.0
 	minSitesNm2, maxSitesNm2               = 0.5, 30.0 // proton-binding sites per nm^2
 	minSternFm2, maxSternFm2               = 0.1, 10.0 // Stern capacitance, F/m^2
+	minPairLogK, maxPairLogK               = -5.0, 5.0 // ion-pair constant, log10 L/mol
+	maxSlipNm                              = 5.0       // slip-plane distance, nm
 )
 
 var (
@@ -232,10 +242,14 @@ type sitesYAML struct {
 	SiteDensityNm2   *yamlSourced `yaml:"site_density_per_nm2"`
 	PK               *yamlSourced `yaml:"pk"`
 	SternCapacitance *yamlSourced `yaml:"stern_capacitance_F_m2"`
+	CationPairLogK   *yamlSourced `yaml:"cation_pair_log_k"`
+	AnionPairLogK    *yamlSourced `yaml:"anion_pair_log_k"`
+	SlipDistanceNm   *yamlSourced `yaml:"slip_distance_nm"`
 }
 
-// sites checks a surface_sites block: a model and all three sourced values
-// in range, or nil with the problems recorded.
+// sites checks a surface_sites block: a model and all three required
+// sourced values in range, the optional pair constants and slip distance in
+// range where given, or nil with the problems recorded.
 func (c *checker) sites(y *sitesYAML, key string, line int) *SurfaceSites {
 	if y == nil {
 		return nil
@@ -247,10 +261,15 @@ func (c *checker) sites(y *sitesYAML, key string, line int) *SurfaceSites {
 	if y.SiteDensityNm2 == nil || y.PK == nil || y.SternCapacitance == nil {
 		c.add(line, "material %q: surface_sites needs site_density_per_nm2, pk and stern_capacitance_F_m2", key)
 	}
-	if density == nil || pk == nil || stern == nil || !slices.Contains(siteModels, y.Model.text) {
+	cation := c.sourced(y.CationPairLogK, "surface_sites.cation_pair_log_k", minPairLogK, maxPairLogK, 1)
+	anion := c.sourced(y.AnionPairLogK, "surface_sites.anion_pair_log_k", minPairLogK, maxPairLogK, 1)
+	slip := c.sourced(y.SlipDistanceNm, "surface_sites.slip_distance_nm", 0, maxSlipNm, 1e-9)
+	if density == nil || pk == nil || stern == nil || !slices.Contains(siteModels, y.Model.text) ||
+		(y.CationPairLogK != nil && cation == nil) || (y.AnionPairLogK != nil && anion == nil) || (y.SlipDistanceNm != nil && slip == nil) {
 		return nil
 	}
-	return &SurfaceSites{Model: y.Model.text, SiteDensity: *density, PK: *pk, SternCapacitance: *stern}
+	return &SurfaceSites{Model: y.Model.text, SiteDensity: *density, PK: *pk, SternCapacitance: *stern,
+		CationPairLogK: cation, AnionPairLogK: anion, SlipDistance: slip}
 }
 
 func loadMaterials(fsys fs.FS) (map[string]Material, error) {

@@ -342,6 +342,13 @@ func TestLibraryBrokenFiles(t *testing.T) {
 			[]string{`library/materials.yaml:8: surface_sites.model "two_pk" is not one of`}},
 		{"site density out of range", validMaterials + strings.Replace(validSites, "{value: 5,", "{value: 50,", 1), validLiquids,
 			[]string{"library/materials.yaml:9: surface_sites.site_density_per_nm2 50 is outside"}},
+		{"valid ion pairs and slip plane", validMaterials + validSites +
+			"      cation_pair_log_k: {value: -1, source: \"test\"}\n      anion_pair_log_k: {value: -1, source: \"test\"}\n      slip_distance_nm: {value: 0.5, source: \"test\"}\n",
+			validLiquids, nil},
+		{"pair constant out of range", validMaterials + validSites + "      cation_pair_log_k: {value: 9, source: \"test\"}\n", validLiquids,
+			[]string{"library/materials.yaml:12: surface_sites.cation_pair_log_k 9 is outside"}},
+		{"slip distance out of range", validMaterials + validSites + "      slip_distance_nm: {value: -1, source: \"test\"}\n", validLiquids,
+			[]string{"library/materials.yaml:12: surface_sites.slip_distance_nm -1 is outside"}},
 		{"site value missing", validMaterials + strings.Replace(validSites, "      pk: {value: 9, source: \"test\"}\n", "", 1), validLiquids,
 			[]string{`library/materials.yaml:2: material "grit": surface_sites needs site_density_per_nm2, pk and stern_capacitance_F_m2`}},
 		{"unknown model", validMaterials, strings.Replace(validLiquids, "model: iapws", "model: magic", 1),
