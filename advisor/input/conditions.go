@@ -92,11 +92,16 @@ func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
 }
 
 // EstimatedPotential is the surface-potential estimate at pH used when zeta
-// is not measured: the slip-plane potential (zeta) of the material's site
-// model in the product's present ions (their H+ and OH- stay those of the
-// present pH), else physics.SurfacePotentialFromPH about the isoelectric point.
+// is not measured, in the product's present ions (their H+ and OH- stay
+// those of the present pH): for a material with a site model, the anchored
+// estimate (see anchoredEstimate) or, where that is undefined, the model's
+// slip-plane potential; else physics.SurfacePotentialFromPH about the
+// isoelectric point.
 func (c *Conditions) EstimatedPotential(pH float64) float64 {
 	if c.Sites != nil {
+		if zeta, _, ok := c.anchoredEstimate(pH); ok {
+			return zeta
+		}
 		return c.SurfaceState(pH).Zeta
 	}
 	return physics.SurfacePotentialFromPH(pH, c.IsoelectricPH, c.StorageTempK)

@@ -231,8 +231,18 @@ func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 		n.Add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.Zeta*1e3, "mV"), how, c.Henry)
 		carryZeta(c, meas, n)
 	case c.Sites != nil && !math.IsNaN(c.PH):
+		c.ZetaSource = "estimated"
+		if zeta, reference, ok := c.anchoredEstimate(c.PH); ok {
+			st := c.SurfaceState(c.PH)
+			c.Zeta, c.SurfaceCharge, c.DiffusePotential = zeta, st.Charge, st.DiffusePotential
+			n.Add("zeta potential not measured: %s ESTIMATED: the pH-and-isoelectric-point estimate (%s at pH %g about the zero point %g, taken as measured in %g mM of 1:1 salt) scaled to the product's ions (ionic strength %s) by the ratio of the slip-plane potentials of %s in the two liquids (the model's own level runs two to three times above measured zeta potentials); surface charge %s, diffuse-layer potential %s of the model; measure it to confirm",
+				number.Quantity(c.Zeta*1e3, "mV"), number.Quantity(reference*1e3, "mV"), c.PH, c.ZeroPointPH(), anchorSaltMM,
+				number.Quantity(c.IonicStrength, "mM"), c.Sites.Basis, number.Quantity(c.SurfaceCharge, "C/m^2"),
+				number.Quantity(c.DiffusePotential*1e3, "mV"))
+			break
+		}
 		st := c.SurfaceState(c.PH)
-		c.Zeta, c.ZetaSource = st.Zeta, "estimated"
+		c.Zeta = st.Zeta
 		c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
 		n.Add("zeta potential not measured: %s ESTIMATED as the slip-plane potential of %s at pH %g in the product's ions (ionic strength %s), surface charge %s, diffuse-layer potential %s; basic Stern models tend to overestimate measured zeta potentials at low ionic strength (by up to 40 %% for hematite, Gunnarsson et al. 2001); measure it to confirm",
 			number.Quantity(c.Zeta*1e3, "mV"), c.Sites.Basis, c.PH, number.Quantity(c.IonicStrength, "mM"), number.Quantity(st.Charge, "C/m^2"),
