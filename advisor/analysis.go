@@ -233,11 +233,19 @@ func (e *Engine) analyse(s *input.Sample, nominal *evaluation, r *Report, draws 
 		}
 		maxLL = math.Max(maxLL, out[k].ll)
 	}
+	// When the observations contradict every draw, each draw counts once:
+	// a likelihood many widths outside every prediction measures how far
+	// the model misses, not how plausible a draw is, and would hand the
+	// diagnosis to the one least-bad draw. The report says so and names the
+	// inputs that come closest instead.
+	agree := maxLL >= agreeLogLikelihood
 	weights := make([]float64, draws)
 	for k := range out {
-		weights[k] = math.Exp(out[k].ll - maxLL)
+		weights[k] = 1
+		if agree {
+			weights[k] = math.Exp(out[k].ll - maxLL)
+		}
 	}
-	agree := maxLL >= agreeLogLikelihood
 	a := &Analysis{Draws: draws, Seed: seed, EffectiveDraws: number.Round(uncertainty.EffectiveSize(weights), 3),
 		ObservationsAgree: agree, Inputs: make([]UncertainInput, len(inputs))}
 	for i, in := range inputs {

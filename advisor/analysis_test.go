@@ -288,3 +288,42 @@ func TestDrawsZeroIsNominal(t *testing.T) {
 		t.Error("draws 0 reports analysis fields")
 	}
 }
+
+// With every input held exact, each draw is the nominal evaluation: the
+// draws derive the ions and the zeta potential (carried, estimated or from
+// mobility) the same way Resolve does, so the top cause at draws 0 ranks
+// first in every draw, on every demo.
+func TestExactDrawsAreNominal(t *testing.T) {
+	t.Parallel()
+	e := engine(t)
+	zero := 0
+	for _, dc := range demoCases(t) {
+		s := loadDemo(t, dc.path)
+		s.Analysis = &input.Analysis{Draws: &zero}
+		nominal, err := e.Triage(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		draws := 50
+		s.Analysis = &input.Analysis{Draws: &draws}
+		s.Uncertainty = exactBut(nil)
+		r, err := e.Triage(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		top := nominal.Causes[0]
+		tied := 0
+		for _, c := range nominal.Causes {
+			if c.Score == top.Score {
+				tied++
+			}
+		}
+		got := probability(r, top.ID)
+		if top.ID == "outside_colloidal_physics" {
+			got += r.Analysis.Unexplained
+		}
+		if want := math.Round(1000/float64(tied)) / 1000; math.Abs(got-want) > 1e-9 {
+			t.Errorf("%s: exact draws give %s probability %g, want %g", dc.name, top.ID, got, want)
+		}
+	}
+}

@@ -130,7 +130,7 @@ func (ev *evaluation) inputFacts() {
 	f.SetText("sediment_redisperses", c.Observed.Redisperses)
 	f.SetNumber("viscosity_change_percent", c.Observed.ViscosityChange)
 	f.SetNumber("size_growth_percent", c.Observed.SizeGrowth)
-	f.SetFlag("zeta_measured", c.ZetaSource == "measured" || c.ZetaSource == "mobility")
+	f.SetFlag("zeta_measured", c.ZetaSource == "measured" || c.ZetaSource == "mobility" || c.ZetaSource == "carried")
 	f.SetFlag("has_electrolyte", c.IonicStrength > 0)
 	f.SetNumber("ph", c.PH)
 	f.SetNumber("isoelectric_ph", c.IsoelectricPH)

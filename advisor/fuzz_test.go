@@ -318,12 +318,17 @@ func newRequired(t reflect.Type) reflect.Value {
 
 // fillRequired sets the required numbers of a new struct, and the plain
 // (non-pointer) numbers that are validated even when zero, to the middle of
-// their range.
+// their range, and a required choice to its first value.
 func fillRequired(v reflect.Value) {
 	t := v.Type()
 	for i := range t.NumField() {
 		sf := t.Field(i)
 		tag := sf.Tag.Get("validate")
+		if _, choices, ok := strings.Cut(tag, "oneof="); ok && sf.Type.Kind() == reflect.String && strings.HasPrefix(tag, "required,") {
+			first, _, _ := strings.Cut(choices, " ")
+			v.Field(i).SetString(first)
+			continue
+		}
 		if !strings.HasPrefix(tag, "required,") && sf.Type.Kind() != reflect.Float64 {
 			continue
 		}

@@ -5,6 +5,7 @@ import (
 
 	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
 	"colloidtriage/physics"
 )
 
@@ -26,6 +27,13 @@ func (ev *evaluation) computeInteraction() {
 	if !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH) {
 		ev.set("ph_distance_from_iep", math.Abs(c.PH-c.IsoelectricPH), "|pH - isoelectric pH|")
 	}
+	if !math.IsNaN(c.SurfaceCharge) {
+		ev.set("surface_charge_density", c.SurfaceCharge, "site-binding model of the material (see assumptions) at the product's pH and ions")
+		ev.set("diffuse_layer_potential", c.DiffusePotential*1e3, "site-binding model: Stern-plane potential, Grahame equation in the product's ion mixture")
+		if (c.ZetaSource == "measured" || c.ZetaSource == "mobility") && c.DiffusePotential != 0 {
+			ev.set("zeta_over_model", c.Zeta/c.DiffusePotential, "measured zeta over the site model's diffuse-layer potential in the product")
+		}
+	}
 	if !math.IsNaN(c.Henry) {
 		ev.set("henry_function", c.Henry, "Henry's function used to convert mobility to zeta (see assumptions)")
 	}
@@ -39,7 +47,7 @@ func (ev *evaluation) computeInteraction() {
 		return
 	}
 	ev.set("zeta_potential", c.Zeta*1e3, "zeta potential ("+c.ZetaSource+"), used as the diffuse-layer potential")
-	ev.pair.Potential = c.Zeta
+	ev.pair = ev.pair.WithPotential(c.Zeta).WithIons(c.Ions)
 	ev.addLayers()
 	ev.hasPair = true
 
@@ -58,12 +66,61 @@ func (ev *evaluation) computeInteraction() {
 		ev.hasBarrier, ev.lastBarrier = true, b.Separation
 		ev.set("energy_barrier", b.Energy/kT, "maximum of the total interaction energy (logarithmic scan, Newton refinement)")
 		ev.set("barrier_position", b.Separation*1e9, "separation at the barrier")
+		ev.flagBarrierPosition(b, kappa)
 	} else {
 		ev.set("energy_barrier", 0, "no maximum of the total interaction energy: no barrier")
 	}
 	ev.setSecondaryMinimum(m, kT)
 	ev.kinetics(b)
 	ev.criticalCoagulation()
+	ev.multivalent()
+}
+
+// multivalent reports the far field the ion mixture leaves the double layer
+// and, with a multivalent salt present, that salt's own critical
+// coagulation concentration: the concentration of it at which the highest
+// maximum of the energy vanishes, the other ions kept (bisection in log
+// concentration, 1e-6 to 5000 mM, to 0.1 %).
+func (ev *evaluation) multivalent() {
+	c := ev.cond
+	if len(c.Ions) > 0 {
+		ev.set("far_field_potential", physics.FarFieldPotential(c.Zeta, c.Ions, c.StorageTempK)*1e3,
+			"flat-plate Poisson-Boltzmann far field of the zeta potential in the actual ion mixture")
+	}
+	if c.MultivalentSalt == "" {
+		return
+	}
+	ev.set("multivalent_concentration", c.MultivalentConc, c.MultivalentSalt)
+	kT := physics.Boltzmann * c.StorageTempK
+	margin := func(log10C float64) float64 {
+		if b := remedy.MultivalentPair(ev.pair, c, math.Pow(10, log10C)).Barrier(); b.Found {
+			return b.Energy / kT
+		}
+		return -1
+	}
+	ccc, ok := physics.FindRoot(margin, -6, math.Log10(5000), math.Log10(1.001))
+	if !ok {
+		return
+	}
+	ev.set("multivalent_ccc", math.Pow(10, ccc), "barrier vanishes (highest maximum, chosen model) at this concentration of "+c.MultivalentSalt)
+	ev.set("multivalent_over_ccc", c.MultivalentConc/math.Pow(10, ccc), "multivalent salt over its own critical coagulation concentration")
+}
+
+// flagBarrierPosition reports whether the barrier sits at the closest
+// approach, and says what that and a barrier well inside one Debye length
+// mean for the stability ratio.
+func (ev *evaluation) flagBarrierPosition(b physics.Extremum, kappa float64) {
+	closest := math.Max(physics.MinimumSeparation, 2*ev.pair.StericThickness)
+	atCutoff := b.Separation <= closest*(1+1e-6)
+	ev.set("barrier_at_cutoff", map[bool]float64{true: 1, false: 0}[atCutoff], "barrier position against the closest approach of the energy searches")
+	switch {
+	case atCutoff:
+		ev.notes.Add("the energy still rises towards the closest approach (%s): the barrier is the energy at that cut-off, so it and the stability ratio W depend on where continuum theory is cut off; read W as an order of magnitude",
+			number.Quantity(closest*1e9, "nm"))
+	case !ev.pair.ConstantPotential && kappa*b.Separation < 1:
+		ev.notes.Add("the barrier lies at kappa h = %s, inside one Debye length, where linear superposition is least accurate (it assumes weakly overlapping double layers)",
+			number.Quantity(kappa*b.Separation, ""))
+	}
 }
 
 func (ev *evaluation) setSecondaryMinimum(m physics.Extremum, kT float64) {

@@ -160,7 +160,8 @@ func TestAnchoredSearchesMatchExactRoots(t *testing.T) {
 			tg, _, ok := remedy.For("remove_multivalent_ions")(cs)
 			other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
 			exact := func(conc float64) float64 {
-				return acceptanceMargin(cs, cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs))))
+				p := cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
+				return acceptanceMargin(cs, p.WithIons(c.IonsWithMultivalent(conc)))
 			}
 			checked[2]++
 			root, found := physics.FindRoot(exact, 0, c.MultivalentConc, 1e-12)

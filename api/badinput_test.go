@@ -226,7 +226,11 @@ func requiredMembers(t reflect.Type, leaf string) map[string]any {
 		name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
 		tag := f.Tag.Get("validate")
 		always := f.Type.Kind() == reflect.Float64 // a plain number is validated even when zero
-		if always || strings.HasPrefix(tag, "required,") || tag == "required" {
+		_, choices, oneOf := strings.Cut(tag, "oneof=")
+		switch {
+		case f.Type.Kind() == reflect.String && oneOf && strings.HasPrefix(tag, "required,"):
+			m[name], _, _ = strings.Cut(choices, " ") // a required choice: its first value
+		case always || strings.HasPrefix(tag, "required,") || tag == "required":
 			m[name] = midValue(f)
 		}
 	}

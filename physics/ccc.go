@@ -59,6 +59,13 @@ const (
 // design margin for lasting stability. hint (m) is where the barrier of p
 // is expected, from an earlier Barrier or Extrema; 0 when unknown.
 //
+// The barrier is the highest maximum of the whole curve: with depletion or
+// steric layers the curve can have two, and the one followed from hint may
+// vanish while the other still stands, so whenever the followed maximum
+// falls below the criterion a full scan looks for the highest one, which
+// is taken when it still meets the criterion: the answer does not depend
+// on hint.
+//
 // ok is false when no answer lies in [1e-6, 5000] mol/m^3: then I is 0 if
 // even 1e-6 mol/m^3 leaves the barrier below criterion, and +Inf if
 // 5000 mol/m^3 still leaves it at or above criterion (no attraction, say).
@@ -84,6 +91,13 @@ func CriticalIonicStrength(p Pair, criterion, hint float64) (ionicStrength float
 	margin := func(log10I float64) (float64, float64) {
 		c.kappa = DebyeKappa(math.Pow(10, log10I), p.EpsR, p.TempK)
 		v, h := c.signedBarrier(hint)
+		if hint > 0 && v < floor {
+			// The maximum followed from the last one has fallen below the
+			// criterion: another one of the whole curve may still meet it.
+			if v2, h2 := c.signedBarrier(0); v2 >= floor {
+				v, h = v2, h2
+			}
+		}
 		if h > 0 {
 			hint = h
 		}

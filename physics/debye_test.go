@@ -60,11 +60,12 @@ func TestDebyeLengthSalts(t *testing.T) {
 
 func TestDebyeLengthPureWater(t *testing.T) {
 	t.Parallel()
-	// testdata/reference/REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc].
-	ions := physics.IonsFromPH(7)
+	// testdata/reference/REFERENCES.md: pure water, I = 1e-7 M from Kw at 25 °C -> 961 nm [calc];
+	// the ions of water at pH 7 (pKw 13.995, 997 kg/m^3) give I 0.3 % above 1e-7 M.
 	tk := physics.Kelvin(25)
+	ions := physics.WaterIons(7, tk)
 	got := 1e9 / physics.DebyeKappa(physics.IonicStrength(ions[:]), physics.WaterPermittivity(tk), tk)
-	if e := basicsRelErr(got, 961); e > 1e-3 {
+	if e := basicsRelErr(got, 961); e > 3e-3 {
 		t.Errorf("Debye length of pure water = %.2f nm, want 961 (rel err %.1e)", got, e)
 	}
 	if got := physics.DebyeKappa(0, 2, 298.15); got != 0 {

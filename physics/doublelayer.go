@@ -12,10 +12,8 @@ import "math"
 //	gamma = tanh(z e psi / (4 kT))
 //
 // It holds for kappa a > about 5 and kappa h > about 1, at any potential.
-// z is the valence of a symmetric z:z electrolyte; for an asymmetric one
-// the counter-ion valence and the kappa of the full ionic strength are an
-// approximation (the exact nonlinear double layer depends on both
-// valences).
+// z is the valence of a symmetric z:z electrolyte; an asymmetric mixture
+// takes its exact far field instead (lsaContact).
 //
 // References: G. M. Bell, S. Levine & L. N. McCartney, J. Colloid Interface
 // Sci. 33 (1970) 335; J. Gregory, J. Colloid Interface Sci. 51 (1975) 44;
@@ -25,6 +23,53 @@ func lsaPrefactor(radius, psi, epsR, tempK float64, z int) float64 {
 	thermal := Boltzmann * tempK / (float64(z) * ElementaryCharge)
 	gamma := ReducedSurfacePotential(psi, tempK, z)
 	return 32 * math.Pi * VacuumPermittivity * epsR * radius * thermal * thermal * gamma * gamma
+}
+
+// lsaContact is the contact value, in J, of the linear superposition
+// double layer of p: lsaPrefactor with the counter-ion valence when p has no
+// ion mixture or a z:z one (WithIons), else the same expression written
+// with the far-field potential psi_eff of the mixture,
+//
+//	V = 2 pi eps0 epsR a psi_eff^2 exp(-kappa h),  psi_eff = FarFieldPotential(psi, ions),
+//
+// which for z:z is (4kT/ze) tanh(ze psi/4kT) and so lsaPrefactor itself.
+// psi_eff comes from the pair's memo when it was computed for the present
+// potential (WithIons, WithPotential), else afresh.
+//
+// Reference: as lsaPrefactor; H. Ohshima, Theory of Colloid and Interfacial
+// Electric Phenomena (Elsevier, 2006), ch. 1 (far field of a plate in an
+// arbitrary electrolyte, linear superposition with it).
+func (p Pair) lsaContact() float64 {
+	if p.far.mix.s > 0 {
+		eff := p.far.eff
+		if p.far.psi != p.Potential {
+			eff = p.far.mix.farFieldPotential(p.Potential, p.TempK)
+		}
+		return 2 * math.Pi * VacuumPermittivity * p.EpsR * p.Radius * eff * eff
+	}
+	return lsaPrefactor(p.Radius, p.Potential, p.EpsR, p.TempK, max(p.Valence, 1))
+}
+
+// commonValence returns the valence magnitude shared by every charged ion of
+// positive concentration in ions, 0 when there is none, and whether they
+// share one (a z:z electrolyte, or no charged ion at all).
+func commonValence(ions []Ion) (z int, symmetric bool) {
+	for _, ion := range ions {
+		if ion.Valence == 0 || !(ion.Concentration > 0) {
+			continue
+		}
+		m := ion.Valence
+		if m < 0 {
+			m = -m
+		}
+		switch {
+		case z == 0:
+			z = m
+		case m != z:
+			return 0, false
+		}
+	}
+	return z, true
 }
 
 // ReducedSurfacePotential returns the dimensionless reduced potential

@@ -43,7 +43,11 @@ func FarFieldPotential(psi float64, ions []Ion, tempK float64) float64 {
 	if math.IsNaN(psi) || math.IsInf(psi, 0) || !(tempK > 0 && tempK <= math.MaxFloat64) {
 		panic("physics: FarFieldPotential needs a finite psi and tempK > 0")
 	}
-	m := newPBMixture(ions, "FarFieldPotential")
+	return newPBMixture(ions, "FarFieldPotential").farFieldPotential(psi, tempK)
+}
+
+// farFieldPotential is FarFieldPotential of the mixture m, in V.
+func (m pbMixture) farFieldPotential(psi, tempK float64) float64 {
 	if m.s == 0 || psi == 0 {
 		return psi
 	}

@@ -21,8 +21,15 @@ const MinimumSeparation = 0.2e-9
 //     Kappa = 0 switches the double layer off.
 //   - Kappa (1/m, >= 0): inverse Debye length, 0 without electrolyte.
 //   - EpsR (> 0) relative permittivity and TempK (K, > 0) temperature.
-//   - Valence: counter-ion valence for the linear superposition double layer;
-//     0 is read as 1.
+//   - Valence: counter-ion valence for the linear superposition double layer
+//     when Ions is nil (a z:z electrolyte); 0 is read as 1.
+//   - the ion mixture, set by WithIons: the electroneutral ions of the
+//     liquid (mol/m^3; only the ratios of the concentrations matter), whose
+//     exact flat-plate far field (FarFieldPotential) the linear
+//     superposition uses in place of the z:z Gouy–Chapman one; a mixture
+//     whose charged ions share one valence magnitude z is a z:z
+//     electrolyte. Kappa stays the caller's, so scaling every concentration
+//     needs no new mixture (WithIonicStrength).
 //   - Retarded: Gregory's retarded van der Waals (wavelength 100 nm) instead of
 //     Hamaker's exact non-retarded expression.
 //   - ConstantPotential: Hogg–Healy–Fuerstenau instead of linear
@@ -44,6 +51,48 @@ type Pair struct {
 	ConstantPotential                              bool
 	DepletionRange, DepletionDensity               float64
 	StericThickness                                float64
+
+	far farMemo // the ion mixture of WithIons and its far field at one potential
+}
+
+// farMemo holds the asymmetric ion mixture of a Pair (zero for none or a
+// z:z electrolyte, whose far field is Gouy–Chapman's) and its far-field
+// potential eff (V) at the surface potential psi (V), so that each pair
+// computes it once.
+type farMemo struct {
+	mix      pbMixture
+	psi, eff float64
+}
+
+// WithIons returns a copy of p whose linear superposition double layer uses
+// the far field of the electroneutral ion mixture ions (see Pair), computed
+// here once for the present Potential; a z:z mixture sets Valence to its z.
+// It panics as FarFieldPotential on an invalid or non-electroneutral
+// mixture or a non-finite Potential.
+func (p Pair) WithIons(ions []Ion) Pair {
+	p.far = farMemo{}
+	z, symmetric := commonValence(ions)
+	if symmetric {
+		if z > 0 {
+			p.Valence = z
+		}
+		return p
+	}
+	p.far.mix = newPBMixture(ions, "Pair.WithIons")
+	return p.WithPotential(p.Potential)
+}
+
+// WithPotential returns a copy of p at surface potential psi (V), with the
+// far field of its ion mixture computed once for it.
+func (p Pair) WithPotential(psi float64) Pair {
+	p.Potential = psi
+	if p.far.mix.s > 0 {
+		if math.IsNaN(psi) || math.IsInf(psi, 0) {
+			panic("physics: Pair.WithPotential needs a finite potential")
+		}
+		p.far.psi, p.far.eff = psi, p.far.mix.farFieldPotential(psi, p.TempK)
+	}
+	return p
 }
 
 // Extremum is a stationary point of the interaction energy: Energy in J at
@@ -166,10 +215,6 @@ func (p Pair) curve() pairCurve {
 		!(p.StericThickness >= 0 && p.StericThickness <= maxF) {
 		panic("physics: invalid Pair (need finite Radius, EpsR, TempK > 0; Kappa, depletion and steric fields >= 0; Valence >= 0)")
 	}
-	z := p.Valence
-	if z == 0 {
-		z = 1
-	}
 	c := pairCurve{
 		radius:            p.Radius,
 		hamaker:           p.Hamaker,
@@ -183,7 +228,7 @@ func (p Pair) curve() pairCurve {
 	if p.ConstantPotential {
 		c.edlContact = hhfPrefactor(p.Radius, p.Potential, p.EpsR)
 	} else {
-		c.edlContact = lsaPrefactor(p.Radius, p.Potential, p.EpsR, p.TempK, z)
+		c.edlContact = p.lsaContact()
 	}
 	c.depletionPrefactor = p.DepletionDensity * c.kT * math.Pi / 12
 	return c

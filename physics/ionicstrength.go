@@ -9,26 +9,6 @@ type Ion struct {
 	Concentration float64
 }
 
-// IonsFromPH returns the hydronium (H+) and hydroxide (OH-) ions of water at
-// the given pH, in mol/m^3: [H+] = 10^(3-pH) and [OH-] = 10^(3-(14-pH)),
-// taking activities as concentrations and pKw = 14.0, its value at 25 °C
-// (13.995; it falls to about 13.26 at 50 °C). The counter-ions of the acid or base
-// that set the pH are not included.
-//
-// It panics on a non-finite pH.
-//
-// Reference: pKw from W. L. Marshall and E. U. Franck, J. Phys. Chem. Ref.
-// Data 10, 295 (1981).
-func IonsFromPH(pH float64) [2]Ion {
-	if !(math.Abs(pH) <= math.MaxFloat64) {
-		panic("physics: IonsFromPH needs a finite pH")
-	}
-	return [2]Ion{
-		{Valence: 1, Concentration: math.Pow(10, 3-pH)},
-		{Valence: -1, Concentration: math.Pow(10, 3-(14-pH))},
-	}
-}
-
 // IonicStrength returns I = 1/2 sum c_i z_i^2, in mol/m^3, of ions whose
 // concentrations are in mol/m^3. An empty list gives 0.
 //

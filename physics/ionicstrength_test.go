@@ -7,31 +7,6 @@ import (
 	"colloidtriage/physics"
 )
 
-func TestIonsFromPH(t *testing.T) {
-	t.Parallel()
-	// Kw = 1e-14 at 25 °C (Marshall & Franck 1981) [pub]; testdata/reference/REFERENCES.md uses
-	// I = 1e-7 M (1e-4 mol/m^3) for pure water.
-	cases := []struct {
-		pH, wantH, wantOH, wantI float64
-	}{
-		{7, 1e-4, 1e-4, 1e-4},
-		{3, 1, 1e-8, 0.5 + 0.5e-8},
-		{11, 1e-8, 1, 0.5 + 0.5e-8},
-	}
-	for _, c := range cases {
-		ions := physics.IonsFromPH(c.pH)
-		if ions[0].Valence != 1 || ions[1].Valence != -1 {
-			t.Errorf("IonsFromPH(%v) valences %+v", c.pH, ions)
-		}
-		if basicsRelErr(ions[0].Concentration, c.wantH) > 1e-12 || basicsRelErr(ions[1].Concentration, c.wantOH) > 1e-12 {
-			t.Errorf("IonsFromPH(%v) = %+v, want H %g OH %g", c.pH, ions, c.wantH, c.wantOH)
-		}
-		if got := physics.IonicStrength(ions[:]); basicsRelErr(got, c.wantI) > 1e-12 {
-			t.Errorf("IonicStrength at pH %v = %g, want %g", c.pH, got, c.wantI)
-		}
-	}
-}
-
 func TestIonicStrengthEmptyAndPanics(t *testing.T) {
 	t.Parallel()
 	if got := physics.IonicStrength(nil); got != 0 {
@@ -41,7 +16,6 @@ func TestIonicStrengthEmptyAndPanics(t *testing.T) {
 		func() { physics.IonicStrength([]physics.Ion{{Valence: 1, Concentration: -1}}) },
 		func() { physics.IonicStrength([]physics.Ion{{Valence: 1, Concentration: math.NaN()}}) },
 		func() { physics.Salt{CationValence: 1, AnionValence: 1, CationsPerUnit: 1, AnionsPerUnit: 1}.Ions(-1) },
-		func() { physics.IonsFromPH(math.Inf(1)) },
 		func() { physics.IonicStrengthFromConductivity(-1) },
 	} {
 		func() {

@@ -41,17 +41,22 @@ type Conditions struct {
 	Ions                  []physics.Ion
 	IonicStrength         float64 // mol/m^3
 	CounterValence        int
-	MultivalentSalt       string  // formula of the multivalent salt present, if any
-	MultivalentConc       float64 // mol/m^3
-	MultivalentIonicShare float64 // ionic strength per mol/m^3 of that salt
+	MultivalentSalt       string     // formula of the multivalent salt present, if any
+	MultivalentConc       float64    // mol/m^3
+	MultivalentIonicShare float64    // ionic strength per mol/m^3 of that salt
+	MultivalentAt         int        // index of that salt's cation in Ions, its anion next
+	MultivalentUnit       [2]float64 // cations and anions per unit of that salt
 	Models                *Models
 
 	PH, IsoelectricPH float64
-	Zeta              float64 // V used for the double layer
-	ZetaSource        string  // measured, mobility, estimated or ""
-	Henry             float64 // Henry's function when zeta came from mobility
-	Hamaker           float64 // J
-	HamakerSource     string  // request, library, estimated (Tabor-Winterton) or default
+	Sites             *SurfaceSites // site-binding surface of the material, nil without one
+	SurfaceCharge     float64       // C/m^2 of the site model in the product, NaN without it
+	DiffusePotential  float64       // V, diffuse-layer potential of the site model in the product, NaN without it
+	Zeta              float64       // V used for the double layer
+	ZetaSource        string        // measured, mobility, carried (from another liquid), estimated or ""
+	Henry             float64       // Henry's function when zeta came from mobility
+	Hamaker           float64       // J
+	HamakerSource     string        // request, library, estimated (Tabor-Winterton) or default
 	// ParticlePermittivity and ParticleIndex are what the Tabor-Winterton
 	// estimate used, NaN for any other source.
 	ParticlePermittivity, ParticleIndex float64
@@ -68,6 +73,49 @@ type Conditions struct {
 
 	Observed Observed
 	Criteria Acceptance
+
+	derived *derivation // what the ions and zeta potential were derived from, for Rederive
+}
+
+// SurfaceSites is the single-site basic Stern surface of the material
+// (physics.SiteSurface) and what the report says about it.
+type SurfaceSites struct {
+	Surface physics.SiteSurface
+	Model   string // one_pk or silica
+	Basis   string // the model, its parameters and their sources, for the assumptions
+}
+
+// SurfaceState is the equilibrium of the material's site-binding surface in
+// the product's ions at pH (Sites must be set).
+func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
+	return c.Sites.Surface.State(pH, c.Ions, c.Liquid.Permittivity, c.StorageTempK)
+}
+
+// EstimatedPotential is the surface-potential estimate at pH used when zeta
+// is not measured, in the product's present ions (their H+ and OH- stay
+// those of the present pH): for a material with a site model, the anchored
+// estimate (see anchoredEstimate) or, where that is undefined, the model's
+// slip-plane potential; else physics.SurfacePotentialFromPH about the
+// isoelectric point.
+func (c *Conditions) EstimatedPotential(pH float64) float64 {
+	if c.Sites != nil {
+		if zeta, _, ok := c.anchoredEstimate(pH); ok {
+			return zeta
+		}
+		return c.SurfaceState(pH).Zeta
+	}
+	return physics.SurfacePotentialFromPH(pH, c.IsoelectricPH, c.StorageTempK)
+}
+
+// ZeroPointPH is the pH at which EstimatedPotential changes sign: the point
+// of zero charge of a 1-pK site model, else the isoelectric point (NaN when
+// unknown). A silica surface is negative at every pH above about 2, so its
+// isoelectric point stands for it.
+func (c *Conditions) ZeroPointPH() float64 {
+	if c.Sites != nil && c.Sites.Model == "one_pk" {
+		return c.Sites.Surface.PK
+	}
+	return c.IsoelectricPH
 }
 
 // LiquidState is the continuous phase at the storage temperature, in SI
@@ -150,6 +198,16 @@ func (c *Conditions) IonicStrengthPerMole() float64 {
 		return 1
 	}
 	return c.MultivalentIonicShare
+}
+
+// IonsWithMultivalent returns Ions with the multivalent salt at conc
+// (mol/m^3) instead of its present concentration, the others unchanged.
+func (c *Conditions) IonsWithMultivalent(conc float64) []physics.Ion {
+	ions := append([]physics.Ion(nil), c.Ions...)
+	for k, unit := range c.MultivalentUnit {
+		ions[c.MultivalentAt+k].Concentration = conc * unit
+	}
+	return ions
 }
 
 // LargestRadius is the radius, m, of the largest particles: half the

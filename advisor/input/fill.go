@@ -5,7 +5,6 @@ import (
 	"math"
 
 	"colloidtriage/advisor/library"
-	"colloidtriage/advisor/number"
 	"colloidtriage/physics"
 )
 
@@ -23,7 +22,7 @@ func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidSt
 	if !(T >= lo && T <= hi) {
 		bad := &Error{}
 		bad.add(field, fmt.Sprintf("outside the range in which the properties of %s are known", l.Name), "degC",
-			fmt.Sprintf("%g <= value <= %g", number.Round(lo-physics.CelsiusZero, 4), number.Round(hi-physics.CelsiusZero, 4)))
+			celsiusRange(lo, hi))
 		return LiquidState{}, bad
 	}
 	p, lines := l.Properties(T)
@@ -44,6 +43,7 @@ func liquidAt(l library.Liquid, tempC float64, field string, n *Notes) (LiquidSt
 type materialProps struct {
 	kind, phase                                 string
 	density, refrIndex, epsR, iep, hamakerWater float64
+	sites                                       *library.SurfaceSites
 }
 
 func resolveMaterial(lib *library.Library, p *Particles, bad *Error) (materialProps, bool) {
@@ -59,7 +59,7 @@ func resolveMaterial(lib *library.Library, p *Particles, bad *Error) (materialPr
 	}
 	out := materialProps{kind: m.Kind, phase: m.Phase, density: m.Density.Value,
 		refrIndex: valueOrNaN(m.RefractiveIndex), epsR: valueOrNaN(m.RelativePermittivity),
-		iep: valueOrNaN(m.IsoelectricPH), hamakerWater: valueOrNaN(m.HamakerWater)}
+		iep: valueOrNaN(m.IsoelectricPH), hamakerWater: valueOrNaN(m.HamakerWater), sites: m.SurfaceSites}
 	return out, true
 }
 

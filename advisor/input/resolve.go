@@ -17,7 +17,7 @@ import (
 func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	bad := &Error{}
 	c := &Conditions{Symptom: s.Symptom, Product: s.Product, PH: math.NaN(), IsoelectricPH: math.NaN(), Zeta: math.NaN(),
-		Henry: math.NaN()}
+		Henry: math.NaN(), SurfaceCharge: math.NaN(), DiffusePotential: math.NaN()}
 	p, m := &s.Particles, &s.Medium
 
 	mat, hasMat := resolveMaterial(lib, p, bad)
@@ -51,7 +51,7 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	}
 	c.VolumeFraction = valueOr(p.VolumeFraction, volumeFractionDefault, n)
 
-	resolveElectrolyte(m, c, bad, n)
+	resolveElectrolyte(m, "/medium", c, 1, bad, n)
 	if liquidOK && len(bad.Problems) == before {
 		resolveFreezing(lib.Liquids[c.Liquid.Key], mediumT, c, bad, n)
 	}
@@ -59,6 +59,8 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	if m.PH != nil {
 		c.PH = *m.PH
 	}
+	c.Sites = resolveSites(mat.sites, p.IsoelectricPH, c.Liquid.Aqueous)
+	meas := resolveMeasuredIn(p.ZetaMeasuredIn, c, bad)
 	resolveHamaker(p, c, mat, n)
 	resolveStorage(s, c, bad, n)
 	resolveStabilizer(s.Stabilizer, m.FreePolymer, c, n)
@@ -69,7 +71,8 @@ func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	if err := bad.orNil(); err != nil {
 		return nil, err
 	}
-	resolveZeta(p, c, n)
+	c.derived = &derivation{medium: *m, particles: *p, sites: c.Sites, measuredIn: meas, iepStated: p.IsoelectricPH != nil}
+	resolveZeta(p, meas, c, n)
 	return c, nil
 }
 

@@ -69,70 +69,118 @@ func joinKeys(keys []string) string {
 }
 
 // resolveElectrolyte sums the ions of the stated salts (or takes the stated
-// ionic strength or its estimate from conductivity), adds H+ or OH- outside
-// pH 4-10, and floors aqueous media at the autoionisation of water.
-func resolveElectrolyte(m *Medium, c *Conditions, bad *Error, n *Notes) {
+// ionic strength or its estimate from conductivity) and, in an aqueous
+// medium with a stated pH, adds the H+ and OH- of water at that pH with the
+// monovalent counter-ion of the acid or base that set it, so that the
+// mixture stays electroneutral and changes smoothly with pH. Without a pH,
+// an aqueous medium without salts holds the ions of neutral water, and one
+// with salts is floored at their ionic strength. at is the JSON pointer of
+// the medium, for problems. scale multiplies every stated concentration
+// (1 in Resolve; a Monte Carlo draw's factor in Rederive), and the ions of
+// water too when no salt is stated (then they stand for the unstated
+// background).
+func resolveElectrolyte(m *Medium, at string, c *Conditions, scale float64, bad *Error, n *Notes) {
 	var ions []physics.Ion
+	c.MultivalentSalt, c.MultivalentConc, c.MultivalentAt, c.MultivalentIonicShare = "", 0, 0, 0
+	c.MultivalentUnit = [2]float64{}
 	for i, el := range m.Electrolytes {
-		conc := *el.ConcentrationMM // mM = mol/m^3
+		conc := *el.ConcentrationMM * scale // mM = mol/m^3
 		switch {
 		case el.Formula != "" && (el.CationValence != nil || el.AnionValence != nil):
-			bad.add(pointerf("/medium/electrolytes/%d", i), "give either formula or cation_valence and anion_valence, not both", "", "")
+			bad.add(pointerf("%s/electrolytes/%d", at, i), "give either formula or cation_valence and anion_valence, not both", "", "")
+		case el.Formula != "" && isBuffer(el.Formula):
+			ions = append(ions, bufferIons(el.Formula, bufferSalts[el.Formula], conc, m.PH, n)...)
 		case el.Formula != "":
 			salt, err := physics.ParseSalt(el.Formula)
 			if err != nil {
-				bad.add(pointerf("/medium/electrolytes/%d/formula", i), "unknown or unbalanced salt formula", "",
-					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2")
+				bad.add(pointerf("%s/electrolytes/%d/formula", at, i), "unknown or unbalanced salt formula", "",
+					"a neutral salt of common ions, e.g. NaCl, CaCl2, MgSO4, Na2SO4, AlCl3, Ca(NO3)2, or a buffer salt: "+bufferList)
 				continue
 			}
 			pair := salt.Ions(conc)
+			noteMultivalent(c, el.Formula, pair, conc, len(ions))
 			ions = append(ions, pair[:]...)
-			noteMultivalent(c, el.Formula, pair, conc)
 		case el.CationValence != nil && el.AnionValence != nil:
 			pair, err := physics.SymmetricIons(*el.CationValence, *el.AnionValence, conc)
 			if err != nil {
-				bad.add(pointerf("/medium/electrolytes/%d", i), err.Error(), "", "valences 1 to 4")
+				bad.add(pointerf("%s/electrolytes/%d", at, i), err.Error(), "", "valences 1 to 4")
 				continue
 			}
+			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc, len(ions))
 			ions = append(ions, pair[:]...)
-			noteMultivalent(c, formatValences(*el.CationValence, *el.AnionValence), pair, conc)
 		default:
-			bad.add(pointerf("/medium/electrolytes/%d", i), "each electrolyte needs a formula or both valences", "", "")
+			bad.add(pointerf("%s/electrolytes/%d", at, i), "each electrolyte needs a formula or both valences", "", "")
 		}
 	}
 	switch {
 	case len(m.Electrolytes) > 0:
 	case m.IonicStrengthMM != nil:
-		ions = append(ions, monovalent(*m.IonicStrengthMM)...)
+		ions = append(ions, monovalent(*m.IonicStrengthMM*scale)...)
 		n.Add("medium.ionic_strength_mM given: treated as a 1:1 electrolyte for the counter-ion valence")
 	case m.ConductivityUSCm != nil:
-		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm * 1e-4)
+		is := physics.IonicStrengthFromConductivity(*m.ConductivityUSCm*1e-4) * scale
 		ions = append(ions, monovalent(is)...)
 		n.Add("ionic strength %s ESTIMATED from conductivity (Russell 1976 relation), treated as 1:1",
 			number.Quantity(is, "mM"))
 	}
-	if m.PH != nil && (*m.PH < 4 || *m.PH > 10) {
-		// The acid or base that set the pH brings its own monovalent
-		// counter-ion, so the ionic strength is that of a 1:1 salt at the
-		// concentration of the excess H+ or OH-.
-		pair := physics.IonsFromPH(*m.PH)
-		excess := math.Max(pair[0].Concentration, pair[1].Concentration)
-		ions = append(ions, monovalent(excess)...)
-		n.Text("pH " + number.Shortest(*m.PH) + " is outside 4-10: " + number.Quantity(excess, "mM") +
-			" of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength")
-	}
+	ions = resolveHardness(m.Hardness, c, ions, scale, bad, n)
 	if len(m.Electrolytes) > 0 && (m.IonicStrengthMM != nil || m.ConductivityUSCm != nil) {
 		n.Add("medium.electrolytes given: ionic_strength_mM and conductivity_uS_cm ignored")
 	}
+	salts := physics.IonicStrength(ions)
+	if c.Liquid.Aqueous && (m.PH != nil || salts == 0) {
+		water := waterIons(m.PH, c.StorageTempK, salts, n)
+		if salts == 0 && scale != 1 {
+			for i := range water {
+				water[i].Concentration *= scale
+			}
+		}
+		ions = append(ions, water...)
+	}
 	c.Ions = ions
 	c.IonicStrength = physics.IonicStrength(ions)
-	if c.Liquid.Aqueous && c.IonicStrength < AutoionisationMolM3 {
+	if c.Liquid.Aqueous && m.PH == nil && c.IonicStrength < AutoionisationMolM3 {
 		c.IonicStrength = AutoionisationMolM3
-		n.Add("no electrolyte stated: ionic strength floored at %s, the autoionisation of neutral water", number.Quantity(AutoionisationMolM3, "mM"))
+		n.Add("no pH stated and salts below the autoionisation of water: ionic strength floored at %s", number.Quantity(AutoionisationMolM3, "mM"))
 	}
 	if !c.Liquid.Aqueous && c.IonicStrength > 0 {
 		n.Add("electrolyte in a non-aqueous liquid: ions assumed fully dissociated, an upper bound on screening")
 	}
+}
+
+// acidBaseNoteShare is the share of the ionic strength above which the ions
+// of water and of the acid or base that set the pH are named in a note.
+const acidBaseNoteShare = 0.01
+
+// waterIons returns the H+ and OH- of water at pH (neutral water at the
+// temperature when pH is nil) and tempK, with the monovalent counter-ion of
+// the acid or base that set the pH (the excess of H+ over OH-, or of OH-
+// over H+). pKw is taken at tempK, kept within 0-150 degC, the range of
+// physics.WaterPKw. salts is the ionic strength of the other ions, for the
+// note.
+func waterIons(pH *float64, tempK, salts float64, n *Notes) []physics.Ion {
+	tK := math.Min(math.Max(tempK, physics.Kelvin(0)), physics.Kelvin(150))
+	at := physics.WaterPKw(tK) / 2
+	if pH != nil {
+		at = *pH
+	}
+	water := physics.WaterIons(at, tK)
+	h, oh := water[0].Concentration, water[1].Concentration
+	ions := water[:]
+	if excess := h - oh; excess > 0 {
+		ions = append(ions, physics.Ion{Valence: -1, Concentration: excess})
+	} else if excess < 0 {
+		ions = append(ions, physics.Ion{Valence: 1, Concentration: -excess})
+	}
+	added := physics.IonicStrength(ions)
+	switch {
+	case salts == 0 && pH == nil:
+		n.Add("no electrolyte and no pH stated: the H+ and OH- of neutral water only, ionic strength %s", number.Quantity(added, "mM"))
+	case salts == 0 || added > acidBaseNoteShare*(salts+added):
+		n.Add("pH %s: %s of H+ or OH- with a monovalent counter-ion of the acid or base added to the ionic strength (pKw %s at the temperature)",
+			number.Shortest(at), number.Quantity(math.Max(h, oh), "mM"), number.Shortest(number.Round(physics.WaterPKw(tK), 4)))
+	}
+	return ions
 }
 
 func monovalent(conc float64) []physics.Ion {
@@ -140,11 +188,13 @@ func monovalent(conc float64) []physics.Ion {
 }
 
 // noteMultivalent remembers the most concentrated salt with an ion of
-// valence above 1, for the multivalent-ion cause and its remedy.
-func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64) {
+// valence above 1, for the multivalent-ion cause and its remedy; at is the
+// index its two ions will take in Conditions.Ions.
+func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc float64, at int) {
 	multi := pair[0].Valence > 1 || pair[1].Valence < -1
 	if multi && conc > 0 && conc >= c.MultivalentConc {
-		c.MultivalentSalt, c.MultivalentConc = label, conc
+		c.MultivalentSalt, c.MultivalentConc, c.MultivalentAt = label, conc, at
+		c.MultivalentUnit = [2]float64{math.Round(pair[0].Concentration / conc), math.Round(pair[1].Concentration / conc)}
 		c.MultivalentIonicShare = physics.IonicStrength(pair[:]) / conc
 	}
 }
@@ -152,14 +202,16 @@ func noteMultivalent(c *Conditions, label string, pair [2]physics.Ion, conc floa
 // resolveZeta chooses the surface potential for the double layer: measured
 // zeta, zeta from mobility by Henry's equation, or an estimate from pH and
 // the isoelectric point, in that order.
-func resolveZeta(p *Particles, c *Conditions, n *Notes) {
+func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 	kappa := physics.DebyeKappa(c.IonicStrength, c.Liquid.Permittivity, c.StorageTempK)
 	switch {
 	case p.ZetaMV != nil && p.Mobility != nil:
 		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
 		n.Add("both zeta_mV and mobility given: the measured zeta_mV is used")
+		carryZeta(c, meas, n)
 	case p.ZetaMV != nil:
 		c.Zeta, c.ZetaSource = *p.ZetaMV*1e-3, "measured"
+		carryZeta(c, meas, n)
 	case p.Mobility != nil:
 		mu := *p.Mobility * 1e-8 // um cm/(V s) to m^2/(V s)
 		model := EffectiveModels(c.Models).ZetaFromMobility
@@ -177,10 +229,28 @@ func resolveZeta(p *Particles, c *Conditions, n *Notes) {
 		c.Zeta = physics.ZetaHenry(mu, c.Liquid.Viscosity, c.Liquid.Permittivity, c.Henry)
 		c.ZetaSource = "mobility"
 		n.Add("zeta potential %s from mobility by %s, f = %.4g", number.Quantity(c.Zeta*1e3, "mV"), how, c.Henry)
+		carryZeta(c, meas, n)
+	case c.Sites != nil && !math.IsNaN(c.PH):
+		c.ZetaSource = "estimated"
+		if zeta, reference, ok := c.anchoredEstimate(c.PH); ok {
+			st := c.SurfaceState(c.PH)
+			c.Zeta, c.SurfaceCharge, c.DiffusePotential = zeta, st.Charge, st.DiffusePotential
+			n.Add("zeta potential not measured: %s ESTIMATED: the pH-and-isoelectric-point estimate (%s at pH %g about the zero point %g, taken as measured in %g mM of 1:1 salt) scaled to the product's ions (ionic strength %s) by the ratio of the slip-plane potentials of %s in the two liquids (the model's own level runs two to three times above measured zeta potentials); surface charge %s, diffuse-layer potential %s of the model; measure it to confirm",
+				number.Quantity(c.Zeta*1e3, "mV"), number.Quantity(reference*1e3, "mV"), c.PH, c.ZeroPointPH(), anchorSaltMM,
+				number.Quantity(c.IonicStrength, "mM"), c.Sites.Basis, number.Quantity(c.SurfaceCharge, "C/m^2"),
+				number.Quantity(c.DiffusePotential*1e3, "mV"))
+			break
+		}
+		st := c.SurfaceState(c.PH)
+		c.Zeta = st.Zeta
+		c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
+		n.Add("zeta potential not measured: %s ESTIMATED as the slip-plane potential of %s at pH %g in the product's ions (ionic strength %s), surface charge %s, diffuse-layer potential %s; basic Stern models tend to overestimate measured zeta potentials at low ionic strength (by up to 40 %% for hematite, Gunnarsson et al. 2001); measure it to confirm",
+			number.Quantity(c.Zeta*1e3, "mV"), c.Sites.Basis, c.PH, number.Quantity(c.IonicStrength, "mM"), number.Quantity(st.Charge, "C/m^2"),
+			number.Quantity(st.DiffusePotential*1e3, "mV"))
 	case !math.IsNaN(c.IsoelectricPH) && !math.IsNaN(c.PH):
 		c.Zeta = physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK)
 		c.ZetaSource = "estimated"
-		n.Add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis); measure it to confirm",
+		n.Add("zeta potential not measured: %s ESTIMATED from pH %g and isoelectric point %g (see basis; no site-binding parameters for this material, so the estimate does not fall with ionic strength); measure it to confirm",
 			number.Quantity(c.Zeta*1e3, "mV"), c.PH, c.IsoelectricPH)
 	default:
 		n.Add("no zeta potential, mobility, or pH with isoelectric point: electrostatic interaction not evaluated")

@@ -147,12 +147,8 @@ func resolveFreezing(l library.Liquid, mediumT float64, c *Conditions, bad *Erro
 	}
 	T := physics.Kelvin(mediumT)
 	if T < c.FreezingK || T > c.Liquid.BoilingK {
-		valid := "value >= " + number.Shortest(number.Round(c.FreezingK-physics.CelsiusZero, 4))
-		if !math.IsInf(c.Liquid.BoilingK, 1) {
-			valid = number.Shortest(number.Round(c.FreezingK-physics.CelsiusZero, 4)) + " <= value <= " +
-				number.Shortest(number.Round(c.Liquid.BoilingK-physics.CelsiusZero, 4))
-		}
-		bad.add("/medium/temperature_c", l.Name+" is not liquid there at 1 atm (below its freezing point or above its boiling point)", "degC", valid)
+		bad.add("/medium/temperature_c", l.Name+" is not liquid there at 1 atm (below its freezing point or above its boiling point)", "degC",
+			celsiusRange(c.FreezingK, c.Liquid.BoilingK))
 	}
 }
 
@@ -179,4 +175,16 @@ func resolveProcessStep(st *Storage, c *Conditions, bad *Error, n *Notes) {
 	c.Shear, c.ProcessStep = step.TypicalRate(), step.Name
 	n.Add("shear rate %s from storage.process_step %s: geometric mean of its typical %s to %s 1/s (%s)",
 		number.Quantity(c.Shear, "1/s"), step.Name, number.Shortest(step.MinRate), number.Shortest(step.MaxRate), step.Source)
+}
+
+// celsiusRange is the valid range of a temperature field between loK and
+// hiK (+Inf: no upper bound), in degC to 0.01 K, each bound rounded towards
+// the inside so that every value it admits is valid: neutral water's own
+// ions put its freezing point 1e-7 K below 0 degC, printed as 0.
+func celsiusRange(loK, hiK float64) string {
+	lo := number.Shortest(number.Decimals(loK-physics.CelsiusZero, 2, math.Ceil))
+	if math.IsInf(hiK, 1) {
+		return "value >= " + lo
+	}
+	return lo + " <= value <= " + number.Shortest(number.Decimals(hiK-physics.CelsiusZero, 2, math.Floor))
 }

@@ -51,6 +51,17 @@ type Particles struct {
 	SolubilityMolM3   *float64    `json:"solubility_mol_m3,omitempty" validate:"omitempty,gte=0,lte=1e4" unit:"mol/m^3"`
 	MolarVolumeCm3Mol *float64    `json:"molar_volume_cm3_mol,omitempty" validate:"omitempty,gte=1,lte=5000" unit:"cm^3/mol"`
 	TensionMNm        *float64    `json:"interfacial_tension_mN_m,omitempty" validate:"omitempty,gte=0.01,lte=100" unit:"mN/m"`
+	ZetaMeasuredIn    *ZetaLiquid `json:"zeta_measured_in,omitempty"`
+}
+
+// ZetaLiquid is the liquid a zeta potential or mobility was measured in,
+// when it is not the product itself (a diluted sample, a standard
+// electrolyte): its pH, its salts or ionic strength, its temperature.
+type ZetaLiquid struct {
+	PH              *float64      `json:"ph" validate:"required,gte=0,lte=14" unit:"pH"`
+	Electrolytes    []Electrolyte `json:"electrolytes,omitempty" validate:"omitempty,max=20,dive"`
+	IonicStrengthMM *float64      `json:"ionic_strength_mM,omitempty" validate:"omitempty,gte=0,lte=5000" unit:"mM"`
+	TemperatureC    *float64      `json:"temperature_c,omitempty" validate:"omitempty,gte=-60,lte=300" unit:"degC"`
 }
 
 // SizeClass is one class of an explicit size distribution.
@@ -69,6 +80,7 @@ type Medium struct {
 	RefractiveIndex  *float64      `json:"refractive_index,omitempty" validate:"omitempty,gte=1,lte=3" unit:"1"`
 	PH               *float64      `json:"ph,omitempty" validate:"omitempty,gte=0,lte=14" unit:"pH"`
 	Electrolytes     []Electrolyte `json:"electrolytes,omitempty" validate:"omitempty,max=20,dive"`
+	Hardness         *Hardness     `json:"hardness,omitempty"`
 	IonicStrengthMM  *float64      `json:"ionic_strength_mM,omitempty" validate:"omitempty,gte=0,lte=5000" unit:"mM"`
 	ConductivityUSCm *float64      `json:"conductivity_uS_cm,omitempty" validate:"omitempty,gte=0,lte=300000" unit:"uS/cm"`
 	YieldStressPa    *float64      `json:"yield_stress_Pa,omitempty" validate:"omitempty,gte=0,lte=10000" unit:"Pa"`
@@ -89,6 +101,15 @@ type Electrolyte struct {
 	CationValence   *int     `json:"cation_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
 	AnionValence    *int     `json:"anion_valence,omitempty" validate:"omitempty,gte=1,lte=4" unit:"1"`
 	ConcentrationMM *float64 `json:"concentration_mM" validate:"required,gte=0,lte=5000" unit:"mM"`
+}
+
+// Hardness is the total hardness (calcium and magnesium) of the water the
+// product is made with, in one of four units: mg/L as CaCO3, German degrees
+// (dH, 10 mg/L CaO), French degrees (fH, 10 mg/L CaCO3) or mM of Ca2+ and
+// Mg2+ together; the value's unit is the one named in unit.
+type Hardness struct {
+	Value *float64 `json:"value" validate:"required,gte=0,lte=5000" unit:"hardness.unit"`
+	Unit  string   `json:"unit" validate:"required,oneof=mg_L_CaCO3 dH fH mM"`
 }
 
 // FreePolymer is dissolved, non-adsorbing polymer (a depletant).

@@ -44,8 +44,38 @@ type Material struct {
 	RelativePermittivity *SourcedValue // static; nil where not meaningful
 	IsoelectricPH        *SourcedValue // pH
 	HamakerWater         *SourcedValue // non-retarded A131 across water, J
+	SurfaceSites         *SurfaceSites // proton-binding sites of an oxide; nil where none is sourced
 
 	Notes string
+}
+
+// SurfaceSites are the parameters of a single-site basic Stern model of an
+// oxide surface (physics.SiteSurface), each with its source.
+type SurfaceSites struct {
+	// Model is "one_pk" (Hiemstra, Van Riemsdijk & Bolt: sites of charge
+	// -1/2 and +1/2, PK the point of zero charge) or "silica" (Behrens &
+	// Grier: silanols of charge 0 and -1, PK their pK).
+	Model            string
+	SiteDensity      SourcedValue // 1/m^2
+	PK               SourcedValue // pH
+	SternCapacitance SourcedValue // F/m^2
+	// CationPairLogK and AnionPairLogK are log10 of the ion-pair constants
+	// (L/mol) of monovalent electrolyte cations and anions with the charged
+	// sites; nil where none is sourced (no pairs of that sign).
+	CationPairLogK, AnionPairLogK *SourcedValue
+	// SlipDistance is the distance of the electrokinetic slip plane
+	// outside the head end of the diffuse layer, m; nil where none is
+	// sourced (the two coincide).
+	SlipDistance *SourcedValue
+}
+
+// SitesListing is the SurfaceSites of a MaterialListing, in the library
+// file's units.
+type SitesListing struct {
+	Model               string       `json:"model"`
+	SiteDensityNm2      SourcedValue `json:"site_density_per_nm2"`
+	PK                  SourcedValue `json:"pk"`
+	SternCapacitanceFm2 SourcedValue `json:"stern_capacitance_F_m2"`
 }
 
 // Library is the materials and liquids library, checked at load time: every
@@ -116,6 +146,7 @@ type MaterialListing struct {
 	RelativePermittivity *SourcedValue `json:"relative_permittivity,omitempty"`
 	IsoelectricPH        *SourcedValue `json:"isoelectric_ph,omitempty"`
 	HamakerWaterZJ       *SourcedValue `json:"hamaker_water_zJ,omitempty"`
+	SurfaceSites         *SitesListing `json:"surface_sites,omitempty"`
 	Notes                string        `json:"notes,omitempty"`
 }
 
@@ -142,6 +173,10 @@ func (m Material) listing() MaterialListing {
 		RelativePermittivity: copySourced(m.RelativePermittivity),
 		IsoelectricPH:        copySourced(m.IsoelectricPH),
 		Notes:                m.Notes,
+	}
+	if s := m.SurfaceSites; s != nil {
+		out.SurfaceSites = &SitesListing{Model: s.Model, PK: s.PK, SternCapacitanceFm2: s.SternCapacitance,
+			SiteDensityNm2: SourcedValue{Value: number.Round(s.SiteDensity.Value*1e-18, listingDigits), Source: s.SiteDensity.Source}}
 	}
 	if m.HamakerWater != nil {
 		out.HamakerWaterZJ = &SourcedValue{Value: number.Round(m.HamakerWater.Value/zeptojoule, listingDigits), Source: m.HamakerWater.Source}
@@ -171,11 +206,16 @@ const (
 	minPermittivity, maxPermittivity       = 1.0, 200.0
 	minPH, maxPH                           = 0.0, 14.0
 	minHamakerZJ, maxHamakerZJ             = 0.1, 600.0
+	minSitesNm2, maxSitesNm2               = 0.5, 30.0 // proton-binding sites per nm^2
+	minSternFm2, maxSternFm2               = 0.1, 10.0 // Stern capacitance, F/m^2
+	minPairLogK, maxPairLogK               = -5.0, 5.0 // ion-pair constant, log10 L/mol
+	maxSlipNm                              = 5.0       // slip-plane distance, nm
 )
 
 var (
 	materialKinds  = []string{"oxide", "carbonate", "clay", "pigment", "latex", "oil", "wax", "metal", "organic"}
 	materialPhases = []string{"solid", "liquid"}
+	siteModels     = []string{"one_pk", "silica"}
 	keyForm        = regexp.MustCompile(`^[a-z][a-z0-9_]*$`)
 )
 
@@ -193,7 +233,43 @@ type materialYAML struct {
 	RelativePermittivity *yamlSourced `yaml:"relative_permittivity"`
 	IsoelectricPH        *yamlSourced `yaml:"isoelectric_ph"`
 	HamakerWaterZJ       *yamlSourced `yaml:"hamaker_water_zJ"`
+	SurfaceSites         *sitesYAML   `yaml:"surface_sites"`
 	Notes                string       `yaml:"notes"`
+}
+
+type sitesYAML struct {
+	Model            yamlText     `yaml:"model"`
+	SiteDensityNm2   *yamlSourced `yaml:"site_density_per_nm2"`
+	PK               *yamlSourced `yaml:"pk"`
+	SternCapacitance *yamlSourced `yaml:"stern_capacitance_F_m2"`
+	CationPairLogK   *yamlSourced `yaml:"cation_pair_log_k"`
+	AnionPairLogK    *yamlSourced `yaml:"anion_pair_log_k"`
+	SlipDistanceNm   *yamlSourced `yaml:"slip_distance_nm"`
+}
+
+// sites checks a surface_sites block: a model and all three required
+// sourced values in range, the optional pair constants and slip distance in
+// range where given, or nil with the problems recorded.
+func (c *checker) sites(y *sitesYAML, key string, line int) *SurfaceSites {
+	if y == nil {
+		return nil
+	}
+	c.oneOf(y.Model, "surface_sites.model", line, siteModels)
+	density := c.sourced(y.SiteDensityNm2, "surface_sites.site_density_per_nm2", minSitesNm2, maxSitesNm2, 1e18)
+	pk := c.sourced(y.PK, "surface_sites.pk", minPH, maxPH, 1)
+	stern := c.sourced(y.SternCapacitance, "surface_sites.stern_capacitance_F_m2", minSternFm2, maxSternFm2, 1)
+	if y.SiteDensityNm2 == nil || y.PK == nil || y.SternCapacitance == nil {
+		c.add(line, "material %q: surface_sites needs site_density_per_nm2, pk and stern_capacitance_F_m2", key)
+	}
+	cation := c.sourced(y.CationPairLogK, "surface_sites.cation_pair_log_k", minPairLogK, maxPairLogK, 1)
+	anion := c.sourced(y.AnionPairLogK, "surface_sites.anion_pair_log_k", minPairLogK, maxPairLogK, 1)
+	slip := c.sourced(y.SlipDistanceNm, "surface_sites.slip_distance_nm", 0, maxSlipNm, 1e-9)
+	if density == nil || pk == nil || stern == nil || !slices.Contains(siteModels, y.Model.text) ||
+		(y.CationPairLogK != nil && cation == nil) || (y.AnionPairLogK != nil && anion == nil) || (y.SlipDistanceNm != nil && slip == nil) {
+		return nil
+	}
+	return &SurfaceSites{Model: y.Model.text, SiteDensity: *density, PK: *pk, SternCapacitance: *stern,
+		CationPairLogK: cation, AnionPairLogK: anion, SlipDistance: slip}
 }
 
 func loadMaterials(fsys fs.FS) (map[string]Material, error) {
@@ -223,6 +299,7 @@ func loadMaterials(fsys fs.FS) (map[string]Material, error) {
 		m.RelativePermittivity = c.sourced(e.RelativePermittivity, "relative_permittivity", minPermittivity, maxPermittivity, 1)
 		m.IsoelectricPH = c.sourced(e.IsoelectricPH, "isoelectric_ph", minPH, maxPH, 1)
 		m.HamakerWater = c.sourced(e.HamakerWaterZJ, "hamaker_water_zJ", minHamakerZJ, maxHamakerZJ, zeptojoule)
+		m.SurfaceSites = c.sites(e.SurfaceSites, key, line)
 		if key != "" {
 			out[key] = m
 		}

@@ -72,6 +72,11 @@ func TestLibraryEveryValueSourcedAndInRange(t *testing.T) {
 		check(k, "permittivity", m.RelativePermittivity, 1, 200)
 		check(k, "isoelectric pH", m.IsoelectricPH, 0, 14)
 		check(k, "Hamaker constant (J)", m.HamakerWater, 0.1e-21, 600e-21)
+		if s := m.SurfaceSites; s != nil {
+			check(k, "site density (1/m^2)", &s.SiteDensity, 0.5e18, 30e18)
+			check(k, "site pK", &s.PK, 0, 14)
+			check(k, "Stern capacitance", &s.SternCapacitance, 0.1, 10)
+		}
 	}
 	for k, l := range lib.Liquids {
 		check(k, "refractive index", &l.RefractiveIndex, 1, 3.5)
@@ -246,6 +251,13 @@ const validMaterials = `materials:
     density_kg_m3: {value: 2650, source: "test"}
 `
 
+const validSites = `    surface_sites:
+      model: one_pk
+      site_density_per_nm2: {value: 5, source: "test"}
+      pk: {value: 9, source: "test"}
+      stern_capacitance_F_m2: {value: 1, source: "test"}
+`
+
 const validLiquids = `liquids:
   - key: water
     name: Water
@@ -325,6 +337,20 @@ func TestLibraryBrokenFiles(t *testing.T) {
 			[]string{"library/liquids.yaml:2: density: missing source"}},
 		{"unknown key in a point", validMaterials, strings.Replace(validSolvent, "value: 20}", "value: 20, at: 1}", 1),
 			[]string{`library/liquids.yaml:19: unknown key "at"`}},
+		{"valid surface sites", validMaterials + validSites, validLiquids, nil},
+		{"unknown site model", validMaterials + strings.Replace(validSites, "model: one_pk", "model: two_pk", 1), validLiquids,
+			[]string{`library/materials.yaml:8: surface_sites.model "two_pk" is not one of`}},
+		{"site density out of range", validMaterials + strings.Replace(validSites, "{value: 5,", "{value: 50,", 1), validLiquids,
+			[]string{"library/materials.yaml:9: surface_sites.site_density_per_nm2 50 is outside"}},
+		{"valid ion pairs and slip plane", validMaterials + validSites +
+			"      cation_pair_log_k: {value: -1, source: \"test\"}\n      anion_pair_log_k: {value: -1, source: \"test\"}\n      slip_distance_nm: {value: 0.5, source: \"test\"}\n",
+			validLiquids, nil},
+		{"pair constant out of range", validMaterials + validSites + "      cation_pair_log_k: {value: 9, source: \"test\"}\n", validLiquids,
+			[]string{"library/materials.yaml:12: surface_sites.cation_pair_log_k 9 is outside"}},
+		{"slip distance out of range", validMaterials + validSites + "      slip_distance_nm: {value: -1, source: \"test\"}\n", validLiquids,
+			[]string{"library/materials.yaml:12: surface_sites.slip_distance_nm -1 is outside"}},
+		{"site value missing", validMaterials + strings.Replace(validSites, "      pk: {value: 9, source: \"test\"}\n", "", 1), validLiquids,
+			[]string{`library/materials.yaml:2: material "grit": surface_sites needs site_density_per_nm2, pk and stern_capacitance_F_m2`}},
 		{"unknown model", validMaterials, strings.Replace(validLiquids, "model: iapws", "model: magic", 1),
 			[]string{`library/liquids.yaml:4: model "magic" is not one of`}},
 		{"iapws with a table", validMaterials, strings.Replace(validLiquids, "    aqueous", "    min_c: 0\n    aqueous", 1),

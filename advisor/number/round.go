@@ -41,3 +41,19 @@ func decimalCeil(a float64) int {
 	}
 	return d
 }
+
+// Decimals rounds v to n decimal places with round (math.Round, Floor or
+// Ceil), for a bound printed to a fixed resolution: Floor keeps an upper
+// bound inside, Ceil a lower one. A value already at n decimals but for
+// its last bits stays as it is; the result is never -0.
+func Decimals(v float64, n int, round func(float64) float64) float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	p := math.Pow10(n)
+	scaled := v * p
+	if nearest := math.Round(scaled); math.Abs(scaled-nearest) < 1e-9*math.Max(1, math.Abs(scaled)) {
+		scaled = nearest
+	}
+	return round(scaled)/p + 0
+}

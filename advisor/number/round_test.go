@@ -33,3 +33,22 @@ func TestDecimalCeil(t *testing.T) {
 		}
 	}
 }
+
+// Decimals rounds to a fixed number of decimals towards the side asked,
+// keeps values already there, and never returns -0.
+func TestDecimals(t *testing.T) {
+	for _, c := range []struct {
+		v     float64
+		n     int
+		round func(float64) float64
+		want  string
+	}{
+		{-1.251e-07, 2, math.Ceil, "0"}, {99.974, 2, math.Floor, "99.97"}, {99.97, 2, math.Floor, "99.97"},
+		{99.97 + 1e-12, 2, math.Ceil, "99.97"}, {-12.345, 2, math.Ceil, "-12.34"}, {-12.345, 2, math.Floor, "-12.35"},
+		{1.006, 2, math.Round, "1.01"}, {-0.001, 2, math.Round, "0"}, {math.Inf(1), 2, math.Floor, "+Inf"},
+	} {
+		if got := Shortest(Decimals(c.v, c.n, c.round)); got != c.want {
+			t.Errorf("Decimals(%g, %d) = %s, want %s", c.v, c.n, got, c.want)
+		}
+	}
+}

@@ -402,12 +402,10 @@ func potentialWhere(cs *Case, margin func(p physics.Pair) float64) (float64, boo
 // withPotential is the pair at surface potential |psi| (V), of the sign of
 // the present one: a remedy raises the charge a surface has.
 func (cs *Case) withPotential(psi float64) physics.Pair {
-	p := cs.Pair
-	p.Potential = psi
 	if !(cs.Pair.Potential > 0) {
-		p.Potential = -psi
+		psi = -psi
 	}
-	return p
+	return cs.Pair.WithPotential(psi)
 }
 
 // potentialTol is the accuracy of potential targets, V.
@@ -418,7 +416,8 @@ const potentialTol = 1e-5
 // there is one (the estimate's shape, the measurement's scale).
 func solvePH(cs *Case) (Target, string, bool) {
 	c := cs.Cond
-	if math.IsNaN(c.IsoelectricPH) {
+	zero := c.ZeroPointPH()
+	if math.IsNaN(zero) {
 		return Target{}, "isoelectric point unknown", false
 	}
 	psi, ok := smallestAcceptablePotential(cs)
@@ -426,19 +425,22 @@ func solvePH(cs *Case) (Target, string, bool) {
 		return Target{}, stabilityCriterion(cs) + ": not reachable by pH alone at this ionic strength", false
 	}
 	scale, anchor := 1.0, "; potential from the pH estimate model (see assumptions)"
+	if c.Sites != nil {
+		anchor = "; potential from the site-binding model of the surface in the present ions (see assumptions)"
+	}
 	if c.ZetaSource != "estimated" && !math.IsNaN(c.PH) {
-		if model := physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK); model*c.Zeta > 0 {
+		if model := c.EstimatedPotential(c.PH); model*c.Zeta > 0 {
 			scale = c.Zeta / model
-			anchor = "; pH estimate model scaled to the measured zeta at the present pH"
+			anchor += ", scaled to the measured zeta at the present pH"
 		}
 	}
-	above := math.IsNaN(c.PH) || c.PH >= c.IsoelectricPH
-	lo, hi, op := c.IsoelectricPH, 14.0, ">="
+	above := math.IsNaN(c.PH) || c.PH >= zero
+	lo, hi, op := zero, 14.0, ">="
 	if !above {
-		lo, hi, op = 0, c.IsoelectricPH, "<="
+		lo, hi, op = 0, zero, "<="
 	}
 	f := func(ph float64) float64 {
-		return math.Abs(scale*physics.SurfacePotentialFromPH(ph, c.IsoelectricPH, c.StorageTempK)) - psi
+		return math.Abs(scale*c.EstimatedPotential(ph)) - psi
 	}
 	ph, ok := physics.FindRoot(f, lo, hi, 1e-4)
 	if !ok {
@@ -455,11 +457,8 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	if c.MultivalentSalt == "" || !cs.HasPair {
 		return Target{}, "no multivalent salt stated", false
 	}
-	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
-	withConc := func(conc float64) physics.Pair {
-		return cs.Pair.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, ionicStrengthFloor(cs)))
-	}
-	crit := stabilityCriterion(cs) + "; counter-ion valence kept (conservative)"
+	withConc := func(conc float64) physics.Pair { return MultivalentPair(cs.Pair, c, conc) }
+	crit := stabilityCriterion(cs) + "; the double layer's far field follows the ion mixture at each concentration"
 	conc := c.MultivalentConc
 	a := peakAnchor{cs: cs}
 	if m, _ := a.estimated(withConc(conc)); m >= 0 {
@@ -487,7 +486,40 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	case !ok:
 		return Target{}, crit, false
 	}
+	if c.MultivalentSalt == input.HardnessLabel && conc < c.MultivalentConc {
+		crit += sequestrantDose(c.MultivalentConc - conc)
+	}
 	return Target{c.MultivalentSalt + " concentration_mM", "<=", conc, "mM"}, crit, true
+}
+
+// MultivalentPair is the pair p with the sample's multivalent salt at conc
+// (mol/m^3; below 0, as a search's step past none at all may ask, it is 0)
+// instead of its present concentration: the ionic strength and the ion
+// mixture of the far field both follow, the other ions stay.
+func MultivalentPair(p physics.Pair, c *input.Conditions, conc float64) physics.Pair {
+	conc = math.Max(conc, 0)
+	other := c.IonicStrength - c.MultivalentIonicShare*c.MultivalentConc
+	floor := 1e-6
+	if c.Liquid.Aqueous {
+		floor = input.AutoionisationMolM3
+	}
+	return p.WithIonicStrength(math.Max(other+c.MultivalentIonicShare*conc, floor)).WithIons(c.IonsWithMultivalent(conc))
+}
+
+// molarMassNa2H2EDTA is the molar mass of disodium EDTA dihydrate,
+// Na2H2EDTA.2H2O (CAS 6381-92-6), g/mol.
+const molarMassNa2H2EDTA = 372.24
+
+// sequestrantDose says how much disodium EDTA binds excess mM of hardness:
+// one EDTA per Ca2+ or Mg2+ (1:1 chelates, log K 10.7 for CaY and 8.7 for
+// MgY, so binding is complete at the mM level above pH 7), as mg/L of the
+// dihydrate.
+//
+// Reference: A. E. Martell & R. M. Smith, Critical Stability Constants,
+// vol. 1 (Plenum, 1974), EDTA; molar mass from IUPAC atomic weights.
+func sequestrantDose(excess float64) string {
+	return "; or sequester the excess " + number.Quantity(excess, "mM") + " with at least " +
+		number.Quantity(excess*molarMassNa2H2EDTA, "mg/L") + " of disodium EDTA dihydrate (1:1 with Ca2+ and Mg2+)"
 }
 
 // looseFlocBarrierKT is the barrier below which particles join loose flocs

@@ -84,12 +84,25 @@ func (in Input) deviate(v float64) float64 {
 }
 
 // Apply writes one row of deviates into a copy of the nominal conditions,
-// in the inputs' order, and returns it. The nominal conditions are not
+// in the inputs' order, derives the ions and the zeta potential from them
+// as Resolve does (input.Conditions.Rederive), then applies the errors of
+// derived values, and returns the copy. The nominal conditions are not
 // changed (slices that an input rescales are copied).
 func Apply(inputs []Input, row []float64, nominal *input.Conditions) *input.Conditions {
 	c := *nominal
+	d := input.NominalDrawn()
 	for i, in := range inputs {
-		if row[i] != 0 {
+		switch {
+		case row[i] == 0 || in.after:
+		case in.drawn != nil:
+			in.drawn(&d, in.value(row[i]))
+		default:
+			in.apply(&c, in.value(row[i]))
+		}
+	}
+	c.Rederive(d)
+	for i, in := range inputs {
+		if in.after && row[i] != 0 {
 			in.apply(&c, in.value(row[i]))
 		}
 	}

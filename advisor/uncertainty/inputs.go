@@ -15,7 +15,10 @@ import (
 // its value came from, its nominal value in the field's unit, its standard
 // uncertainty (SD, absolute, or Factor, lognormal; exactly one is
 // non-zero) and where that came from, its physical range (Range), and how
-// it is written into a draw's conditions.
+// it is written into a draw: into the conditions (apply), or, for a value
+// that Conditions.Rederive derives others from and the conditions do not
+// hold, into the draw's input.Drawn (drawn). An input marked after is the
+// error of a derived value and is applied once Rederive has derived it.
 type Input struct {
 	Path       string
 	Provenance Provenance
@@ -24,6 +27,8 @@ type Input struct {
 	Source     string
 	Lo, Hi     float64
 	apply      func(c *input.Conditions, v float64)
+	drawn      func(d *input.Drawn, v float64)
+	after      bool
 }
 
 // How names the measurement that pins the input.
@@ -85,15 +90,39 @@ type planner struct {
 	out []Input
 }
 
-// add appends an input unless its uncertainty is zero. The request's
-// stated uncertainty wins over the table's default.
+// add appends an input written into the conditions (see planner.input).
 func (p *planner) add(path string, prov Provenance, nominal float64, apply func(*input.Conditions, float64)) {
+	if in, ok := p.input(path, prov, nominal); ok {
+		in.apply = apply
+		p.out = append(p.out, in)
+	}
+}
+
+// addDrawn appends an input that Conditions.Rederive derives others from.
+func (p *planner) addDrawn(path string, prov Provenance, nominal float64, drawn func(*input.Drawn, float64)) {
+	if in, ok := p.input(path, prov, nominal); ok {
+		in.drawn = drawn
+		p.out = append(p.out, in)
+	}
+}
+
+// addAfter appends the error of a derived value, applied after Rederive.
+func (p *planner) addAfter(path string, prov Provenance, nominal float64, apply func(*input.Conditions, float64)) {
+	if in, ok := p.input(path, prov, nominal); ok {
+		in.apply, in.after = apply, true
+		p.out = append(p.out, in)
+	}
+}
+
+// input is an input with its uncertainty, ok false when that is zero. The
+// request's stated uncertainty wins over the table's default.
+func (p *planner) input(path string, prov Provenance, nominal float64) (Input, bool) {
 	if math.IsNaN(nominal) {
-		return
+		return Input{}, false
 	}
 	lo, hi, _ := Range(path)
 	lo, hi = math.Min(lo, nominal), math.Max(hi, nominal) // the request's value is valid by definition
-	in := Input{Path: path, Provenance: prov, Nominal: nominal, Lo: lo, Hi: hi, apply: apply}
+	in := Input{Path: path, Provenance: prov, Nominal: nominal, Lo: lo, Hi: hi}
 	if s, ok := p.u[path]; ok {
 		in.SD, in.Factor, in.Source = s.SD, s.Factor, "stated in the request"
 	} else {
@@ -104,9 +133,9 @@ func (p *planner) add(path string, prov Provenance, nominal float64, apply func(
 		in.SD, in.Factor, in.Source = max(d.sd, d.relative*abs(nominal)), d.factor, d.source
 	}
 	if in.Factor == 1 || in.Factor == 0 && in.SD == 0 || in.Factor > 0 && nominal <= 0 {
-		return
+		return Input{}, false
 	}
-	p.out = append(p.out, in)
+	return in, true
 }
 
 func given(v *float64, yes, no Provenance) Provenance {
@@ -117,10 +146,11 @@ func given(v *float64, yes, no Provenance) Provenance {
 }
 
 // Plan lists the uncertain inputs of a resolved sample in the order a draw
-// applies them: the inputs a derived value depends on come before it (pH,
-// isoelectric point and temperature before an estimated zeta potential,
-// the refractive index before an estimated Hamaker constant, the median
-// diameter before the span). It returns the error of Check.
+// applies them: the inputs a derived value depends on come before it (the
+// refractive index before an estimated Hamaker constant, the median
+// diameter before the span); the ions and the zeta potential are derived
+// after all of them by Conditions.Rederive (see Apply). It returns the
+// error of Check.
 func Plan(s *input.Sample, c *input.Conditions) ([]Input, error) {
 	if err := Check(s.Uncertainty); err != nil {
 		return nil, err
@@ -181,9 +211,10 @@ func Plan(s *input.Sample, c *input.Conditions) ([]Input, error) {
 	return p.out, nil
 }
 
-// planIons scales every ion (and the multivalent salt) by one factor: the
-// stated salts, ionic strength or conductivity estimate, or the unstated
-// background of an aqueous medium.
+// planIons draws one factor on every stated salt, ionic strength or
+// conductivity estimate, or on the unstated background of an aqueous
+// medium; Rederive builds the ions from it (water's own ions follow the
+// drawn pH).
 func (p *planner) planIons(s *input.Sample, c *input.Conditions) {
 	if c.IonicStrength <= 0 {
 		return
@@ -198,46 +229,37 @@ func (p *planner) planIons(s *input.Sample, c *input.Conditions) {
 	case m.ConductivityUSCm != nil:
 		path, prov = "medium.conductivity_uS_cm", Estimated
 	}
-	p.add(path, prov, c.IonicStrength, func(c *input.Conditions, v float64) {
-		r := v / c.IonicStrength
-		ions := slices.Clone(c.Ions)
-		for i := range ions {
-			ions[i].Concentration *= r
-		}
-		c.Ions, c.IonicStrength, c.MultivalentConc = ions, v, c.MultivalentConc*r
-	})
+	nominal := c.IonicStrength
+	p.addDrawn(path, prov, nominal, func(d *input.Drawn, v float64) { d.SaltFactor = v / nominal })
 }
 
-// planZeta draws a measured zeta potential directly, one from mobility in
-// proportion to the mobility, and an estimated one as the estimate at the
-// drawn pH, isoelectric point and temperature plus the estimate's own
-// error. A zeta potential that changes sign changes the counter-ions.
+// planZeta draws a zeta potential or mobility as measured, in the liquid
+// it was measured in (Rederive carries it to the product), and an
+// estimated one as the estimate Rederive makes at the drawn pH, ions and
+// temperature plus the estimate's own error. A zeta potential that the
+// error turns over changes the counter-ions.
 func (p *planner) planZeta(s *input.Sample, c *input.Conditions) {
 	if math.IsNaN(c.Zeta) {
 		return
 	}
-	setZeta := func(c *input.Conditions, zeta float64) {
-		if (zeta > 0) != (c.Zeta > 0) {
-			sign := -1
-			if zeta > 0 {
-				sign = 1
-			}
-			c.CounterValence = physics.CounterIonValence(c.Ions, sign)
-		}
-		c.Zeta = zeta
-	}
 	pa := &s.Particles
-	nominal := c.Zeta
-	switch c.ZetaSource {
-	case "measured":
-		p.add("particles.zeta_mV", Measured, nominal*1e3, func(c *input.Conditions, v float64) { setZeta(c, v*1e-3) })
-	case "mobility":
-		mu := *pa.Mobility
-		p.add("particles.mobility_um_cm_per_V_s", Measured, mu, func(c *input.Conditions, v float64) { setZeta(c, nominal*v/mu) })
-	case "estimated":
-		p.add("particles.zeta_mV", Estimated, nominal*1e3, func(c *input.Conditions, v float64) {
-			estimate := physics.SurfacePotentialFromPH(c.PH, c.IsoelectricPH, c.StorageTempK)
-			setZeta(c, estimate+(v*1e-3-nominal))
+	switch {
+	case pa.ZetaMV != nil:
+		p.addDrawn("particles.zeta_mV", Measured, *pa.ZetaMV, func(d *input.Drawn, v float64) { d.ZetaMV = v })
+	case pa.Mobility != nil:
+		p.addDrawn("particles.mobility_um_cm_per_V_s", Measured, *pa.Mobility, func(d *input.Drawn, v float64) { d.Mobility = v })
+	case c.ZetaSource == "estimated":
+		nominal := c.Zeta
+		p.addAfter("particles.zeta_mV", Estimated, nominal*1e3, func(c *input.Conditions, v float64) {
+			zeta := c.Zeta + v*1e-3 - nominal
+			if (zeta > 0) != (c.Zeta > 0) {
+				sign := -1
+				if zeta > 0 {
+					sign = 1
+				}
+				c.CounterValence = physics.CounterIonValence(c.Ions, sign)
+			}
+			c.Zeta = zeta
 		})
 	}
 }
