@@ -27,7 +27,7 @@ func resolveMeasuredIn(z *ZetaLiquid, c *Conditions, bad *Error) *measuredIn {
 	}
 	m := Medium{PH: z.PH, Electrolytes: z.Electrolytes, IonicStrengthMM: z.IonicStrengthMM}
 	resolveElectrolyte(&m, "/particles/zeta_measured_in", &tmp, 1, bad, nil)
-	return &measuredIn{ions: tmp.Ions, pH: *z.PH, tempK: tmp.StorageTempK}
+	return &measuredIn{ions: tmp.Ions, pH: *z.PH, tempK: liquidWaterK(tmp.StorageTempK)}
 }
 
 // Bounds of the Stern capacitance fitted to a measured zeta potential, F/m^2.
@@ -89,7 +89,7 @@ func fitSternCapacitance(c *Conditions, meas *measuredIn) (st physics.SurfaceSta
 		return physics.SurfaceState{}, 0, model, false
 	}
 	surface.SternCapacitance = math.Pow(10, logC)
-	return surface.State(c.PH, c.Ions, c.Liquid.Permittivity, c.StorageTempK), surface.SternCapacitance, model, true
+	return surface.State(c.PH, c.Ions, c.Liquid.Permittivity, liquidWaterK(c.StorageTempK)), surface.SternCapacitance, model, true
 }
 
 // useFitted makes the fitted surface the product's: a copy of c.Sites with

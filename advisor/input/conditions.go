@@ -88,7 +88,7 @@ type SurfaceSites struct {
 // SurfaceState is the equilibrium of the material's site-binding surface in
 // the product's ions at pH (Sites must be set).
 func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
-	return c.Sites.Surface.State(pH, c.Ions, c.Liquid.Permittivity, c.StorageTempK)
+	return c.Sites.Surface.State(pH, c.Ions, c.Liquid.Permittivity, liquidWaterK(c.StorageTempK))
 }
 
 // EstimatedPotential is the surface-potential estimate at pH used when zeta

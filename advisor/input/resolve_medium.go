@@ -155,11 +155,11 @@ const acidBaseNoteShare = 0.01
 // waterIons returns the H+ and OH- of water at pH (neutral water at the
 // temperature when pH is nil) and tempK, with the monovalent counter-ion of
 // the acid or base that set the pH (the excess of H+ over OH-, or of OH-
-// over H+). pKw is taken at tempK, kept within 0-150 degC, the range of
-// physics.WaterPKw. salts is the ionic strength of the other ions, for the
+// over H+). pKw is taken at tempK kept within liquid water's range
+// (liquidWaterK). salts is the ionic strength of the other ions, for the
 // note.
 func waterIons(pH *float64, tempK, salts float64, n *Notes) []physics.Ion {
-	tK := math.Min(math.Max(tempK, physics.Kelvin(0)), physics.Kelvin(150))
+	tK := liquidWaterK(tempK)
 	at := physics.WaterPKw(tK) / 2
 	if pH != nil {
 		at = *pH
@@ -262,4 +262,12 @@ func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 		surfaceSign = -1
 	}
 	c.CounterValence = physics.CounterIonValence(c.Ions, surfaceSign)
+}
+
+// liquidWaterK keeps a temperature (K) within 0-150 degC, the range of
+// water's ion product and density (physics.WaterPKw, WaterIons): a product
+// stored frozen, or a zeta measured below 0 degC, has its water ions and
+// surface chemistry taken at 0 degC, the edge of liquid water.
+func liquidWaterK(tempK float64) float64 {
+	return math.Min(math.Max(tempK, physics.Kelvin(0)), physics.Kelvin(150))
 }
