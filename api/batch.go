@@ -14,6 +14,7 @@ import (
 	"strings"
 	"sync"
 	"sync/atomic"
+	"time"
 
 	"github.com/labstack/echo/v4"
 
@@ -127,7 +128,9 @@ func (h *handlers) batch(c echo.Context) error {
 		return h.streamNDJSON(c, entries, base)
 	case mimeCSV:
 		rows := make([][]string, 0, len(entries))
+		progress := h.keepWriting(c)
 		err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+			progress()
 			rows = append(rows, csvRow(it, out.dialect))
 			return nil
 		})
@@ -150,7 +153,9 @@ func (h *handlers) streamJSON(c echo.Context, entries []batchEntry, base pointer
 	w := bufio.NewWriterSize(res, 64<<10)
 	_, _ = w.WriteString(`{"items":[`)
 	failed := 0
+	progress := h.keepWriting(c)
 	err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+		progress()
 		if it.Index > 0 {
 			_ = w.WriteByte(',')
 		}
@@ -173,6 +178,17 @@ func (h *handlers) streamJSON(c echo.Context, entries []batchEntry, base pointer
 		return echo.NewHTTPError(statusClientClosedRequest).SetInternal(err)
 	}
 	return nil
+}
+
+// keepWriting returns what a batch answer calls for each item: it moves the
+// connection's write deadline to batchWindow from now, so that a batch
+// longer than the server's write timeout is not cut while items keep
+// coming, and a client that stops reading is still cut off a window after
+// the last item. Where the writer has no deadline (a test recorder) it
+// does nothing.
+func (h *handlers) keepWriting(c echo.Context) func() {
+	rc := http.NewResponseController(c.Response())
+	return func() { _ = rc.SetWriteDeadline(time.Now().Add(h.batchWindow)) }
 }
 
 // itemJSON encodes one item; an item that does not encode becomes its 500.

@@ -46,7 +46,9 @@ func (h *handlers) streamNDJSON(c echo.Context, entries []batchEntry, base point
 	res.WriteHeader(http.StatusOK)
 	res.Flush()
 	failed := 0
+	progress := h.keepWriting(c)
 	err := h.triageAll(c.Request().Context(), entries, base, func(it batchItem) error {
+		progress()
 		if it.Status != http.StatusOK {
 			failed++
 		}

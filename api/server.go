@@ -2,6 +2,7 @@ package api
 
 import (
 	"net/http"
+	"time"
 
 	"github.com/labstack/echo/v4"
 	"github.com/labstack/echo/v4/middleware"
@@ -25,7 +26,17 @@ type Config struct {
 	// Idempotency keeps the answers to requests with an Idempotency-Key;
 	// nil is a memory store of DefaultMemoryStoreConfig.
 	Idempotency IdempotencyStore
+	// BatchWriteWindow is how long a batch answer may go without an item
+	// written before its connection is cut: each item moves the write
+	// deadline on by it, so a long batch outlives the server's write
+	// timeout while a client that stops reading is still cut off. 0 means
+	// DefaultBatchWriteWindow.
+	BatchWriteWindow time.Duration
 }
+
+// DefaultBatchWriteWindow is the default Config.BatchWriteWindow: far
+// longer than one item takes, as long as a stalled reader may hold a batch.
+const DefaultBatchWriteWindow = 60 * time.Second
 
 // DefaultMaxBatches bounds the batches running at once: a batch holds up
 // to 5000 samples and uses every core, so a few at once already fill the
@@ -39,6 +50,9 @@ var DefaultConfig = Config{Logger: zerolog.Nop(), BodyLimit: "256K"}
 func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	if cfg.BodyLimit == "" {
 		cfg.BodyLimit = DefaultConfig.BodyLimit
+	}
+	if cfg.BatchWriteWindow <= 0 {
+		cfg.BatchWriteWindow = DefaultBatchWriteWindow
 	}
 	e := echo.New()
 	e.HideBanner, e.HidePort = true, true
@@ -57,7 +71,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 		cfg.MaxBatches = DefaultMaxBatches
 	}
 	h := &handlers{engine: engine, validator: newSampleValidator(), openapi: cfg.OpenAPI, metrics: m, log: cfg.Logger,
-		draining: cfg.Draining, batches: make(chan struct{}, cfg.MaxBatches)}
+		draining: cfg.Draining, batches: make(chan struct{}, cfg.MaxBatches), batchWindow: cfg.BatchWriteWindow}
 	e.GET("/healthz", h.health)
 	e.GET("/readyz", h.ready)
 	e.GET("/metrics", h.metricsText)
@@ -92,6 +106,8 @@ type handlers struct {
 	log       zerolog.Logger
 	draining  func() bool
 	batches   chan struct{} // one token per running batch
+	// batchWindow is Config.BatchWriteWindow.
+	batchWindow time.Duration
 }
 
 func (h *handlers) health(c echo.Context) error {
