@@ -2,6 +2,7 @@ package advisor
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"math"
 	"reflect"
@@ -108,7 +109,7 @@ type compared [len(comparedScales)]float64
 func (e *Engine) Compare(ref, complaint *input.Sample, valid func(*input.Sample) error) (*Comparison, error) {
 	rep, err := e.Triage(complaint)
 	if err != nil {
-		return nil, err
+		return nil, under("/complaint", err)
 	}
 	base := *ref
 	base.Symptom = complaint.Symptom
@@ -122,11 +123,11 @@ func (e *Engine) Compare(ref, complaint *input.Sample, valid func(*input.Sample)
 	}
 	refVals, err := e.nominal(&base)
 	if err != nil {
-		return nil, err
+		return nil, under("/reference", err)
 	}
 	cmpVals, err := e.nominal(complaint)
 	if err != nil {
-		return nil, err
+		return nil, under("/complaint", err)
 	}
 	out := &Comparison{Versions: Versions{Engine: EngineVersion, Rules: e.rules.Hash}, Method: CompareMethod, Triage: rep,
 		Scales: make([]ScaleChange, len(comparedScales)), Differences: []Difference{}, Pairs: []PairEffect{}}
@@ -195,6 +196,21 @@ func (e *Engine) Compare(ref, complaint *input.Sample, valid func(*input.Sample)
 	}
 	out.Verdict = verdict(out, refVals, cmpVals, key)
 	return out, nil
+}
+
+// under puts the field pointers of an *input.Error under prefix, the
+// sample's member in the comparison request.
+func under(prefix string, err error) error {
+	var ie *input.Error
+	if !errors.As(err, &ie) {
+		return err
+	}
+	out := &input.Error{Problems: make([]input.FieldProblem, len(ie.Problems))}
+	for i, p := range ie.Problems {
+		p.Pointer = prefix + p.Pointer
+		out.Problems[i] = p
+	}
+	return out
 }
 
 func comparedIndex(name string) int {
