@@ -412,18 +412,19 @@ func verdict(c *Comparison, ref, cmp compared, key int) string {
 	}
 	var b strings.Builder
 	first := c.Differences[0]
-	fmt.Fprintf(&b, "The %s of %s from %s to %s %s is carried ", dir, strings.ReplaceAll(name, "_", " "),
+	change := fmt.Sprintf("the %s of the %s from %s to %s %s", dir, strings.ReplaceAll(name, "_", " "),
 		number.Shortest(number.Round(ref[key], 3)), number.Shortest(number.Round(cmp[key], 3)), unit)
 	if first.Share == nil {
-		b.WriteString("by no single difference that could be evaluated.")
+		fmt.Fprintf(&b, "No single difference of the %d could be evaluated against %s.", len(c.Differences), change)
 		return b.String()
 	}
-	fmt.Fprintf(&b, "%s by %s (%s -> %s)", percent(*first.Share), first.Path, valueText(first.Reference), valueText(first.Complaint))
+	fmt.Fprintf(&b, "Of the %d differing input(s), %s (%s -> %s) alone carries %s of %s", len(c.Differences),
+		first.Path, valueText(first.Reference), valueText(first.Complaint), percent(*first.Share), change)
 	if len(c.Differences) > 1 && c.Differences[1].Share != nil {
 		second := c.Differences[1]
-		fmt.Fprintf(&b, ", %s by %s", percent(*second.Share), second.Path)
+		fmt.Fprintf(&b, "; next comes %s with %s", second.Path, percent(*second.Share))
 	}
-	fmt.Fprintf(&b, ", of the %d differing input(s).", len(c.Differences))
+	b.WriteString(".")
 	strongest := -1
 	for i, p := range c.Pairs {
 		x, ok := p.Interaction[name]

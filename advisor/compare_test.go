@@ -133,3 +133,18 @@ func BenchmarkCompare(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkCompareDraws200 is BenchmarkCompare with the complaint's triage
+// running 200 Monte Carlo draws.
+func BenchmarkCompareDraws200(b *testing.B) {
+	e := benchEngine(b)
+	ref, complaint := comparePair(b)
+	draws := 200
+	complaint.Analysis = &input.Analysis{Draws: &draws}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := e.Compare(ref, complaint, nil); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
