@@ -521,6 +521,15 @@ func TestContractExchanges(t *testing.T) {
 		{name: "compare unknown member", method: "POST", path: "/v1/compare", contentType: jsonType,
 			body: `{"reference":` + gs + `,"complaint":` + gs + `,"third":{}}`, status: 400, request: violates},
 
+		{name: "triage with observations", method: "POST", path: "/v1/triage", contentType: jsonType,
+			body: `{"symptom":"settling","particles":{"diameter_nm":2000,"density_kg_m3":2200},"analysis":{"draws":0},"observations":[` +
+				`{"age_days":7,"clear_layer_mm":2.1,"median_diameter_nm":2000},{"age_days":14,"clear_layer_mm":4.0,"median_diameter_nm":2050},` +
+				`{"age_days":28,"clear_layer_mm":8.3,"median_diameter_nm":1980,"viscosity_mPa_s":1.1},{"age_days":42,"clear_layer_mm":11.9,"sediment_redisperses":false}]}`,
+			status: 200},
+		{name: "triage observation without age", method: "POST", path: "/v1/triage", contentType: jsonType,
+			body:   `{"symptom":"settling","particles":{"diameter_nm":2000,"density_kg_m3":2200},"observations":[{"clear_layer_mm":2}]}`,
+			status: 422, request: violates},
+
 		{name: "profile JSON", method: "POST", path: profile, contentType: jsonType, body: zetaSample, status: 200},
 		{name: "profile points", method: "POST", path: profile + "?points=50", contentType: jsonType, body: zetaSample, status: 200,
 			header: []string{"Accept", "application/json"}},
