@@ -71,6 +71,7 @@ func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 		Assumptions: ev.notes.List(),
 		Models:      ev.models,
 		Inputs:      input.Understood(s, ev.cond),
+		Trends:      trends(s.Observations),
 	}
 	if draws := uncertainty.Draws(s); draws > 0 {
 		if err := e.analyse(s, ev, r, draws, uncertainty.Seed(s)); err != nil {

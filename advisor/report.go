@@ -25,6 +25,9 @@ type Report struct {
 	MeasureNext []Measurement `json:"measure_next,omitempty"`
 	RuledOut    []RuledOut    `json:"ruled_out,omitempty"`
 	Analysis    *Analysis     `json:"analysis,omitempty"`
+
+	// Trends fits the observations over time (see trends.go).
+	Trends []Trend `json:"trends,omitempty"`
 }
 
 // Versions identifies the engine and the rule set that produced a report.

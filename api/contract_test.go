@@ -377,6 +377,12 @@ func compactJSON(t testing.TB, doc string) string {
 }
 
 const (
+	// compareBody is a lot made with a new, hard water supply beside the lot
+	// before it.
+	compareBody = `{"reference":{"sample_id":"LOT-41","particles":{"material":"zirconia","diameter_nm":400,"volume_fraction":0.35,"zeta_mV":-42},` +
+		`"medium":{"ph":9.2,"electrolytes":[{"formula":"NaCl","concentration_mM":2}]},"analysis":{"draws":50}},` +
+		`"complaint":{"sample_id":"LOT-42","symptom":"flocculation","particles":{"material":"zirconia","diameter_nm":410,"volume_fraction":0.35,"zeta_mV":-41},` +
+		`"medium":{"ph":9.2,"electrolytes":[{"formula":"NaCl","concentration_mM":2}],"hardness":{"value":200,"unit":"mg_L_CaCO3"}},"analysis":{"draws":50}}}`
 	jsonType = echo.MIMEApplicationJSON
 	profile  = "/v1/interaction-profile"
 	// zetaSample has all a profile needs.
@@ -499,6 +505,30 @@ func TestContractExchanges(t *testing.T) {
 		{name: "scales out of range", method: "POST", path: "/v1/scales", contentType: jsonType,
 			body: `{"particles":{"diameter_nm":0.1,"density_kg_m3":2000}}`, status: 422, request: violates},
 		{name: "scales wrong media type", method: "POST", path: "/v1/scales", contentType: "application/xml", body: "<a/>", status: 415, request: violates},
+
+		{name: "compare", method: "POST", path: "/v1/compare", contentType: jsonType, body: compareBody, status: 200,
+			header: []string{"Idempotency-Key", "lot-41-42"}},
+		{name: "compare identical", method: "POST", path: "/v1/compare", contentType: jsonType,
+			body: `{"reference":` + gs + `,"complaint":` + gs + `}`, status: 200},
+		{name: "compare out of range", method: "POST", path: "/v1/compare", contentType: jsonType,
+			body:   `{"reference":{"particles":{"diameter_nm":0.1,"density_kg_m3":2000}},"complaint":{"symptom":"settling","particles":{"diameter_nm":100,"volume_fraction":0.9}}}`,
+			status: 422, request: violates},
+		{name: "compare without complaint", method: "POST", path: "/v1/compare", contentType: jsonType,
+			body: `{"reference":` + gs + `}`, status: 422, request: violates},
+		{name: "compare unknown salt", method: "POST", path: "/v1/compare", contentType: jsonType,
+			body:   `{"reference":{"particles":{"diameter_nm":100,"density_kg_m3":2000},"medium":{"electrolytes":[{"formula":"XyZ","concentration_mM":1}]}},"complaint":` + gs + `}`,
+			status: 422},
+		{name: "compare unknown member", method: "POST", path: "/v1/compare", contentType: jsonType,
+			body: `{"reference":` + gs + `,"complaint":` + gs + `,"third":{}}`, status: 400, request: violates},
+
+		{name: "triage with observations", method: "POST", path: "/v1/triage", contentType: jsonType,
+			body: `{"symptom":"settling","particles":{"diameter_nm":2000,"density_kg_m3":2200},"analysis":{"draws":0},"observations":[` +
+				`{"age_days":7,"clear_layer_mm":2.1,"median_diameter_nm":2000},{"age_days":14,"clear_layer_mm":4.0,"median_diameter_nm":2050},` +
+				`{"age_days":28,"clear_layer_mm":8.3,"median_diameter_nm":1980,"viscosity_mPa_s":1.1},{"age_days":42,"clear_layer_mm":11.9,"sediment_redisperses":false}]}`,
+			status: 200},
+		{name: "triage observation without age", method: "POST", path: "/v1/triage", contentType: jsonType,
+			body:   `{"symptom":"settling","particles":{"diameter_nm":2000,"density_kg_m3":2200},"observations":[{"clear_layer_mm":2}]}`,
+			status: 422, request: violates},
 
 		{name: "profile JSON", method: "POST", path: profile, contentType: jsonType, body: zetaSample, status: 200},
 		{name: "profile points", method: "POST", path: profile + "?points=50", contentType: jsonType, body: zetaSample, status: 200,
@@ -1032,7 +1062,7 @@ func TestContractBodyLimits(t *testing.T) {
 	}
 	single, batch := written(DefaultConfig.BodyLimit), written(batchBodyLimit)
 	for path, want := range map[string]string{"/v1/triage": single, "/v1/scales": single,
-		"/v1/interaction-profile": single, "/v1/triage/batch": batch} {
+		"/v1/interaction-profile": single, "/v1/compare": single, "/v1/triage/batch": batch} {
 		if d := c.doc.Paths.Find(path).Post.Description; !strings.Contains(d, "Body limit "+want+".") {
 			t.Errorf("%s: the description does not state the body limit %s", path, want)
 		}

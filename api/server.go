@@ -90,6 +90,7 @@ func New(engine *advisor.Engine, cfg Config) *echo.Echo {
 	v1.POST("/triage/batch", h.batch, auth, middleware.BodyLimit(batchBodyLimit), idempotent(cfg.Idempotency, batchUnreadable))
 	v1.POST("/scales", h.scales, auth, limit, once)
 	v1.POST("/interaction-profile", h.interactionProfile, auth, limit, once)
+	v1.POST("/compare", h.compare, auth, limit, once)
 	v1.GET("/catalog", h.catalog, auth)
 	v1.GET("/rules", h.rules, auth)
 	v1.GET("/materials", h.materials, auth)

@@ -24,6 +24,8 @@ type Sample struct {
 	Models      *Models      `json:"models,omitempty"`
 	Uncertainty Uncertainty  `json:"uncertainty,omitempty"`
 	Analysis    *Analysis    `json:"analysis,omitempty"`
+	// Observations follow the complaint over time (see ObservationPoint).
+	Observations []ObservationPoint `json:"observations,omitempty" validate:"omitempty,max=20,dive"`
 }
 
 // Models selects optional physical models; the defaults are named in every report.
@@ -214,4 +216,14 @@ func (s Spread) MarshalJSON() ([]byte, error) {
 type Analysis struct {
 	Draws *int `json:"draws,omitempty" validate:"omitempty,gte=0,lte=2000" unit:"1"`
 	Seed  *int `json:"seed,omitempty" validate:"omitempty,gte=0,lte=9007199254740991" unit:"1"`
+}
+
+// ObservationPoint is one inspection of the complaint at an age; every
+// measurement is optional.
+type ObservationPoint struct {
+	AgeDays             *float64 `json:"age_days" validate:"required,gte=0,lte=36500" unit:"d"`
+	ClearLayerMm        *float64 `json:"clear_layer_mm,omitempty" validate:"omitempty,gte=0,lte=20000" unit:"mm"`
+	MedianDiameterNm    *float64 `json:"median_diameter_nm,omitempty" validate:"omitempty,gte=0.5,lte=1e7" unit:"nm"`
+	ViscosityMPaS       *float64 `json:"viscosity_mPa_s,omitempty" validate:"omitempty,gte=0.1,lte=1e7" unit:"mPa s"`
+	SedimentRedisperses *bool    `json:"sediment_redisperses,omitempty"`
 }
