@@ -106,6 +106,7 @@ func (ev *evaluation) compute() {
 	ev.inputFacts()
 	ev.computeGravity()
 	ev.computeInteraction()
+	ev.plainTexts()
 	ev.computeBeyondDLVO()
 	ev.computeTemperature()
 }
