@@ -67,7 +67,7 @@ func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 		Versions:    Versions{Engine: EngineVersion, Rules: e.rules.Hash},
 		Scales:      ev.scales,
 		Causes:      causes,
-		Cautions:    cautions(ev),
+		Cautions:    cautions(ev, causes),
 		Assumptions: ev.notes.List(),
 		Models:      ev.models,
 		Inputs:      input.Understood(s, ev.cond),
