@@ -268,7 +268,7 @@ func (e *Engine) analyse(s *input.Sample, nominal *evaluation, r *Report, draws 
 		r.MeasureNext = measureNext(r.Causes[0].ID, inputs, rows, out, weights)
 	}
 	r.RuledOut = e.ruledOut(nominal, r.Causes)
-	e.intervals(r.Causes, out, weights)
+	e.intervals(r.Causes, nominal, out, weights)
 	r.Assumptions = append(r.Assumptions, fmt.Sprintf("uncertainty: %d Monte Carlo draws of %d inputs (JCGM 101:2008), seed %d; "+
 		"draws weighted by the likelihood of the observations (effective draws %s)", draws, len(inputs), seed,
 		number.Shortest(a.EffectiveDraws)))
@@ -329,10 +329,6 @@ func (e *Engine) shares(out []drawOutcome, weights []float64, agree bool, a *Ana
 	a.Tied = share(a.Tied / total)
 	return prob, support, best
 }
-
-// practicalMax caps the physical range of a target where practice reaches
-// less: adsorbed layers (remedy.ThickestAdsorbedLayer).
-var practicalMax = map[string]float64{"stabilizer.layer_thickness_nm": remedy.ThickestAdsorbedLayer * 1e9}
 
 // share rounds a share of the draws to 3 decimals.
 func share(x float64) float64 { return math.Round(x*1000) / 1000 }
@@ -632,8 +628,10 @@ func (e *Engine) ruledOut(nominal *evaluation, causes []Cause) []RuledOut {
 // replaces the nominal target by the one that holds in targetShare of the
 // weighted draws, with the central 95 % as its interval; a target is not
 // feasible when no value meets the criterion at the nominal point, in more
-// than 5 % of the weighted draws, or outside the quantity's physical range.
-func (e *Engine) intervals(causes []Cause, out []drawOutcome, weights []float64) {
+// than 5 % of the weighted draws, outside the quantity's physical range, or
+// beyond what practice reaches for the product (remedy.Practical); within a
+// cause the feasible remedies come first.
+func (e *Engine) intervals(causes []Cause, nominal *evaluation, out []drawOutcome, weights []float64) {
 	n := min(len(out), remedyDraws)
 	for ci := range causes {
 		for ri := range causes[ci].Remedies {
@@ -649,6 +647,7 @@ func (e *Engine) intervals(causes []Cause, out []drawOutcome, weights []float64)
 				rem.Feasible, rem.Reason = &feasible, reason
 				continue
 			}
+			atNominal := rem.Target.Value
 			var values, w []float64
 			failed, total := 0.0, 0.0
 			for k := range n {
@@ -679,17 +678,29 @@ func (e *Engine) intervals(causes []Cause, out []drawOutcome, weights []float64)
 					number.Shortest(targetShare*100), len(values), n)
 			}
 			lo, hi, ok := uncertainty.Range(rem.Target.Quantity)
-			if limit, practical := practicalMax[rem.Target.Quantity]; practical {
-				hi = limit
-			}
+			practical := remedy.Practical(nominal.cond, *rem.Target, atNominal)
 			switch {
 			case total > 0 && failed/total > 1-targetShare:
 				feasible, reason = false, fmt.Sprintf("no value meets the criterion in %s %% of the weighted draws", number.Shortest(number.Round(100*failed/total, 2)))
 			case ok && (rem.Target.Value < lo || rem.Target.Value > hi):
 				feasible, reason = false, fmt.Sprintf("the target lies outside the range %s can reach, %s to %s", rem.Target.Quantity,
 					number.Shortest(lo), number.Shortest(hi))
+			case practical != "":
+				feasible, reason = false, practical
 			}
 			rem.Feasible, rem.Reason = &feasible, reason
 		}
+		slices.SortStableFunc(causes[ci].Remedies, func(a, b Remedy) int {
+			return cmp.Compare(infeasible(a), infeasible(b))
+		})
 	}
+}
+
+// infeasible is 1 for a remedy marked not feasible, else 0: the order of
+// the remedies within a cause, feasible first.
+func infeasible(r Remedy) int {
+	if r.Feasible != nil && !*r.Feasible {
+		return 1
+	}
+	return 0
 }

@@ -3,11 +3,13 @@ package advisor
 import (
 	"io/fs"
 	"math"
+	"slices"
 	"strings"
 
 	"colloidtriage/advisor/input"
 	"colloidtriage/advisor/library"
 	"colloidtriage/advisor/number"
+	"colloidtriage/advisor/remedy"
 	"colloidtriage/advisor/rule"
 	"colloidtriage/advisor/uncertainty"
 )
@@ -67,7 +69,7 @@ func (e *Engine) Triage(s *input.Sample) (*Report, error) {
 		Versions:    Versions{Engine: EngineVersion, Rules: e.rules.Hash},
 		Scales:      ev.scales,
 		Causes:      causes,
-		Cautions:    cautions(ev),
+		Cautions:    cautions(ev, causes),
 		Assumptions: ev.notes.List(),
 		Models:      ev.models,
 		Inputs:      input.Understood(s, ev.cond),
@@ -107,6 +109,7 @@ func (ev *evaluation) compute() {
 	ev.inputFacts()
 	ev.computeGravity()
 	ev.computeInteraction()
+	ev.plainTexts()
 	ev.computeBeyondDLVO()
 	ev.computeTemperature()
 }
@@ -150,6 +153,12 @@ func (e *Engine) cause(ev *evaluation, cs *rule.Score, rank int) Cause {
 			continue
 		}
 		for _, id := range r.Remedies {
+			if broken := remedy.Breaks(id, ev.cond.Constraints); broken != nil {
+				if !slices.ContainsFunc(c.Withheld, func(w Withheld) bool { return w.ID == id }) {
+					c.Withheld = append(c.Withheld, Withheld{ID: id, Constraints: broken})
+				}
+				continue
+			}
 			if !hasRemedy(c.Remedies, id) {
 				c.Remedies = append(c.Remedies, e.remedy(ev, id))
 			}

@@ -50,6 +50,8 @@ var inputFacts = []inputFact{
 	{"has_size_distribution", rule.Flag, "", "a size span or distribution was given"},
 	{"max_relative_viscosity", rule.Number, "1", "acceptance criterion: largest relative viscosity"},
 	{"max_steric_contact_kT", rule.Number, "kT", "acceptance criterion: deepest van der Waals energy at steric contact"},
+	{"aggregation_half_life_text", rule.Text, "", "the aggregation half-life in words (hours, days, years, or longer than the age of the universe)"},
+	{"stability_ratio_text", rule.Text, "", "the Fuchs stability ratio as a power of ten, or in words when unbounded"},
 }
 
 // vocabulary is the facts declared to the rule set: inputFacts, then the

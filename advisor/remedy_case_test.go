@@ -101,8 +101,10 @@ func TestRemedyTargetsInvertThePhysics(t *testing.T) {
 	}
 	if tg, _, ok := remedy.For("add_yield_stress")(cs); !ok {
 		t.Error("no yield-stress target")
-	} else if y := physics.YieldNumber(tg.Value, c.Radius, drho); math.Abs(y/physics.BerisCriticalYieldNumber-1) > 5e-3 {
-		t.Errorf("yield stress target %v Pa: yield number %v, want 0.143", tg.Value, y)
+	} else if tau := physics.YieldStressToHoldSphere(c.Radius, drho); tg.Value != remedy.SpecifiedYieldStress(tau) {
+		t.Errorf("yield stress target %v Pa, want %v Pa specified for %v Pa", tg.Value, remedy.SpecifiedYieldStress(tau), tau)
+	} else if y := physics.YieldNumber(tau, c.Radius, drho); math.Abs(y/physics.BerisCriticalYieldNumber-1) > 5e-3 {
+		t.Errorf("yield stress %v Pa: yield number %v, want 0.143", tau, y)
 	}
 	if tg, _, ok := remedy.For("add_steric_layer")(cs); !ok {
 		t.Error("no steric target")

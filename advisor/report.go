@@ -52,6 +52,9 @@ type Cause struct {
 	Explanation string     `json:"explanation"`
 	Evidence    []Evidence `json:"evidence"`
 	Remedies    []Remedy   `json:"remedies"`
+	// Withheld lists the remedies of the cause left out because they
+	// would change an input the request names in its constraints.
+	Withheld []Withheld `json:"withheld,omitempty"`
 	// Probability is the weighted share of the draws in which the cause
 	// ranks first (ties split equally), Support the share in which it
 	// scores above 0.3; both absent at analysis.draws 0.
@@ -79,6 +82,13 @@ type Remedy struct {
 	Interval *Interval `json:"interval,omitempty"`
 	Feasible *bool     `json:"feasible,omitempty"`
 	Reason   string    `json:"reason,omitempty"`
+}
+
+// Withheld is a remedy left out of a cause and the constraints it would
+// break.
+type Withheld struct {
+	ID          string   `json:"id"`
+	Constraints []string `json:"constraints"`
 }
 
 // Interval is a range of values {low, high}.

@@ -97,13 +97,14 @@ func sampleFields() []tagField {
 				ft = ft.Elem()
 			}
 			p := ptr + "/" + name
-			if slice {
-				p += "/0"
-			}
 			if ft.Kind() == reflect.Struct {
+				if slice {
+					p += "/0"
+				}
 				walk(ft, append(append([]tagStep{}, steps...), tagStep{name, slice, ft}), p)
 				continue
 			}
+			// a list of plain values (constraints) is replaced as a whole
 			out = append(out, tagField{steps: steps, field: f, pointer: p})
 		}
 	}
@@ -488,6 +489,7 @@ func handBadCases() []badCase {
 
 		// Names that are not in the library or the salt parser.
 		{name: "unknown salt", body: el(`"formula":"XyZ","concentration_mM":1`), status: 422, pointer: "/medium/electrolytes/0/formula"},
+		{name: "unknown constraint", body: baseWith(`"constraints":["medium.colour"]`), status: 422, pointer: "/constraints/0"},
 		{name: "unbalanced salt", body: el(`"formula":"NaCl2","concentration_mM":1`), status: 422, pointer: "/medium/electrolytes/0/formula"},
 		{name: "salt in lower case", body: el(`"formula":"nacl","concentration_mM":1`), status: 422, pointer: "/medium/electrolytes/0/formula"},
 		{name: "salt not in lowest terms", body: el(`"formula":"Na2Cl2","concentration_mM":1`), status: 422, pointer: "/medium/electrolytes/0/formula"},

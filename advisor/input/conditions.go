@@ -12,6 +12,7 @@ import (
 type Conditions struct {
 	Symptom        string
 	Product        string
+	Constraints    []string            // request inputs the product cannot change (Sample.Constraints)
 	Phase          string              // solid, liquid or gas
 	Radius         float64             // m, of the median particle
 	Classes        []physics.SizeClass // nil for a single size; diameters in m

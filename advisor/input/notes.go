@@ -2,6 +2,7 @@ package input
 
 import (
 	"fmt"
+	"slices"
 )
 
 // Notes collects the assumptions of one triage in the order they were made:
@@ -17,13 +18,15 @@ func (n *Notes) Add(format string, args ...any) {
 	if n == nil {
 		return
 	}
-	n.list = append(n.list, fmt.Sprintf(format, args...))
+	n.Text(fmt.Sprintf(format, args...))
 }
 
 // Text adds a note already written out; the frequent notes are built by
-// concatenation with number.Shortest, which spares fmt's formatting.
+// concatenation with number.Shortest, which spares fmt's formatting. A note
+// already in the list is not repeated (the same liquid looked up at two
+// temperatures states its untabulated properties twice).
 func (n *Notes) Text(s string) {
-	if n != nil {
+	if n != nil && !slices.Contains(n.list, s) {
 		n.list = append(n.list, s)
 	}
 }

@@ -16,7 +16,7 @@ import (
 // nobody gave, an unknown salt).
 func Resolve(s *Sample, lib *library.Library, n *Notes) (*Conditions, error) {
 	bad := &Error{}
-	c := &Conditions{Symptom: s.Symptom, Product: s.Product, PH: math.NaN(), IsoelectricPH: math.NaN(), Zeta: math.NaN(),
+	c := &Conditions{Symptom: s.Symptom, Product: s.Product, Constraints: s.Constraints, PH: math.NaN(), IsoelectricPH: math.NaN(), Zeta: math.NaN(),
 		Henry: math.NaN(), SurfaceCharge: math.NaN(), DiffusePotential: math.NaN()}
 	p, m := &s.Particles, &s.Medium
 

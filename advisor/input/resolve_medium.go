@@ -30,7 +30,13 @@ func resolveLiquid(lib *library.Library, m *Medium, mediumT, storageT float64, t
 	}
 	atMedium := atStorage
 	if mediumT != storageT {
-		if atMedium, err = liquidAt(liquid, mediumT, "/medium/temperature_c", n); err != nil {
+		// The liquid at the medium temperature only carries stated
+		// properties to storage; without any, its sources are not listed.
+		var mediumNotes *Notes
+		if m.DensityKgM3 != nil || m.ViscosityMPaS != nil || m.Permittivity != nil {
+			mediumNotes = n
+		}
+		if atMedium, err = liquidAt(liquid, mediumT, "/medium/temperature_c", mediumNotes); err != nil {
 			bad.Problems = append(bad.Problems, err.(*Error).Problems...)
 			return LiquidState{Key: key}
 		}

@@ -26,6 +26,10 @@ type Sample struct {
 	Analysis    *Analysis    `json:"analysis,omitempty"`
 	// Observations follow the complaint over time (see ObservationPoint).
 	Observations []ObservationPoint `json:"observations,omitempty" validate:"omitempty,max=20,dive"`
+	// Constraints names inputs the product cannot change (a salt that is
+	// part of the recipe, a size set by the grade): remedies that would
+	// change one are withheld and listed on their cause.
+	Constraints []string `json:"constraints,omitempty" validate:"omitempty,max=30,dive,oneof=medium.cosolvents medium.density_kg_m3 medium.electrolytes medium.free_polymer medium.ionic_strength_mM medium.ph medium.viscosity_mPa_s medium.yield_stress_Pa particles.density_kg_m3 particles.diameter_nm particles.size_distribution particles.solubility_mol_m3 particles.volume_fraction particles.zeta_mV stabilizer.adsorbing_polymer stabilizer.layer_thickness_nm stabilizer.solvent_quality storage.max_temperature_c storage.min_temperature_c storage.shear_rate_per_s storage.temperature_c"`
 }
 
 // Models selects optional physical models; the defaults are named in every report.

@@ -11,3 +11,12 @@ import (
 var ApproachRoot = approachRoot
 
 func SolverIDs() []string { return slices.Sorted(maps.Keys(solvers)) }
+
+func ChangedInputs() []string {
+	var out []string
+	for _, in := range changes {
+		out = append(out, in...)
+	}
+	slices.Sort(out)
+	return slices.Compact(out)
+}

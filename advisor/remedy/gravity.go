@@ -89,6 +89,7 @@ func solveViscosity(cs *Case) (Target, string, bool) {
 func solveYieldStress(cs *Case) (Target, string, bool) {
 	c := cs.Cond
 	tau := physics.YieldStressToHoldSphere(c.LargestRadius(), c.ParticleDensity-c.Liquid.Density)
-	return Target{"medium.yield_stress_Pa", ">=", tau, "Pa"},
-		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985)", true
+	return Target{"medium.yield_stress_Pa", ">=", SpecifiedYieldStress(tau), "Pa"},
+		"largest particle held at rest: yield number 3 tau_y/(2 drho g R) >= 0.143 (Beris et al. 1985), " +
+			number.Quantity(tau, "Pa") + ", with a safety factor of 2 and no less than 0.1 Pa [practice]", true
 }
