@@ -30,9 +30,6 @@ func (ev *evaluation) computeInteraction() {
 	if !math.IsNaN(c.SurfaceCharge) {
 		ev.set("surface_charge_density", c.SurfaceCharge, "site-binding model of the material (see assumptions) at the product's pH and ions")
 		ev.set("diffuse_layer_potential", c.DiffusePotential*1e3, "site-binding model: Stern-plane potential, Grahame equation in the product's ion mixture")
-		if (c.ZetaSource == "measured" || c.ZetaSource == "mobility") && c.DiffusePotential != 0 {
-			ev.set("zeta_over_model", c.Zeta/c.DiffusePotential, "measured zeta over the site model's diffuse-layer potential in the product")
-		}
 	}
 	if !math.IsNaN(c.Henry) {
 		ev.set("henry_function", c.Henry, "Henry's function used to convert mobility to zeta (see assumptions)")

@@ -33,7 +33,6 @@ var scaleSpecs = []ScaleSpec{
 	{"henry_function", "1", "Henry's function used to convert mobility to zeta potential"},
 	{"surface_charge_density", "C/m^2", "charge of the surface plane from the site-binding model in the product's liquid"},
 	{"diffuse_layer_potential", "mV", "potential at the start of the diffuse layer from the site-binding model in the product's liquid"},
-	{"zeta_over_model", "1", "measured zeta potential over the site-binding model's diffuse-layer potential in the product (zeta assumed measured in the product)"},
 	{"ph_distance_from_iep", "pH", "distance of the pH from the isoelectric point"},
 	{"hamaker_constant", "zJ", "particle-medium-particle Hamaker constant"},
 	{"energy_barrier", "kT", "height of the primary maximum of the interaction energy"},

@@ -37,17 +37,13 @@ const minFitStern, maxFitStern = 1e-3, 1e3
 // product: the Stern capacitance of the material's site model is fitted so
 // that the model's slip-plane potential in the measurement liquid equals
 // the measured zeta, and the model with it is evaluated in the product.
-// Without a stated liquid, zeta is taken as measured in the product, and
-// the site model's own value there is kept for comparison. The fitted
+// Without a stated liquid, zeta is taken as measured in the product and the
+// site model is not needed. The fitted
 // capacitance goes into a copy of c.Sites: the surface Resolve built is
 // shared by the draws that carry the zeta potential again (Rederive).
 func carryZeta(c *Conditions, meas *measuredIn, n *Notes) {
 	if meas == nil {
 		n.Add("particles.zeta_measured_in not given: the zeta potential is assumed measured in the product itself")
-		if c.Sites != nil && c.Liquid.Aqueous && !math.IsNaN(c.PH) {
-			st := c.SurfaceState(c.PH)
-			c.SurfaceCharge, c.DiffusePotential = st.Charge, st.DiffusePotential
-		}
 		return
 	}
 	if c.Sites == nil || !c.Liquid.Aqueous || math.IsNaN(c.PH) {
