@@ -235,7 +235,7 @@ func (e *evidence) predict(c *input.Conditions, f rule.Facts) (out [numObservabl
 		}
 	}
 	if e.present[obsRedispersion] {
-		p := e.redispersion(f, flocs, other)
+		p := e.redispersion(flocs)
 		out[obsRedispersion], ll = p, ll+p.ll
 	}
 	return out, ll, flocs
@@ -289,20 +289,21 @@ func (e *evidence) viscosity(c *input.Conditions, f rule.Facts, agg float64, oth
 }
 
 // redispersion predicts whether the sediment redisperses on gentle
-// shaking (1) or not (0). Flocs held weakly while the primary barrier
-// holds (a secondary minimum, a depletion well, bridges) form a loose,
-// voluminous sediment that redisperses; particles that reach the primary
-// minimum stick irreversibly, and deflocculated particles that settle one
-// by one pack into a dense cake: neither redisperses (Verwey & Overbeek
-// 1948, Theory of the Stability of Lyophobic Colloids, ch. 1; Hiestand
-// 1964, "Theory of coarse suspension formulation", J. Pharm. Sci. 53:1).
-// The likelihood is Bernoulli with the error rate redispersionError,
-// relative to a correct prediction (0 when the draw predicts the
-// observation, ln(error/(1-error)) when not).
-func (e *evidence) redispersion(f rule.Facts, flocs, other bool) prediction {
-	loose := flocs && other && f.Number("energy_barrier") >= f.Number("min_barrier_kT")
+// shaking (1) or not (0). A flocculated dispersion settles as flocs into a
+// loose, voluminous sediment that shaking breaks up again (as flocs, when
+// they are held in the primary minimum); deflocculated particles that
+// settle one by one slide past each other into a dense sediment that cakes
+// and does not redisperse — the classic distinction of suspension
+// formulation, and the reason for controlled flocculation (Hiestand 1964,
+// "Theory of coarse suspension formulation", J. Pharm. Sci. 53:1;
+// Haines & Martin 1961, J. Pharm. Sci. 50:228). So a draw that makes flocs
+// by the observed age, by any route, predicts redispersion. The likelihood
+// is Bernoulli with the error rate redispersionError, relative to a correct
+// prediction (0 when the draw predicts the observation, ln(error/(1-error))
+// when not).
+func (e *evidence) redispersion(flocs bool) prediction {
 	v := 0.0
-	if loose {
+	if flocs {
 		v = 1
 	}
 	p := prediction{ok: true, value: v, lo: v, hi: v}
