@@ -55,6 +55,23 @@ var (
 	settlingModelWidth = math.Log(1.3)
 	halfLifeModelWidth = math.Log(10)
 	growthModelWidth   = math.Log(1.2)
+	// viscosityModelWidth: the relative viscosity of a floc suspension
+	// from Krieger-Dougherty on the flocs' effective volume fraction, a
+	// factor 1.5 [practice] (floc porosity and breakup under the
+	// viscometer's shear are not modelled).
+	viscosityModelWidth = math.Log(1.5)
+)
+
+// The redispersion test and the viscosity prediction.
+const (
+	// redispersionError is the chance that a visual redispersion test
+	// (invert or shake gently, look for a residue) reports the other
+	// outcome: 0.2 [practice].
+	redispersionError = 0.2
+	// reportedViscosityRatio bounds a predicted viscosity ratio in the
+	// consistency list: flocs that jam the suspension predict an unbounded
+	// rise, and the request accepts changes up to 100,000 %.
+	reportedViscosityRatio = 1e4
 )
 
 // The observables a request can carry, in the order of the consistency
@@ -63,6 +80,8 @@ const (
 	obsClearLayer = iota
 	obsFlocs
 	obsGrowth
+	obsViscosity
+	obsRedispersion
 	numObservables
 )
 
@@ -70,7 +89,15 @@ var observableNames = [numObservables]struct{ name, unit string }{
 	{"clear_layer_mm", "mm"},
 	{"flocs_by_age", "log10 d"},
 	{"size_growth_percent", "%"},
+	{"viscosity_change_percent", "%"},
+	{"sediment_redisperses", "1 = yes"},
 }
+
+// verdictLogLikelihood is, per observable, the log-likelihood below which
+// the best draw disagrees with the observation: 2 widths of a lognormal
+// likelihood, and for the redispersion test any draw predicting the other
+// outcome.
+var verdictLogLikelihood = [numObservables]float64{-2, -2, -2, -2, 0}
 
 // evidence is what a request observed: per observable the observed value
 // and the log-width of its likelihood (measurement and model combined).
@@ -105,6 +132,17 @@ func observations(s *input.Sample, c *input.Conditions) evidence {
 		u := uncertainty.ObservationWidth(s.Uncertainty, "observation.size_growth_percent", o.SizeGrowth)
 		e.present[obsGrowth], e.observed[obsGrowth] = true, o.SizeGrowth
 		e.width[obsGrowth] = math.Hypot(logWidth(u, 100+o.SizeGrowth), growthModelWidth)
+	}
+	if !math.IsNaN(o.ViscosityChange) {
+		u := uncertainty.ObservationWidth(s.Uncertainty, "observation.viscosity_change_percent", o.ViscosityChange)
+		e.present[obsViscosity], e.observed[obsViscosity] = true, o.ViscosityChange
+		e.width[obsViscosity] = math.Hypot(logWidth(u, 100+o.ViscosityChange), viscosityModelWidth)
+	}
+	if o.Redisperses != "" {
+		e.present[obsRedispersion] = true
+		if o.Redisperses == "yes" {
+			e.observed[obsRedispersion] = 1
+		}
 	}
 	return e
 }
@@ -168,15 +206,17 @@ func (e *evidence) predict(c *input.Conditions, f rule.Facts) (out [numObservabl
 		}
 		out[obsFlocs], ll = p, ll+p.ll
 	}
+	agg := math.NaN() // relative diameter growth of the aggregates by the age
+	if !math.IsNaN(log10Half) {
+		agg = physics.AggregateDiameterGrowth(age, math.Pow(10, log10Half), physics.ReactionLimitedFractalDimension)
+	}
 	if e.present[obsGrowth] {
 		growth, known := 0.0, false
 		if g := f.Number("predicted_size_growth_at_age"); !math.IsNaN(g) {
 			growth, known = g, true
 		}
-		if !math.IsNaN(log10Half) {
-			half := math.Pow(10, log10Half) // +Inf for a very stable pair
-			growth = math.Max(growth, 100*physics.AggregateDiameterGrowth(age, half, physics.ReactionLimitedFractalDimension))
-			known = true
+		if !math.IsNaN(agg) {
+			growth, known = math.Max(growth, 100*agg), true
 		}
 		if known {
 			p := prediction{ok: true, value: growth, lo: growth, hi: growth}
@@ -189,7 +229,88 @@ func (e *evidence) predict(c *input.Conditions, f rule.Facts) (out [numObservabl
 			out[obsGrowth], ll = p, ll+p.ll
 		}
 	}
+	if e.present[obsViscosity] {
+		if p, ok := e.viscosity(c, f, agg, other); ok {
+			out[obsViscosity], ll = p, ll+p.ll
+		}
+	}
+	if e.present[obsRedispersion] {
+		p := e.redispersion(flocs)
+		out[obsRedispersion], ll = p, ll+p.ll
+	}
 	return out, ll, flocs
+}
+
+// viscosity predicts the relative change of viscosity by the observed age,
+// in %, from the growth of the aggregates agg (relative diameter growth,
+// NaN when no half-life is known). Aggregates of N primaries of radius a
+// and fractal dimension df (physics.ReactionLimitedFractalDimension) have
+// the radius R = a N^(1/df) and enclose the volume fraction
+//
+//	phi_floc = phi (R/a)^(3 - df)
+//
+// (Quemada 1998, "Rheological modelling of complex fluids. I", Eur. Phys.
+// J. AP 1:119, the effective volume fraction of fractal flocs; the mass-
+// radius relation of Lin et al. 1989, Nature 339:360); the suspension's
+// effective volume fraction becomes the larger of phi_floc and the
+// dispersed particles' (shell included), and the change is the ratio of
+// the Krieger-Dougherty viscosities (Krieger & Dougherty 1959, Trans. Soc.
+// Rheol. 3:137, eq. 13) after and before. Flocs that bridging, a depletion
+// well or a deep secondary minimum make at once, and those that freezing
+// forces together (freeze_margin < 0: ice crystals concentrate the
+// particles between them), have no timed size: the prediction extends to
+// a jammed suspension. The likelihood is lognormal
+// in 1 + change/100.
+func (e *evidence) viscosity(c *input.Conditions, f rule.Facts, agg float64, other bool) (prediction, bool) {
+	phiEff, phiMax := f.Number("effective_volume_fraction"), f.Number("max_packing_fraction")
+	if !(phiEff >= 0 && phiMax > 0 && phiEff < phiMax) {
+		return prediction{}, false
+	}
+	before := physics.KriegerDougherty(phiEff, phiMax, physics.DefaultIntrinsicViscosity)
+	ratioAt := func(growth float64) float64 {
+		phi := math.Max(phiEff, c.VolumeFraction*math.Pow(1+growth, 3-physics.ReactionLimitedFractalDimension))
+		if phi >= phiMax {
+			return reportedViscosityRatio
+		}
+		return math.Min(physics.KriegerDougherty(phi, phiMax, physics.DefaultIntrinsicViscosity)/before, reportedViscosityRatio)
+	}
+	ratio := 1.0
+	if !math.IsNaN(agg) {
+		ratio = ratioAt(agg)
+	}
+	hi := ratio
+	if other || f.Number("freeze_margin") < 0 {
+		hi = reportedViscosityRatio
+	}
+	p := prediction{ok: true, value: 100 * (ratio - 1), lo: 100 * (ratio - 1), hi: 100 * (hi - 1)}
+	obs := math.Max(1+e.observed[obsViscosity]/100, 1e-3)
+	p.ll = uncertainty.LogLikelihood(obs, ratio, hi, e.width[obsViscosity])
+	return p, true
+}
+
+// redispersion predicts whether the sediment redisperses on gentle
+// shaking (1) or not (0). A flocculated dispersion settles as flocs into a
+// loose, voluminous sediment that shaking breaks up again (as flocs, when
+// they are held in the primary minimum); deflocculated particles that
+// settle one by one slide past each other into a dense sediment that cakes
+// and does not redisperse — the classic distinction of suspension
+// formulation, and the reason for controlled flocculation (Hiestand 1964,
+// "Theory of coarse suspension formulation", J. Pharm. Sci. 53:1;
+// Haines & Martin 1961, J. Pharm. Sci. 50:228). So a draw that makes flocs
+// by the observed age, by any route, predicts redispersion. The likelihood
+// is Bernoulli with the error rate redispersionError, relative to a correct
+// prediction (0 when the draw predicts the observation, ln(error/(1-error))
+// when not).
+func (e *evidence) redispersion(flocs bool) prediction {
+	v := 0.0
+	if flocs {
+		v = 1
+	}
+	p := prediction{ok: true, value: v, lo: v, hi: v}
+	if v != e.observed[obsRedispersion] {
+		p.ll = math.Log(redispersionError / (1 - redispersionError))
+	}
+	return p
 }
 
 // drawOutcome is what the analysis keeps of one draw.
@@ -511,7 +632,7 @@ func consistency(ev evidence, out []drawOutcome) []Consistency {
 			Low: number.Round(uncertainty.Quantile(lows, ones, 0.025), 3), High: number.Round(uncertainty.Quantile(highs, ones, 0.975), 3)}
 		obs := ev.observed[i]
 		verdict := "consistent"
-		if best < -2 {
+		if best < verdictLogLikelihood[i] {
 			verdict = "above_prediction"
 			if obs < pr.Value {
 				verdict = "below_prediction"

@@ -77,6 +77,7 @@ var defaults = []spreadDefault{
 	{"medium.yield_stress_Pa", Measured, 0, 0, 1.2, "yield stress depends on the method and time scale, 20 % [practice]"},
 	{"observation.clear_layer_mm", Measured, 1, 0.1, 0, "a layer boundary read by eye on a ruler, +-1 mm or 10 % [practice]"},
 	{"observation.size_growth_percent", Measured, 10, 0, 0, "two size measurements at 5-10 % each, +-10 percentage points [practice]"},
+	{"observation.viscosity_change_percent", Measured, 5, 0.1, 0, "two viscosity readings at the same shear rate and temperature, +-5 percentage points or 10 % [practice]"},
 	{"observation.age_days", Measured, 0, 0, 3, "the time by which a change is noticed: it may have happened any time before inspection, a factor 3 [practice]"},
 }
 
@@ -115,9 +116,10 @@ var how = map[string]string{
 // observationPaths are the observation fields whose uncertainty widens the
 // likelihood of the draws; they are not drawn.
 var observationPaths = map[string]bool{
-	"observation.clear_layer_mm":      true,
-	"observation.size_growth_percent": true,
-	"observation.age_days":            true,
+	"observation.clear_layer_mm":           true,
+	"observation.size_growth_percent":      true,
+	"observation.age_days":                 true,
+	"observation.viscosity_change_percent": true,
 }
 
 // lookup finds the default of a path and provenance.
