@@ -740,7 +740,7 @@ function compareSection(c) {
     h("thead", {}, h("tr", {}, h("th", { scope: "col" }, "#"), h("th", { scope: "col" }, "Input"), h("th", { scope: "col" }, "Reference → complaint"),
       h("th", { scope: "col" }, "Share"), order.map(scaleHead))),
     h("tbody", {}, (c.differences || []).map((d) => h("tr", { "data-path": d.path },
-      h("td", { class: "num" }, d.rank), h("td", {}, h("code", {}, d.path)),
+      h("td", { class: "num" }, d.rank), h("td", { class: "path" }, h("code", {}, d.path)),
       h("td", {}, `${shown(d.reference)} → ${shown(d.complaint)}`, d.problem ? h("span", { class: "criterion" }, d.problem) : null),
       h("td", { class: "num key" }, shareText(d.share)), order.map((s) => effect(d.effects, s))))));
   const pairs = (c.pairs || []).length
