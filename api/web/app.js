@@ -726,7 +726,8 @@ async function triage(ev) {
 
 // ---- compare with a reference batch ----
 
-const shown = (v) => (v === null || v === undefined ? "absent" : typeof v === "object" ? JSON.stringify(v) : fmt(v));
+// shown prints a compared value briefly: objects as JSON without quotes.
+const shown = (v) => (v === null || v === undefined ? "absent" : typeof v === "object" ? JSON.stringify(v).replace(/"/g, "").replace(/,/g, ", ") : fmt(v));
 const shareText = (x) => (x === undefined ? "–" : `${Math.round(x * 100)} %`);
 
 function compareSection(c) {
@@ -741,7 +742,7 @@ function compareSection(c) {
       h("th", { scope: "col" }, "Share"), order.map(scaleHead))),
     h("tbody", {}, (c.differences || []).map((d) => h("tr", { "data-path": d.path },
       h("td", { class: "num" }, d.rank), h("td", { class: "path" }, h("code", {}, d.path)),
-      h("td", {}, `${shown(d.reference)} → ${shown(d.complaint)}`, d.problem ? h("span", { class: "criterion" }, d.problem) : null),
+      h("td", { class: "values" }, `${shown(d.reference)} → ${shown(d.complaint)}`, d.problem ? h("span", { class: "criterion" }, d.problem) : null),
       h("td", { class: "num key" }, shareText(d.share)), order.map((s) => effect(d.effects, s))))));
   const pairs = (c.pairs || []).length
     ? [h("h4", {}, "Differences swapped two by two"),
@@ -759,7 +760,7 @@ function compareSection(c) {
       h("tbody", {}, order.map((s) => h("tr", { class: s.scale === key ? "key" : null },
         h("td", {}, human(s.scale), s.scale === key ? h("span", { class: "badge" }, "key scale") : null),
         ["reference", "complaint", "change"].map((k) => h("td", { class: "num" }, s[k] !== undefined ? `${fmt(s[k])} ${unit(s.unit)}` : "–")))))),
-    h("h4", {}, "Differences, largest share first"), diffs, pairs,
+    h("h4", {}, "Differences, largest share first"), h("div", { class: "scroll" }, diffs), pairs,
     h("details", { class: "fold" }, h("summary", {}, "Method"), h("p", {}, c.method)),
     h("h3", { class: "triage-title" }, "The complaint's triage"));
 }
