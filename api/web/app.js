@@ -41,6 +41,8 @@ const GROUPS = [
       ["salts", "Salts", "salts"],
       ["medium.ionic_strength_mM", "Ionic strength (instead of salts)"],
       ["medium.conductivity_uS_cm", "Conductivity (estimate)"],
+      ["medium.hardness.value", "Water hardness"],
+      ["medium.hardness.unit", "Hardness unit"],
       ["medium.cosolvents.0.name", "Co-solvent"],
       ["medium.cosolvents.0.mass_fraction", "Co-solvent mass fraction"],
     ],
@@ -89,7 +91,12 @@ const GROUPS = [
       ["observation.sediment_redisperses", "Sediment redisperses"],
       ["observation.size_growth_percent", "Growth of the median size"],
       ["observation.viscosity_change_percent", "Change of viscosity"],
+      ["observations", "Series over time", "observations"],
     ],
+  },
+  {
+    id: "constraints", title: "What the product cannot change", folded: true,
+    fields: [["constraints", "Fixed inputs (remedies that change one are withheld)", "multi"]],
   },
   {
     id: "criteria", title: "Acceptance criteria and models", folded: true,
@@ -116,6 +123,13 @@ let library = { materials: [], liquids: [] };
 let extras = {}; // loaded request members the form has no field for, kept as they were
 let lastReport = null;
 let saltRows = 0;
+let obsRows = 0;
+
+// The columns of the observations series, in the order of the table.
+const OBS_COLUMNS = [
+  ["age_days", "Age"], ["clear_layer_mm", "Clear layer"], ["median_diameter_nm", "d50"],
+  ["viscosity_mPa_s", "Viscosity"], ["sediment_redisperses", "Redisperses"],
+];
 
 // h builds an element: h("p", {class: "x"}, "text", child, ...). Text is
 // always set as text, never parsed as markup.
@@ -170,6 +184,7 @@ function schemaAt(path) {
 
 function unitText(s) {
   const u = s && s["x-unit"];
+  if (u === "hardness.unit") return "unit below";
   return u === undefined ? "" : (u in UNITS ? UNITS[u] : u);
 }
 
@@ -203,6 +218,11 @@ function control(path, kind, s) {
     return h("select", common,
       h("option", { value: "" }, kind === "material" ? "— own values —" : "— default (water) —"),
       items.map((m) => h("option", { value: m.key }, `${m.name} (${m.key})`)));
+  }
+  if (kind === "multi") {
+    const values = (s && s.items && s.items.enum) || [];
+    return h("select", Object.assign({ multiple: true, size: 6, "data-type": "list" }, common),
+      values.map((v) => h("option", { value: v }, v.replace(/_/g, " "))));
   }
   if (s && s.enum) {
     const def = s.default !== undefined ? ` (default ${s.default})` : "";
@@ -264,12 +284,57 @@ function saltsBlock() {
     h("button", { type: "button", class: "small", id: "add-salt", onclick: () => { list.append(saltRow()); list.lastChild.querySelector("input").focus(); } }, "Add a salt"));
 }
 
+function obsRow() {
+  const i = obsRows++;
+  const cell = ([key, label]) => {
+    const path = `observations.${i}.${key}`;
+    const s = schemaAt(path);
+    const id = fieldId(path);
+    return h("td", { class: "field cell", "data-field": path },
+      h("label", { for: id, class: "visually-hidden" }, `${label}, inspection ${i + 1}`),
+      control(path, null, s), h("span", { class: "visually-hidden", id: `${id}-unit` }, unitText(s)),
+      h("p", { class: "err", id: `${id}-err` }));
+  };
+  const row = h("tr", { "data-obs": i }, OBS_COLUMNS.map(cell),
+    h("td", {}, h("button", { type: "button", class: "small", "aria-label": `Remove inspection ${i + 1}`, onclick: () => { row.remove(); renumberObs(); saveState(); } }, "×")));
+  return row;
+}
+
+// renumberObs keeps the inspections' paths consecutive after one is removed.
+function renumberObs() {
+  const rows = [...document.querySelectorAll("[data-obs]")];
+  obsRows = 0;
+  for (const row of rows) {
+    const values = [...row.querySelectorAll("[data-path]")].map((el) => el.value);
+    const fresh = obsRow();
+    [...fresh.querySelectorAll("[data-path]")].forEach((el, k) => { el.value = values[k]; });
+    row.replaceWith(fresh);
+  }
+}
+
+function observationsBlock(label) {
+  const body = h("tbody", { id: "observations" });
+  const head = OBS_COLUMNS.map(([key, text]) => {
+    const u = unitText(schemaAt(`observations.0.${key}`));
+    return h("th", { scope: "col" }, text, u ? h("span", { class: "unit" }, ` ${u}`) : null);
+  });
+  return h("div", { class: "obs" },
+    h("div", { class: "obs-head" }, label, h("span", { class: "hint" }, " three ages or more give a trend")),
+    h("table", { class: "obs-table" }, h("thead", {}, h("tr", {}, head, h("th", {}, h("span", { class: "visually-hidden" }, "Remove")))), body),
+    h("button", { type: "button", class: "small", id: "add-obs", onclick: () => { body.append(obsRow()); body.lastChild.querySelector("input").focus(); } }, "Add an inspection"));
+}
+
 function buildForm() {
   const groups = $("#groups");
   groups.replaceChildren();
   saltRows = 0;
+  obsRows = 0;
   for (const g of GROUPS) {
-    const make = ([path, label, kind]) => (kind === "salts" ? saltsBlock() : field(path, label, kind));
+    const make = ([path, label, kind]) => {
+      if (kind === "salts") return saltsBlock();
+      if (kind === "observations") return observationsBlock(label);
+      return field(path, label, kind);
+    };
     const body = [g.fields.map(make)];
     if (g.more) body.push(h("details", { class: "more" }, h("summary", {}, "More"), g.more.map(make)));
     const fs = h("fieldset", { class: "group", id: `group-${g.id}` }, h("legend", {}, g.title), body);
@@ -279,6 +344,10 @@ function buildForm() {
 }
 
 function typed(el) {
+  if (el.dataset.type === "list") {
+    const picked = [...el.selectedOptions].map((o) => o.value);
+    return picked.length ? picked : undefined;
+  }
   const raw = el.value.trim();
   if (raw === "") return undefined;
   if (el.dataset.type === "boolean") return raw === "true";
@@ -321,6 +390,10 @@ function collect() {
     req.medium.electrolytes = req.medium.electrolytes.filter(Boolean);
     if (!req.medium.electrolytes.length) delete req.medium.electrolytes;
   }
+  if (req.observations) {
+    req.observations = req.observations.filter(Boolean);
+    if (!req.observations.length) delete req.observations;
+  }
   return merge(req, JSON.parse(JSON.stringify(extras)));
 }
 
@@ -340,8 +413,16 @@ function fill(req) {
   extras = {};
   const salts = (req.medium && req.medium.electrolytes) || [];
   for (let i = 1; i < salts.length; i++) $("#salts").append(saltRow());
+  for (let i = 0; i < (req.observations || []).length; i++) $("#observations").append(obsRow());
   const kept = [];
-  for (const [path, v] of leaves(req, "", [])) {
+  const rest = Object.assign({}, req);
+  const fixed = $("#groups [data-path=constraints]");
+  if (Array.isArray(req.constraints) && req.constraints.every((c) => [...fixed.options].some((o) => o.value === c))) {
+    for (const o of fixed.options) o.selected = req.constraints.includes(o.value);
+    if (req.constraints.length) fixed.closest("details").open = true;
+    delete rest.constraints;
+  }
+  for (const [path, v] of leaves(rest, "", [])) {
     const el = document.querySelector(`#groups [data-path="${CSS.escape(path)}"]`);
     if (el && (v === null || typeof v !== "object")) {
       if (el.tagName === "SELECT" && v !== null && ![...el.options].some((o) => o.value === String(v))) {
@@ -430,6 +511,7 @@ function clearProblems() {
   for (const f of document.querySelectorAll(".field.invalid")) f.classList.remove("invalid");
   for (const el of document.querySelectorAll("[aria-invalid]")) el.removeAttribute("aria-invalid");
   for (const el of document.querySelectorAll(".field .err")) el.textContent = "";
+  $("#reference-err").textContent = "";
 }
 
 function problemText(e) {
@@ -437,12 +519,23 @@ function problemText(e) {
   return e.valid ? `${e.reason}; valid: ${e.valid}${u ? ` ${u}` : ""}` : e.reason;
 }
 
-function showProblem(p) {
+// showProblem marks each field a problem names. From the compare route the
+// complaint's pointers (/complaint/...) name the form's fields and the
+// reference's (/reference/...) are listed beside the reference box.
+function showProblem(p, compared) {
   clearProblems();
   const list = h("ul");
+  const onReference = [];
   let first = null;
   for (const e of p.errors || []) {
-    const path = (e.pointer || "").replace(/^\//, "").split("/").join(".");
+    let pointer = e.pointer || "";
+    if (compared && pointer.startsWith("/reference")) {
+      onReference.push(`${pointer.replace(/^\/reference/, "") || "the reference"}: ${problemText(e)}`);
+      list.append(h("li", {}, `reference ${pointer.replace(/^\/reference/, "")}: ${problemText(e)}`));
+      continue;
+    }
+    if (compared) pointer = pointer.replace(/^\/complaint/, "");
+    const path = pointer.replace(/^\//, "").split("/").join(".");
     const el = path && document.querySelector(`#groups [data-path="${CSS.escape(path)}"]`);
     if (el) {
       const fieldEl = el.closest(".field");
@@ -455,6 +548,10 @@ function showProblem(p) {
     } else {
       list.append(h("li", {}, `${e.pointer || "request"}: ${problemText(e)}`));
     }
+  }
+  if (onReference.length) {
+    $("#reference-err").textContent = `In the reference: ${onReference.join("; ")}`;
+    $("#compare-panel").open = true;
   }
   $("#problems").append(h("h3", {}, p.title || "The request was refused"), p.detail ? h("p", {}, p.detail) : null, list);
   $("#problems").hidden = false;
@@ -508,8 +605,12 @@ function causeCard(c) {
         h("td", { class: "num" }, `${fmt(e.value)} ${unit(e.unit)}`)))))
     : null;
   const remedies = (c.remedies || []).length ? [h("h4", { class: "visually-hidden" }, "Remedies"), h("ul", { class: "remedies" }, c.remedies.map(remedyItem))] : null;
+  const withheld = (c.withheld || []).length
+    ? h("p", { class: "withheld" }, "Withheld by the constraints: ",
+      c.withheld.map((w, i) => [i ? "; " : "", h("b", {}, human(w.id)), ` (would change ${w.constraints.join(", ")})`]))
+    : null;
   return h("li", { class: `cause rank-${c.rank}${c.rank > 1 ? " minor" : ""}`, "data-cause": c.id },
-    head, h("p", { class: "explanation" }, c.explanation), ev, remedies);
+    head, h("p", { class: "explanation" }, c.explanation), ev, remedies, withheld);
 }
 
 function consistencySection(rows) {
@@ -524,6 +625,16 @@ function consistencySection(rows) {
           h("td", { class: "num" }, `${p.value !== undefined ? fmt(p.value) : "–"} ${u}${range}`),
           h("td", { class: good ? "verdict-ok" : "verdict-bad" }, human(r.verdict || "")));
       }))));
+}
+
+function trendsSection(trends) {
+  const param = (q) => `${q.name} ${fmt(q.value)} ${unit(q.unit)} (${fmt(q.low)} to ${fmt(q.high)})`;
+  return h("div", { class: "section trends", id: "trends" }, h("h3", {}, "Trends over the inspections"),
+    trends.map((t) => h("div", { class: "trend", "data-trend": t.quantity },
+      h("p", {}, h("b", {}, human(t.quantity)), ` (${t.points} inspections): `, h("span", { class: "badge" }, human(t.shape)), " ", t.says),
+      (t.fits || []).length ? h("table", {}, h("thead", {}, h("tr", {}, ["Form", "Parameters (95 %)", "R²", "RMS residual"].map((x) => h("th", {}, x)))),
+        h("tbody", {}, t.fits.map((f) => h("tr", {}, h("td", {}, f.form), h("td", {}, (f.parameters || []).map(param).join("; ")),
+          h("td", { class: "num" }, fmt(f.r_squared)), h("td", { class: "num" }, fmt(f.rms_residual)))))) : null)));
 }
 
 function renderReport(rep) {
@@ -546,6 +657,7 @@ function renderReport(rep) {
       h("ul", {}, rep.measure_next.map((m) => h("li", {}, h("b", {}, m.input), m.share !== undefined ? ` (${pct(m.share)} of the doubt)` : "", m.how ? `: ${m.how}` : "")))));
   }
   if (rep.consistency && rep.consistency.length) parts.push(consistencySection(rep.consistency));
+  if (rep.trends && rep.trends.length) parts.push(trendsSection(rep.trends));
   if (rep.ruled_out && rep.ruled_out.length) {
     parts.push(h("div", { class: "section ruled-out" }, h("h3", {}, "Ruled out"),
       h("ul", {}, rep.ruled_out.map((r) => h("li", {}, h("b", {}, human(r.id)), `: ${r.reason}`,
@@ -612,6 +724,86 @@ async function triage(ev) {
   }
 }
 
+// ---- compare with a reference batch ----
+
+// shown prints a compared value briefly: objects as JSON without quotes.
+const shown = (v) => (v === null || v === undefined ? "absent" : typeof v === "object" ? JSON.stringify(v).replace(/"/g, "").replace(/,/g, ", ") : fmt(v));
+const shareText = (x) => (x === undefined ? "–" : `${Math.round(x * 100)} %`);
+
+function compareSection(c) {
+  const scales = c.scales || [];
+  const key = c.key_scale;
+  const order = [...scales].sort((a, b) => (b.scale === key) - (a.scale === key));
+  const scaleHead = (s) => h("th", { scope: "col", class: s.scale === key ? "key" : null }, human(s.scale), h("span", { class: "unit" }, ` ${unit(s.unit)}`));
+  const effect = (effects, s) => h("td", { class: `num${s.scale === key ? " key" : ""}` }, effects && effects[s.scale] !== undefined ? fmt(effects[s.scale]) : "–");
+  const diffs = h("table", { class: "differences", id: "differences" },
+    h("caption", {}, "Each difference swapped alone from the reference into it: the change of each scale"),
+    h("thead", {}, h("tr", {}, h("th", { scope: "col" }, "#"), h("th", { scope: "col" }, "Input"), h("th", { scope: "col" }, "Reference → complaint"),
+      h("th", { scope: "col" }, "Share"), order.map(scaleHead))),
+    h("tbody", {}, (c.differences || []).map((d) => h("tr", { "data-path": d.path },
+      h("td", { class: "num" }, d.rank), h("td", { class: "path" }, h("code", {}, d.path)),
+      h("td", { class: "values" }, `${shown(d.reference)} → ${shown(d.complaint)}`, d.problem ? h("span", { class: "criterion" }, d.problem) : null),
+      h("td", { class: "num key" }, shareText(d.share)), order.map((s) => effect(d.effects, s))))));
+  const pairs = (c.pairs || []).length
+    ? [h("h4", {}, "Differences swapped two by two"),
+      h("table", { class: "pairs", id: "pairs" },
+        h("thead", {}, h("tr", {}, ["Pair", "Share", `Interaction on ${human(key || "")}`, `Joint change of ${human(key || "")}`].map((t) => h("th", { scope: "col" }, t)))),
+        h("tbody", {}, c.pairs.map((p) => h("tr", {}, h("td", {}, p.paths.map((x) => h("code", {}, x)).flatMap((x, i) => (i ? [" + ", x] : [x]))),
+          h("td", { class: "num" }, shareText(p.share)),
+          h("td", { class: "num" }, p.interaction && p.interaction[key] !== undefined ? fmt(p.interaction[key]) : "–"),
+          h("td", { class: "num" }, p.effects && p.effects[key] !== undefined ? fmt(p.effects[key]) : (p.problem || "–"))))))]
+    : null;
+  return h("div", { class: "section compare", id: "compare" },
+    h("h3", {}, "Reference against complaint"),
+    h("p", { class: "verdict", id: "verdict" }, c.verdict),
+    h("table", { class: "scales" }, h("thead", {}, h("tr", {}, ["Scale", "Reference", "Complaint", "Change"].map((t) => h("th", { scope: "col" }, t)))),
+      h("tbody", {}, order.map((s) => h("tr", { class: s.scale === key ? "key" : null },
+        h("td", {}, human(s.scale), s.scale === key ? h("span", { class: "badge" }, "key scale") : null),
+        ["reference", "complaint", "change"].map((k) => h("td", { class: "num" }, s[k] !== undefined ? `${fmt(s[k])} ${unit(s.unit)}` : "–")))))),
+    h("h4", {}, "Differences, largest share first"), h("div", { class: "scroll" }, diffs), pairs,
+    h("details", { class: "fold" }, h("summary", {}, "Method"), h("p", {}, c.method)),
+    h("h3", { class: "triage-title" }, "The complaint's triage"));
+}
+
+async function compare() {
+  $("#reference-err").textContent = "";
+  let reference;
+  try { reference = JSON.parse($("#reference-text").value); } catch (e) {
+    $("#reference-err").textContent = `The reference is not JSON: ${e.message}`;
+    $("#reference-text").focus();
+    return;
+  }
+  if (!reference || typeof reference !== "object" || Array.isArray(reference)) {
+    $("#reference-err").textContent = "The reference is one JSON object (one sample).";
+    return;
+  }
+  saveState();
+  const complaint = collect();
+  status("Comparing…");
+  $("#compare-submit").disabled = true;
+  try {
+    const res = await fetch("/v1/compare", { method: "POST", body: JSON.stringify({ reference, complaint }), headers: apiHeaders({ "Content-Type": "application/json" }) });
+    const data = await res.json().catch(() => ({ title: `HTTP ${res.status}` }));
+    if (!res.ok) {
+      showProblem(data, true);
+      $("#answer").replaceChildren(h("p", { class: "placeholder" }, "No comparison: correct the fields marked (in the form for the complaint, in the reference box for the reference) and press Compare again."));
+      $("#print").disabled = true;
+      status(`Refused: ${data.title || res.status}`);
+      return;
+    }
+    clearProblems();
+    renderReport(data.triage);
+    $("#answer").prepend(compareSection(data));
+    status(data.differences && data.differences.length ? `Largest share: ${data.differences[0].path}` : "No difference between the two batches.");
+    $("#report").focus();
+    await drawChart(JSON.stringify(complaint));
+  } catch (e) {
+    status(`The service did not answer: ${e.message}`);
+  } finally {
+    $("#compare-submit").disabled = false;
+  }
+}
+
 // ---- start ----
 
 async function start() {
@@ -625,6 +817,16 @@ async function start() {
   $("#print").addEventListener("click", () => window.print());
   $("#reset").addEventListener("click", () => { extras = {}; buildForm(); clearProblems(); saveState(); status("Form cleared."); });
   $("#load-apply").addEventListener("click", () => loadText($("#load-text").value));
+  $("#compare-submit").addEventListener("click", compare);
+  $("#reference-from-form").addEventListener("click", () => {
+    const ref = collect();
+    delete ref.symptom;
+    delete ref.observation;
+    delete ref.observations;
+    $("#reference-text").value = JSON.stringify(ref, null, 2);
+    status("The form is now the reference too: change the form into the complaint batch and press Compare.");
+  });
+  $("#reference-file").addEventListener("change", async (e) => { const f = e.target.files[0]; if (f) $("#reference-text").value = await f.text(); });
   $("#load-file").addEventListener("change", async (e) => { const f = e.target.files[0]; if (f) loadText(await f.text()); });
   window.addEventListener("hashchange", () => { const req = stateFromURL(); if (req) { fill(req); triage(); } });
   await boot();

@@ -206,6 +206,68 @@ func TestWorkbenchInBrowser(t *testing.T) {
 		t.Errorf("problem beside the diameter %q, aria-invalid %q; want the reason and the valid range", problem, invalid)
 	}
 	shoot(ctx, t, filepath.Join(dir, "workbench-problem.png"), 1280, 1000)
+
+	compareInBrowser(ctx, t, srv.URL, dir, demo)
+}
+
+// compareInBrowser loads the demo into the form as the complaint, pastes
+// the same batch made with less salt as the reference, compares, and holds
+// the verdict on the page to the API's own for the same two samples.
+func compareInBrowser(ctx context.Context, t *testing.T, base, dir string, demo []byte) {
+	t.Helper()
+	var ref map[string]any
+	if err := json.Unmarshal(demo, &ref); err != nil {
+		t.Fatal(err)
+	}
+	delete(ref, "symptom")
+	delete(ref, "observation")
+	ref["sample_id"] = "REFERENCE-LOT"
+	ref["medium"].(map[string]any)["electrolytes"] = []any{map[string]any{"formula": "NaNO3", "concentration_mM": 5}}
+	refJSON, err := json.Marshal(ref)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := compareAnswer(t, base, fmt.Sprintf(`{"reference": %s, "complaint": %s}`, refJSON, demo))
+	demoLit, _ := json.Marshal(string(demo))
+	refLit, _ := json.Marshal(string(refJSON))
+	if err := chromedp.Do(ctx, chromedp.EmulateViewport(1280, 1000), chromedp.Navigate("about:blank"),
+		chromedp.Navigate(base+"/"), chromedp.WaitVisible(chromedp.CSS(`body[data-ready="true"]`))); err != nil {
+		t.Fatalf("opening the page for the compare: %v", err)
+	}
+	fillIn := fmt.Sprintf(`document.querySelector("#load-text").value = %s;
+		document.querySelector("#load-apply").click();
+		document.querySelector("#compare-panel").open = true;
+		document.querySelector("#reference-text").value = %s; true`, demoLit, refLit)
+	if _, err := chromedp.Run(ctx, chromedp.Evaluate[bool](fillIn)); err != nil {
+		t.Fatal(err)
+	}
+	if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#compare-submit")),
+		chromedp.WaitVisible(chromedp.CSS("#verdict")), chromedp.WaitVisible(chromedp.CSS(`#causes li.cause`))); err != nil {
+		failShot(ctx, t, dir)
+		t.Fatalf("comparing: %v", err)
+	}
+	if verdict := text(ctx, t, "#verdict"); verdict != want.Verdict {
+		t.Errorf("verdict on the page %q, the API's %q", verdict, want.Verdict)
+	}
+	if first := attribute(ctx, t, "#differences tbody tr", "data-path"); first != want.Differences[0].Path || first != "/medium/electrolytes" {
+		t.Errorf("first difference on the page %q, the API's %q, want /medium/electrolytes", first, want.Differences[0].Path)
+	}
+	shoot(ctx, t, filepath.Join(dir, "workbench-compare.png"), 1280, 1000)
+}
+
+// compareAnswer is the API's own comparison of two samples.
+func compareAnswer(t *testing.T, base, body string) *advisor.Comparison {
+	t.Helper()
+	res, err := http.Post(base+"/v1/compare", "application/json", strings.NewReader(body))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer res.Body.Close()
+	var c advisor.Comparison
+	if err := json.NewDecoder(res.Body).Decode(&c); err != nil || res.StatusCode != http.StatusOK || len(c.Differences) == 0 {
+		t.Fatalf("the API's comparison: status %d, %v", res.StatusCode, err)
+	}
+	return &c
 }
 
 // failShot saves what the page shows when a step fails, on a fresh
