@@ -76,6 +76,7 @@ type Conditions struct {
 	Criteria Acceptance
 
 	derived *derivation // what the ions and zeta potential were derived from, for Rederive
+	drawn   *Drawn      // what Rederive last derived from, nil for the nominal conditions
 }
 
 // SurfaceSites is the single-site basic Stern surface of the material

@@ -31,4 +31,9 @@ type Case struct {
 		done, ok bool
 		psi      float64
 	}
+
+	// zetaScale is the present zeta potential over the one Rederive gives
+	// at the present salts (1 at the nominal inputs; a draw's error of the
+	// estimate otherwise), worked out once by saltPair.
+	zetaScale float64
 }
