@@ -101,7 +101,7 @@ func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
 // isoelectric point.
 func (c *Conditions) EstimatedPotential(pH float64) float64 {
 	if c.Sites != nil {
-		if zeta, _, ok := c.anchoredEstimate(pH); ok {
+		if zeta, _, _, ok := c.anchoredEstimate(pH); ok {
 			return zeta
 		}
 		return c.SurfaceState(pH).Zeta
