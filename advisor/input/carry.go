@@ -133,7 +133,7 @@ func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, st p
 		return c.SurfaceState(pH).Zeta, c.Sites.Surface.State(pH, anchor.ions, c.Liquid.Permittivity, anchor.tempK).Zeta
 	}
 	st = c.SurfaceState(pH)
-	inProduct, inAnchor := st.Zeta, c.Sites.Surface.State(pH, anchor.ions, c.Liquid.Permittivity, anchor.tempK).Zeta
+	inProduct, inAnchor := st.Zeta, c.anchorZeta(pH, anchor)
 	if !(math.Abs(inAnchor) > minAnchorPotential) {
 		// Near the point of zero charge both potentials vanish together:
 		// their ratio is that of their slopes in pH.
@@ -146,6 +146,19 @@ func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, st p
 		return math.NaN(), reference, st, false
 	}
 	return reference * ratio, reference, st, true
+}
+
+// anchorZeta is the site model's slip-plane potential at pH in the anchor
+// liquid, from the memo of Salts when it holds that pH.
+func (c *Conditions) anchorZeta(pH float64, anchor *measuredIn) float64 {
+	if m := c.anchor; m != nil && m.set && m.pH == pH {
+		return m.zeta
+	}
+	zeta := c.Sites.Surface.State(pH, anchor.ions, c.Liquid.Permittivity, anchor.tempK).Zeta
+	if m := c.anchor; m != nil {
+		m.pH, m.zeta, m.set = pH, zeta, true
+	}
+	return zeta
 }
 
 // Near the point of zero charge, where the site model's slip-plane potential

@@ -77,6 +77,7 @@ type Conditions struct {
 
 	derived *derivation // what the ions and zeta potential were derived from, for Rederive
 	drawn   *Drawn      // what Rederive last derived from, nil for the nominal conditions
+	anchor  *anchorMemo // set only while Salts.With re-derives
 }
 
 // SurfaceSites is the single-site basic Stern surface of the material

@@ -86,19 +86,40 @@ func (c *Conditions) Rederive(d Drawn) {
 	resolveZeta(&p, meas, c, nil)
 }
 
-// WithSalts is a copy of c re-derived by Rederive from the values of its own
-// draw (none for the nominal conditions) with every stated salt scaled by
-// scale more and, unless multivalentConc is NaN, the multivalent salt at
-// multivalentConc (mol/m^3): the ions, the multivalent salt and the zeta
-// potential the conditions would have with those salts. c is not changed.
-func (c *Conditions) WithSalts(scale, multivalentConc float64) *Conditions {
+// Salts re-derives copies of one Conditions with their salts changed, for
+// a remedy's search: see Salts.With.
+type Salts struct {
+	c      *Conditions
+	anchor *anchorMemo
+}
+
+// anchorMemo is the site model's slip-plane potential in the anchor liquid
+// of the zeta estimate (see anchoredEstimate) at pH, which no change of the
+// product's salts moves: Salts works it out once.
+type anchorMemo struct {
+	pH, zeta float64
+	set      bool
+}
+
+// Salts returns the re-deriver of copies of c with changed salts.
+func (c *Conditions) Salts() *Salts { return &Salts{c: c, anchor: &anchorMemo{}} }
+
+// With is a copy of the Conditions re-derived by Rederive from the values of
+// their own draw (none for the nominal conditions) with every stated salt
+// scaled by scale more and, unless multivalentConc is NaN, the multivalent
+// salt at multivalentConc (mol/m^3): the ions, the multivalent salt and the
+// zeta potential the conditions would have with those salts. The
+// Conditions are not changed.
+func (s *Salts) With(scale, multivalentConc float64) *Conditions {
 	d := NominalDrawn()
-	if c.drawn != nil {
-		d = *c.drawn
+	if s.c.drawn != nil {
+		d = *s.c.drawn
 	}
 	d.SaltFactor *= scale
 	d.MultivalentConc = multivalentConc
-	out := *c
+	out := *s.c
+	out.anchor = s.anchor
 	out.Rederive(d)
+	out.anchor = nil
 	return &out
 }

@@ -32,8 +32,10 @@ type Case struct {
 		psi      float64
 	}
 
-	// zetaScale is the present zeta potential over the one Rederive gives
-	// at the present salts (1 at the nominal inputs; a draw's error of the
-	// estimate otherwise), worked out once by saltPair.
+	// salts re-derives the conditions at a search's trial salts, and
+	// zetaScale is the present zeta potential over the one it gives at the
+	// present salts (1 at the nominal inputs; a draw's error of the
+	// estimate otherwise); saltPair sets both on its first call.
+	salts     *input.Salts
 	zetaScale float64
 }

@@ -585,17 +585,17 @@ const regulatedText = "; the potential follows the salt through the site model"
 
 // saltPair is the pair with every stated salt scaled by scale and, unless
 // multivalentConc is NaN, the multivalent salt at multivalentConc (mol/m^3),
-// all re-derived as Resolve does (input.Conditions.WithSalts): the Debye
+// all re-derived as Resolve does (input.Salts): the Debye
 // length, the ion mixture of the far field, the counter-ion valence and
 // the potential the site model gives there, times zetaScale.
 func (cs *Case) saltPair(scale, multivalentConc float64) physics.Pair {
-	if cs.zetaScale == 0 {
-		cs.zetaScale = 1
-		if r := cs.Cond.Zeta / cs.Cond.WithSalts(1, math.NaN()).Zeta; r > 0 && !math.IsInf(r, 0) {
+	if cs.salts == nil {
+		cs.salts, cs.zetaScale = cs.Cond.Salts(), 1
+		if r := cs.Cond.Zeta / cs.salts.With(1, math.NaN()).Zeta; r > 0 && !math.IsInf(r, 0) {
 			cs.zetaScale = r
 		}
 	}
-	c := cs.Cond.WithSalts(scale, multivalentConc)
+	c := cs.salts.With(scale, multivalentConc)
 	p := cs.Pair.WithIonicStrength(math.Max(c.IonicStrength, ionicStrengthFloor(cs)))
 	p.Valence = max(c.CounterValence, 1)
 	if zeta := c.Zeta * cs.zetaScale; !math.IsNaN(zeta) && !math.IsInf(zeta, 0) {
