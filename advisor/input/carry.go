@@ -118,12 +118,13 @@ const anchorSaltMM = 1.0
 // zeta potentials; the estimate was drawn from such measurements. For a
 // 1-pK surface the estimate is taken about the model's point of zero charge
 // (ZeroPointPH), so that both vanish at the same pH. reference is the
-// estimate in the anchor liquid; ok is false without a zero point or where
-// the ratio is undefined.
-func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, ok bool) {
+// estimate in the anchor liquid and st the site model's state in the
+// product at pH; ok is false without a zero point or where the ratio is
+// undefined.
+func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, st physics.SurfaceState, ok bool) {
 	zero := c.ZeroPointPH()
 	if math.IsNaN(zero) {
-		return math.NaN(), math.NaN(), false
+		return math.NaN(), math.NaN(), st, false
 	}
 	reference = physics.SurfacePotentialFromPH(pH, zero, c.StorageTempK)
 	anchor := resolveMeasuredIn(&ZetaLiquid{PH: &pH, Electrolytes: []Electrolyte{{Formula: "KCl", ConcentrationMM: ptr(anchorSaltMM)}}},
@@ -131,7 +132,8 @@ func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, ok b
 	zetaAt := func(pH float64) (inProduct, inAnchor float64) {
 		return c.SurfaceState(pH).Zeta, c.Sites.Surface.State(pH, anchor.ions, c.Liquid.Permittivity, anchor.tempK).Zeta
 	}
-	inProduct, inAnchor := zetaAt(pH)
+	st = c.SurfaceState(pH)
+	inProduct, inAnchor := st.Zeta, c.anchorZeta(pH, anchor)
 	if !(math.Abs(inAnchor) > minAnchorPotential) {
 		// Near the point of zero charge both potentials vanish together:
 		// their ratio is that of their slopes in pH.
@@ -141,9 +143,22 @@ func (c *Conditions) anchoredEstimate(pH float64) (zeta, reference float64, ok b
 	}
 	ratio := inProduct / inAnchor
 	if math.IsNaN(ratio) || math.IsInf(ratio, 0) {
-		return math.NaN(), reference, false
+		return math.NaN(), reference, st, false
 	}
-	return reference * ratio, reference, true
+	return reference * ratio, reference, st, true
+}
+
+// anchorZeta is the site model's slip-plane potential at pH in the anchor
+// liquid, from the memo of Salts when it holds that pH.
+func (c *Conditions) anchorZeta(pH float64, anchor *measuredIn) float64 {
+	if m := c.anchor; m != nil && m.set && m.pH == pH {
+		return m.zeta
+	}
+	zeta := c.Sites.Surface.State(pH, anchor.ions, c.Liquid.Permittivity, anchor.tempK).Zeta
+	if m := c.anchor; m != nil {
+		m.pH, m.zeta, m.set = pH, zeta, true
+	}
+	return zeta
 }
 
 // Near the point of zero charge, where the site model's slip-plane potential

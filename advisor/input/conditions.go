@@ -76,6 +76,8 @@ type Conditions struct {
 	Criteria Acceptance
 
 	derived *derivation // what the ions and zeta potential were derived from, for Rederive
+	drawn   *Drawn      // what Rederive last derived from, nil for the nominal conditions
+	anchor  *anchorMemo // set only while Salts.With re-derives
 }
 
 // SurfaceSites is the single-site basic Stern surface of the material
@@ -100,7 +102,7 @@ func (c *Conditions) SurfaceState(pH float64) physics.SurfaceState {
 // isoelectric point.
 func (c *Conditions) EstimatedPotential(pH float64) float64 {
 	if c.Sites != nil {
-		if zeta, _, ok := c.anchoredEstimate(pH); ok {
+		if zeta, _, _, ok := c.anchoredEstimate(pH); ok {
 			return zeta
 		}
 		return c.SurfaceState(pH).Zeta

@@ -2,6 +2,8 @@ package input
 
 import (
 	"math"
+
+	"colloidtriage/physics"
 )
 
 // derivation is what Resolve derived the ions, the surface and the zeta
@@ -20,20 +22,24 @@ type derivation struct {
 // Drawn are the primary values of a Monte Carlo draw that Rederive derives
 // from, besides those the Conditions hold themselves (pH, temperature,
 // isoelectric point, radius, viscosity): a factor on every stated salt
-// concentration, and the zeta potential (mV) or electrophoretic mobility
-// (um cm/(V s)) as measured in its own liquid, NaN to keep the request's.
+// concentration, the concentration of the multivalent salt alone (mol/m^3;
+// a remedy's trial value, the other ions kept), and the zeta potential (mV)
+// or electrophoretic mobility (um cm/(V s)) as measured in its own liquid;
+// NaN keeps the request's (for the multivalent salt, SaltFactor's).
 type Drawn struct {
-	SaltFactor       float64
-	ZetaMV, Mobility float64
+	SaltFactor                        float64
+	MultivalentConc, ZetaMV, Mobility float64
 }
 
 // NominalDrawn moves nothing.
-func NominalDrawn() Drawn { return Drawn{SaltFactor: 1, ZetaMV: math.NaN(), Mobility: math.NaN()} }
+func NominalDrawn() Drawn {
+	return Drawn{SaltFactor: 1, MultivalentConc: math.NaN(), ZetaMV: math.NaN(), Mobility: math.NaN()}
+}
 
 // Rederive recomputes what Resolve derived from the values a draw moved,
 // the same way Resolve does: the ions of the medium (its salts times
-// d.SaltFactor, buffers and water at the drawn pH and temperature), the
-// multivalent salt, the site-binding surface (a stated isoelectric point is
+// d.SaltFactor, the multivalent salt at d.MultivalentConc when given,
+// buffers and water at the drawn pH and temperature), the multivalent salt, the site-binding surface (a stated isoelectric point is
 // the point of zero charge of a 1-pK surface), and the zeta potential
 // (measured or from mobility, carried from the liquid it was measured in,
 // or estimated at the drawn pH, ions and temperature), with the surface
@@ -44,11 +50,20 @@ func (c *Conditions) Rederive(d Drawn) {
 	if r == nil {
 		return
 	}
+	c.drawn = &d
 	m := r.medium
 	if m.PH != nil {
 		m.PH = &c.PH
 	}
 	resolveElectrolyte(&m, "/medium", c, d.SaltFactor, &Error{}, nil)
+	if !math.IsNaN(d.MultivalentConc) && c.MultivalentSalt != "" {
+		c.MultivalentConc = math.Max(d.MultivalentConc, 0)
+		c.Ions = c.IonsWithMultivalent(c.MultivalentConc)
+		c.IonicStrength = physics.IonicStrength(c.Ions)
+		if c.Liquid.Aqueous && m.PH == nil {
+			c.IonicStrength = max(c.IonicStrength, AutoionisationMolM3)
+		}
+	}
 	c.Sites = r.sites
 	if r.iepStated && c.Sites != nil && c.Sites.Model != "silica" && c.IsoelectricPH != c.Sites.Surface.PK {
 		s := *c.Sites
@@ -69,4 +84,42 @@ func (c *Conditions) Rederive(d Drawn) {
 	c.Zeta, c.ZetaSource, c.Henry = math.NaN(), "", math.NaN()
 	c.SurfaceCharge, c.DiffusePotential = math.NaN(), math.NaN()
 	resolveZeta(&p, meas, c, nil)
+}
+
+// Salts re-derives copies of one Conditions with their salts changed, for
+// a remedy's search: see Salts.With.
+type Salts struct {
+	c      *Conditions
+	anchor *anchorMemo
+}
+
+// anchorMemo is the site model's slip-plane potential in the anchor liquid
+// of the zeta estimate (see anchoredEstimate) at pH, which no change of the
+// product's salts moves: Salts works it out once.
+type anchorMemo struct {
+	pH, zeta float64
+	set      bool
+}
+
+// Salts returns the re-deriver of copies of c with changed salts.
+func (c *Conditions) Salts() *Salts { return &Salts{c: c, anchor: &anchorMemo{}} }
+
+// With is a copy of the Conditions re-derived by Rederive from the values of
+// their own draw (none for the nominal conditions) with every stated salt
+// scaled by scale more and, unless multivalentConc is NaN, the multivalent
+// salt at multivalentConc (mol/m^3): the ions, the multivalent salt and the
+// zeta potential the conditions would have with those salts. The
+// Conditions are not changed.
+func (s *Salts) With(scale, multivalentConc float64) *Conditions {
+	d := NominalDrawn()
+	if s.c.drawn != nil {
+		d = *s.c.drawn
+	}
+	d.SaltFactor *= scale
+	d.MultivalentConc = multivalentConc
+	out := *s.c
+	out.anchor = s.anchor
+	out.Rederive(d)
+	out.anchor = nil
+	return &out
 }

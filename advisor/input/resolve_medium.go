@@ -238,8 +238,7 @@ func resolveZeta(p *Particles, meas *measuredIn, c *Conditions, n *Notes) {
 		carryZeta(c, meas, n)
 	case c.Sites != nil && !math.IsNaN(c.PH):
 		c.ZetaSource = "estimated"
-		if zeta, reference, ok := c.anchoredEstimate(c.PH); ok {
-			st := c.SurfaceState(c.PH)
+		if zeta, reference, st, ok := c.anchoredEstimate(c.PH); ok {
 			c.Zeta, c.SurfaceCharge, c.DiffusePotential = zeta, st.Charge, st.DiffusePotential
 			n.Add("zeta potential not measured: %s ESTIMATED: the pH-and-isoelectric-point estimate (%s at pH %g about the zero point %g, taken as measured in %g mM of 1:1 salt) scaled to the product's ions (ionic strength %s) by the ratio of the slip-plane potentials of %s in the two liquids (the model's own level runs two to three times above measured zeta potentials); surface charge %s, diffuse-layer potential %s of the model; measure it to confirm",
 				number.Quantity(c.Zeta*1e3, "mV"), number.Quantity(reference*1e3, "mV"), c.PH, c.ZeroPointPH(), anchorSaltMM,

@@ -31,4 +31,11 @@ type Case struct {
 		done, ok bool
 		psi      float64
 	}
+
+	// salts re-derives the conditions at a search's trial salts, and
+	// zetaScale is the present zeta potential over the one it gives at the
+	// present salts (1 at the nominal inputs; a draw's error of the
+	// estimate otherwise); saltPair sets both on its first call.
+	salts     *input.Salts
+	zetaScale float64
 }

@@ -216,13 +216,25 @@ func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
 	floor := ionicStrengthFloor(cs)
 	kT := physics.Boltzmann * c.StorageTempK
 	top := c.IonicStrength
+	pairAt := func(logI float64) physics.Pair { return cs.Pair.WithIonicStrength(math.Pow(10, logI)) }
+	regulated := cs.regulated()
+	if regulated {
+		pairAt = func(logI float64) physics.Pair { return cs.saltPair(math.Pow(10, logI)/c.IonicStrength, math.NaN()) }
+	}
+	start := math.Log10(top)
 	if !cs.HasBarrier && cs.Pair.StericThickness == 0 {
 		// No barrier at the present ionic strength: the margin has no slope
 		// there, so the search starts where the barrier meets its criterion.
 		// With steric layers the margin is the contact energy there, which
 		// has a slope, and the layers may shield the pair above that point.
+		// When the potential follows the salt, it rises as the salt falls:
+		// the barrier meets its criterion above that point, which is only
+		// where the search starts.
 		I, ok := physics.CriticalIonicStrength(cs.Pair, c.Criteria.MinBarrierKT*kT, cs.LastBarrier)
 		switch {
+		case regulated && ok && I < top && I > floor:
+			start = math.Log10(I)
+		case regulated:
 		case !ok && I == 0:
 			return 0, false
 		case ok && I < top:
@@ -234,12 +246,12 @@ func largestAcceptableIonicStrength(cs *Case) (float64, bool) {
 	}
 	lo, hi := math.Log10(floor), math.Log10(top)
 	a := peakAnchor{cs: cs}
-	exact := func(logI float64) (float64, float64) { return a.exact(cs.Pair.WithIonicStrength(math.Pow(10, logI))) }
+	exact := func(logI float64) (float64, float64) { return a.exact(pairAt(logI)) }
 	aimed := func(logI float64) (float64, float64) {
-		m, slope := a.estimated(cs.Pair.WithIonicStrength(math.Pow(10, logI)))
+		m, slope := a.estimated(pairAt(logI))
 		return m + slope*ionicStrengthTol*5/8, slope // slope < 0: aimed into the acceptable side
 	}
-	x := hi
+	x := min(start, hi)
 search:
 	for round := 0; round < 3; round++ {
 		next, found := approachRoot(secantRefined(aimed), x, lo, hi, ionicStrengthTol/8)
@@ -330,11 +342,15 @@ func solveIonicStrength(cs *Case) (Target, string, bool) {
 	if !cs.HasPair {
 		return Target{}, "no surface potential known", false
 	}
+	crit := stabilityCriterion(cs)
+	if cs.regulated() {
+		crit += regulatedText
+	}
 	I, ok := largestAcceptableIonicStrength(cs)
 	if !ok {
-		return Target{}, stabilityCriterion(cs) + ": not reached even at the lowest ionic strength", false
+		return Target{}, crit + ": not reached even at the lowest ionic strength", false
 	}
-	return Target{"medium.ionic_strength_mM", "<=", I, "mM"}, stabilityCriterion(cs), true
+	return Target{"medium.ionic_strength_mM", "<=", I, "mM"}, crit, true
 }
 
 func solveSurfaceCharge(cs *Case) (Target, string, bool) {
@@ -459,6 +475,10 @@ func solveMultivalent(cs *Case) (Target, string, bool) {
 	}
 	withConc := func(conc float64) physics.Pair { return MultivalentPair(cs.Pair, c, conc) }
 	crit := stabilityCriterion(cs) + "; the double layer's far field follows the ion mixture at each concentration"
+	if cs.regulated() {
+		withConc = func(conc float64) physics.Pair { return cs.saltPair(1, conc) }
+		crit += regulatedText
+	}
 	conc := c.MultivalentConc
 	a := peakAnchor{cs: cs}
 	if m, _ := a.estimated(withConc(conc)); m >= 0 {
@@ -545,4 +565,41 @@ func solveControlledFlocculation(cs *Case) (Target, string, bool) {
 		return Target{}, crit + ": no surface potential known or the barrier stays high", false
 	}
 	return Target{"|particles.zeta_mV|", "<=", psi * 1e3, "mV"}, crit, true
+}
+
+// regulated reports whether the salt searches let the surface potential
+// follow the salt: a zeta potential estimated from the material's
+// site-binding model, or carried to the product through it, is set by the
+// surface charge the sites regulate in the product's ions, so less salt or
+// less of a multivalent cation lets it recover (charge regulation; Healy &
+// White, Adv. Colloid Interface Sci. 9 (1978) 303). A zeta potential
+// measured in the product is a fact of that liquid and stays fixed.
+func (cs *Case) regulated() bool {
+	c := cs.Cond
+	return c.Sites != nil && (c.ZetaSource == "estimated" || c.ZetaSource == "carried")
+}
+
+// regulatedText is what the criterion says when the potential follows the
+// salt.
+const regulatedText = "; the potential follows the salt through the site model"
+
+// saltPair is the pair with every stated salt scaled by scale and, unless
+// multivalentConc is NaN, the multivalent salt at multivalentConc (mol/m^3),
+// all re-derived as Resolve does (input.Salts): the Debye
+// length, the ion mixture of the far field, the counter-ion valence and
+// the potential the site model gives there, times zetaScale.
+func (cs *Case) saltPair(scale, multivalentConc float64) physics.Pair {
+	if cs.salts == nil {
+		cs.salts, cs.zetaScale = cs.Cond.Salts(), 1
+		if r := cs.Cond.Zeta / cs.salts.With(1, math.NaN()).Zeta; r > 0 && !math.IsInf(r, 0) {
+			cs.zetaScale = r
+		}
+	}
+	c := cs.salts.With(scale, multivalentConc)
+	p := cs.Pair.WithIonicStrength(math.Max(c.IonicStrength, ionicStrengthFloor(cs)))
+	p.Valence = max(c.CounterValence, 1)
+	if zeta := c.Zeta * cs.zetaScale; !math.IsNaN(zeta) && !math.IsInf(zeta, 0) {
+		p.Potential = zeta
+	}
+	return p.WithIons(c.Ions)
 }
